@@ -1,0 +1,59 @@
+import type { Role } from '@/db/schema'
+import { errorResponse, ForbiddenError, UnauthorizedError } from './errors'
+import { userFromCookieHeader, type SessionUser } from './session'
+
+/** Who may call an entry point: listed roles, any signed-in user, or anyone. */
+export type Access = readonly Role[] | 'signed-in' | 'public'
+
+export interface RouteCtx<P> {
+  user: SessionUser
+  params: P
+}
+
+type NextCtx<P> = { params: Promise<P> }
+
+/** Check a user against a declared access rule; throws 401/403 errors. */
+export function assertAccess(user: SessionUser | null, access: Access): asserts user is SessionUser {
+  if (access === 'public') return
+  if (!user) throw new UnauthorizedError()
+  if (access !== 'signed-in' && !access.includes(user.role))
+    throw new ForbiddenError(`This needs the role ${access.map(roleLabel).join(' or ')}; you are signed in as ${roleLabel(user.role)}`)
+}
+
+/**
+ * Wrap a route handler with its declared access: every `app/api` handler is built with this, so
+ * the rule is visible in review and the access-matrix test can read it off the export.
+ * Errors thrown inside become the one JSON error shape.
+ */
+export function withRole<P = Record<string, string>>(
+  access: Exclude<Access, 'public'>,
+  handler: (req: Request, ctx: RouteCtx<P>) => Promise<Response>,
+) {
+  const route = async (req: Request, ctx: NextCtx<P>): Promise<Response> => {
+    try {
+      const user = await userFromCookieHeader(req.headers.get('cookie'))
+      assertAccess(user, access)
+      return await handler(req, { user, params: await ctx.params })
+    } catch (e) {
+      return errorResponse(e)
+    }
+  }
+  return Object.assign(route, { access })
+}
+
+export const ROLE_LABELS: Record<Role, string> = {
+  admin: 'admin',
+  lead_engineer: 'lead engineer',
+  calibration_engineer: 'calibration engineer',
+  test_driver: 'test driver',
+}
+
+export function roleLabel(role: Role): string {
+  return ROLE_LABELS[role]
+}
+
+/** Roles that may change calibration data. */
+export const EDITORS: readonly Role[] = ['calibration_engineer', 'lead_engineer']
+
+/** Roles that may create and edit vehicle programs. */
+export const PROGRAM_EDITORS: readonly Role[] = ['admin', 'lead_engineer', 'calibration_engineer']

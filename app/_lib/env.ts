@@ -1,0 +1,33 @@
+import { z } from 'zod'
+
+const schema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  NEXTAUTH_SECRET: z.string().min(16, 'NEXTAUTH_SECRET must be at least 16 characters').optional(),
+  NEXTAUTH_URL: z.url('NEXTAUTH_URL must be a full URL such as http://127.0.0.1:3000').optional(),
+  DATABASE_URL: z.string().startsWith('postgres', 'DATABASE_URL must be a postgres:// or postgresql:// URL').optional(),
+  PGLITE_DATA_DIR: z.string().optional(),
+  MAPWRIGHT_DEMO: z.enum(['0', '1']).optional(),
+})
+
+export type Env = z.infer<typeof schema> & { authSecret: string }
+
+let cached: Env | undefined
+
+/** Environment, parsed once; a malformed variable stops the server with a message naming it. */
+export function env(): Env {
+  if (cached) return cached
+  const parsed = schema.safeParse(process.env)
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n')
+    throw new Error(`Mapwright configuration is invalid:\n${lines}`)
+  }
+  const e = parsed.data
+  let authSecret = e.NEXTAUTH_SECRET
+  if (!authSecret) {
+    // Development and tests get a fixed secret; a production server must be given its own.
+    if (e.NODE_ENV === 'production') throw new Error('NEXTAUTH_SECRET is required in production (npm run start sets one up in .data/)')
+    authSecret = 'mapwright-development-secret-not-for-production'
+  }
+  cached = { ...e, authSecret }
+  return cached
+}

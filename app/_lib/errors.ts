@@ -1,0 +1,70 @@
+import { ZodError } from 'zod'
+
+/** A domain error with the HTTP status it maps to; the message is shown to the user as is. */
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+  ) {
+    super(message)
+  }
+}
+export class UnauthorizedError extends HttpError {
+  constructor(message = 'Sign in to continue') {
+    super(401, 'unauthorized', message)
+  }
+}
+export class ForbiddenError extends HttpError {
+  constructor(message = 'Your role may not do this') {
+    super(403, 'forbidden', message)
+  }
+}
+export class NotFoundError extends HttpError {
+  constructor(what: string) {
+    super(404, 'not_found', `${what} was not found`)
+  }
+}
+export class ConflictError extends HttpError {
+  constructor(message: string, details?: unknown) {
+    super(409, 'conflict', message, details)
+  }
+}
+export class ValidationError extends HttpError {
+  constructor(message: string, details?: unknown) {
+    super(400, 'invalid_input', message, details)
+  }
+}
+
+export interface ErrorBody {
+  error: { code: string; message: string; details?: unknown }
+}
+
+export function jsonError(status: number, code: string, message: string, details?: unknown): Response {
+  const body: ErrorBody = { error: { code, message, ...(details === undefined ? {} : { details }) } }
+  return Response.json(body, { status })
+}
+
+/** Map any thrown value to the one error shape; unknown errors are logged and never leak their text. */
+export function errorResponse(e: unknown): Response {
+  if (e instanceof HttpError) return jsonError(e.status, e.code, e.message, e.details)
+  if (e instanceof ZodError) {
+    const issues = e.issues.map((i) => ({ path: i.path.join('.'), message: i.message }))
+    const first = issues[0]
+    const where = first?.path ? `${first.path}: ` : ''
+    return jsonError(400, 'invalid_input', `${where}${first?.message ?? 'Invalid input'}`, { issues })
+  }
+  if (isUniqueViolation(e)) return jsonError(409, 'conflict', 'That already exists')
+  console.error('Unhandled error in route handler', e)
+  return jsonError(500, 'internal', 'Something went wrong on the server; the change was not saved')
+}
+
+/** PostgreSQL unique_violation (23505), possibly wrapped by the driver or Drizzle. */
+export function isUniqueViolation(e: unknown): boolean {
+  for (let cur = e as { code?: string; cause?: unknown } | undefined, i = 0; cur && i < 4; i++) {
+    if (cur.code === '23505') return true
+    cur = cur.cause as typeof cur
+  }
+  return false
+}

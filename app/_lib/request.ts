@@ -1,0 +1,20 @@
+import type { z } from 'zod'
+import { ValidationError } from './errors'
+
+/** Parse a JSON body against a schema; malformed JSON and schema failures become 400s. */
+export async function readJson<S extends z.ZodType>(req: Request, schema: S): Promise<z.infer<S>> {
+  let body: unknown
+  try {
+    body = await req.json()
+  } catch {
+    throw new ValidationError('The request body must be valid JSON')
+  }
+  return schema.parse(body)
+}
+
+/** A positive integer route parameter, or a 404-worthy 400. */
+export function intParam(value: string | undefined, name: string): number {
+  const n = Number(value)
+  if (!Number.isInteger(n) || n <= 0) throw new ValidationError(`${name} must be a positive whole number`)
+  return n
+}

@@ -1,0 +1,13 @@
+import { PROGRAM_EDITORS, withRole } from '@/app/_lib/access'
+import { readJson } from '@/app/_lib/request'
+import { programInputSchema } from '@/app/_schemas/program'
+import { createProgram, listPrograms } from '@/db/queries/programs'
+
+// GET /api/programs — list vehicle programs (any signed-in user)
+export const GET = withRole('signed-in', async () => Response.json({ programs: await listPrograms() }))
+
+// POST /api/programs — create a vehicle program
+export const POST = withRole(PROGRAM_EDITORS, async (req, { user }) => {
+  const input = await readJson(req, programInputSchema)
+  return Response.json({ program: await createProgram(input, user.id) }, { status: 201 })
+})

@@ -1,0 +1,79 @@
+import { asc, eq, sql } from 'drizzle-orm'
+import { getDb } from '../client'
+import { users, type Role } from '../schema'
+
+/** The columns safe to return anywhere: never the password hash. */
+const publicColumns = {
+  id: users.id,
+  email: users.email,
+  name: users.name,
+  role: users.role,
+  disabled: users.disabled,
+  createdAt: users.createdAt,
+}
+
+export type PublicUser = {
+  id: number
+  email: string
+  name: string
+  role: Role
+  disabled: boolean
+  createdAt: Date
+}
+
+export async function listUsers(): Promise<PublicUser[]> {
+  const db = await getDb()
+  return db.select(publicColumns).from(users).orderBy(asc(users.name))
+}
+
+export async function getUserById(id: number): Promise<PublicUser | null> {
+  const db = await getDb()
+  const rows = await db.select(publicColumns).from(users).where(eq(users.id, id))
+  return rows[0] ?? null
+}
+
+/** For sign-in only: the one query that reads the hash. */
+export async function getUserCredentials(email: string) {
+  const db = await getDb()
+  const rows = await db
+    .select({ ...publicColumns, passwordHash: users.passwordHash })
+    .from(users)
+    .where(eq(sql`lower(${users.email})`, email.trim().toLowerCase()))
+  return rows[0] ?? null
+}
+
+export async function createUser(input: {
+  email: string
+  name: string
+  role: Role
+  passwordHash: string
+}): Promise<PublicUser> {
+  const db = await getDb()
+  const [row] = await db
+    .insert(users)
+    .values({ ...input, email: input.email.trim() })
+    .returning(publicColumns)
+  return row
+}
+
+export async function updateUser(
+  id: number,
+  patch: Partial<{ name: string; role: Role; disabled: boolean; passwordHash: string }>,
+): Promise<PublicUser | null> {
+  const db = await getDb()
+  const rows = await db
+    .update(users)
+    .set({ ...patch, updatedAt: new Date() })
+    .where(eq(users.id, id))
+    .returning(publicColumns)
+  return rows[0] ?? null
+}
+
+export async function countActiveAdmins(): Promise<number> {
+  const db = await getDb()
+  const [row] = await db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(users)
+    .where(sql`${users.role} = 'admin' and not ${users.disabled}`)
+  return row.n
+}

@@ -1,0 +1,49 @@
+import { sql } from 'drizzle-orm'
+import type { Db } from './client'
+import { users, vehiclePrograms, type Role } from './schema'
+import { demoTipper, demoTractor } from './demo/programs'
+
+/** The one password of every demo account (demo mode only; listed in the README). */
+export const DEMO_PASSWORD = 'mapwright-demo'
+
+/** Demo accounts of the invented conversion shop "Brackwater Electric Trucks". */
+export const DEMO_USERS: { email: string; name: string; role: Role }[] = [
+  { email: 'admin@brackwater.example', name: 'Ines Admin', role: 'admin' },
+  { email: 'lead@brackwater.example', name: 'Lena Lead', role: 'lead_engineer' },
+  { email: 'lead2@brackwater.example', name: 'Omar Lead', role: 'lead_engineer' },
+  { email: 'calib@brackwater.example', name: 'Cato Calibration', role: 'calibration_engineer' },
+  { email: 'calib2@brackwater.example', name: 'Priya Calibration', role: 'calibration_engineer' },
+  { email: 'calib3@brackwater.example', name: 'Jonas Calibration', role: 'calibration_engineer' },
+  { email: 'driver@brackwater.example', name: 'Dara Driver', role: 'test_driver' },
+  { email: 'driver2@brackwater.example', name: 'Mika Driver', role: 'test_driver' },
+]
+
+export const DEMO_PROGRAMS = [
+  { name: 'BX-64 Tipper', description: 'Demo: 6×4 battery-electric tipper for quarry and site work (invented numbers).', params: demoTipper },
+  { name: 'BX-64 Tractor', description: 'Demo: 6×4 battery-electric tractor with a three-axle semitrailer (invented numbers).', params: demoTractor },
+]
+
+export interface SeedResult {
+  usersAdded: number
+  programsAdded: number
+}
+
+/**
+ * Insert the demo scenario. Idempotent: existing rows (matched by email or name) are left alone,
+ * so running the demo twice never duplicates anything.
+ */
+export async function seedDemo(db: Db, hashPassword: (p: string) => Promise<string>): Promise<SeedResult> {
+  const passwordHash = await hashPassword(DEMO_PASSWORD)
+  const addedUsers = await db
+    .insert(users)
+    .values(DEMO_USERS.map((u) => ({ ...u, passwordHash })))
+    .onConflictDoNothing()
+    .returning({ id: users.id })
+  const [admin] = await db.select({ id: users.id }).from(users).where(sql`lower(${users.email}) = ${DEMO_USERS[0].email}`)
+  const addedPrograms = await db
+    .insert(vehiclePrograms)
+    .values(DEMO_PROGRAMS.map((p) => ({ ...p, createdBy: admin?.id ?? null })))
+    .onConflictDoNothing()
+    .returning({ id: vehiclePrograms.id })
+  return { usersAdded: addedUsers.length, programsAdded: addedPrograms.length }
+}

@@ -1,0 +1,31 @@
+/**
+ * A stable fingerprint of a map's content, so two revisions, a file and a flashed header can
+ * be matched without comparing tables cell by cell.
+ */
+import { MapInputError } from './errors'
+import { sha256Hex } from './sha256'
+import type { MapTable } from './table'
+
+/**
+ * Canonical JSON: keys in the fixed order kind, rowAxis, colAxis, values; no whitespace;
+ * numbers as shortest round-trip decimal (ECMAScript String(n), so −0 becomes 0, and
+ * 1e21 stays "1e+21"). Throws for a non-finite number, which has no JSON form.
+ * @example canonicalJson({ kind: 'drive', rowAxis: [0, 100], colAxis: [0, 50], values: [[0, 0], [1500, 900.5]] })
+ *          // '{"kind":"drive","rowAxis":[0,100],"colAxis":[0,50],"values":[[0,0],[1500,900.5]]}'
+ */
+export function canonicalJson(table: MapTable): string {
+  const num = (n: number) => {
+    if (!Number.isFinite(n)) throw new MapInputError('not-finite', `canonical JSON needs finite numbers, got ${n}`)
+    return String(n)
+  }
+  const list = (a: readonly number[]) => '[' + a.map(num).join(',') + ']'
+  return `{"kind":${JSON.stringify(table.kind)},"rowAxis":${list(table.rowAxis)},"colAxis":${list(table.colAxis)},"values":[${table.values.map(list).join(',')}]}`
+}
+
+/**
+ * SHA-256 (hex) of the UTF-8 bytes of canonicalJson(table).
+ * @example checksum(t) === sha256Hex(canonicalJson(t)) // true
+ */
+export function checksum(table: MapTable): string {
+  return sha256Hex(canonicalJson(table))
+}

@@ -1,0 +1,80 @@
+/**
+ * Maps as CSV, the layout any spreadsheet opens:
+ *
+ *   pedal_pct\speed_kmh,0,10,20
+ *   0,0,0,0
+ *   100,2000,1800,1200
+ *
+ * First row: a corner cell, then the speed breakpoints (km/h). Each further row: a pedal
+ * breakpoint (%), then the torque requests (N·m) at those speeds.
+ */
+import { MapFormatError } from './errors'
+import { splitCsv, type CsvLine } from './csv-split'
+import { formatExact, parseExact } from './number-format'
+import { MAX_BREAKPOINTS, MIN_BREAKPOINTS, type MapKind, type MapTable } from './table'
+
+/** Corner cell written by toCsv, per kind; it names both axes for a reader of the file. */
+export const CSV_CORNER: Readonly<Record<MapKind, string>> = { drive: 'pedal_pct\\speed_kmh', regen: 'brake_pedal_pct\\speed_kmh' }
+
+/**
+ * CSV text with `,` delimiter, LF line ends and a final newline. Numbers use the shortest
+ * representation that reads back to the same double, so fromCsv(toCsv(t), t.kind) equals t.
+ * @example toCsv({ kind: 'drive', rowAxis: [0, 100], colAxis: [0, 50], values: [[0, 0], [1500, 900.5]] })
+ *          // "pedal_pct\\speed_kmh,0,50\n0,0,0\n100,1500,900.5\n"
+ */
+export function toCsv(table: MapTable): string {
+  const lines = [[CSV_CORNER[table.kind], ...table.colAxis.map(formatExact)].join(',')]
+  table.rowAxis.forEach((p, r) => lines.push([formatExact(p), ...table.values[r].map(formatExact)].join(',')))
+  return lines.join('\n') + '\n'
+}
+
+function number(text: string, delimiter: string, line: number, column: number): number {
+  // With `;` as delimiter the file may come from a decimal-comma locale: "12,5" means 12.5.
+  const t = delimiter === ';' && !text.includes('.') ? text.replace(/^(\s*[+-]?\d*),(\d)/, '$1.$2') : text
+  const n = parseExact(t)
+  if (n === undefined) {
+    const shown = text.trim() === '' ? 'an empty cell' : `'${text.trim()}'`
+    throw new MapFormatError('not-a-number', `${shown} is not a number`, line, column)
+  }
+  return n
+}
+
+function checkIncreasing(prev: number | undefined, v: number, what: string, line: number, column: number): void {
+  if (prev !== undefined && v <= prev)
+    throw new MapFormatError('axis-order', `${what} breakpoint ${formatExact(v)} is not greater than the previous one (${formatExact(prev)})`, line, column)
+}
+
+/**
+ * Read a map from CSV. Accepts `,` or `;` delimiters, CRLF, a BOM and trailing blank lines.
+ * Throws MapFormatError (with 1-based line and column) for anything else: a non-number,
+ * a ragged row, non-increasing breakpoints, an empty file, too few or too many rows or columns.
+ * The corner cell is free text, but a corner that names the other kind is refused.
+ * @example fromCsv('pedal_pct\\speed_kmh;0;50\n0;0;0\n100;1500;900,5\n', 'drive').values[1][1] // 900.5
+ */
+export function fromCsv(text: string, kind: MapKind): MapTable {
+  const { delimiter, lines } = splitCsv(text)
+  const [header, ...body] = lines
+  const other: MapKind = kind === 'drive' ? 'regen' : 'drive'
+  if (header.cells[0].trim() === CSV_CORNER[other])
+    throw new MapFormatError('kind-mismatch', `the corner cell says this is a ${other} map, but a ${kind} map was asked for`, 1, 1)
+  const colAxis = header.cells.slice(1).map((t, i) => number(t, delimiter, 1, i + 2))
+  colAxis.forEach((v, i) => checkIncreasing(colAxis[i - 1], v, 'speed', 1, i + 2))
+  if (colAxis.length < MIN_BREAKPOINTS || colAxis.length > MAX_BREAKPOINTS)
+    throw new MapFormatError('column-count', `the first row has ${colAxis.length} speed breakpoints; ${MIN_BREAKPOINTS} to ${MAX_BREAKPOINTS} are needed after the corner cell`, 1, Math.min(colAxis.length, MAX_BREAKPOINTS) + 2)
+  if (body.length < MIN_BREAKPOINTS || body.length > MAX_BREAKPOINTS) {
+    const lastLine = lines[lines.length - 1].line
+    throw new MapFormatError('row-count', `the file has ${body.length} pedal rows; ${MIN_BREAKPOINTS} to ${MAX_BREAKPOINTS} are needed below the speed row`, body.length > MAX_BREAKPOINTS ? body[MAX_BREAKPOINTS].line : lastLine + 1, 1)
+  }
+  const rowAxis: number[] = []
+  const values = body.map((l: CsvLine) => {
+    if (l.cells.length !== header.cells.length) {
+      const col = Math.min(l.cells.length, header.cells.length) + 1
+      throw new MapFormatError('ragged-row', `the row has ${l.cells.length} cells but the first row has ${header.cells.length}`, l.line, col)
+    }
+    const pedal = number(l.cells[0], delimiter, l.line, 1)
+    checkIncreasing(rowAxis[rowAxis.length - 1], pedal, 'pedal', l.line, 1)
+    rowAxis.push(pedal)
+    return l.cells.slice(1).map((t, i) => number(t, delimiter, l.line, i + 2))
+  })
+  return { kind, rowAxis, colAxis, values }
+}

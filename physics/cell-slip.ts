@@ -1,0 +1,112 @@
+/**
+ * Quasi-steady slip prediction for one map cell: motor torque → wheel force → drive-axle load
+ * (with load transfer) → force ratio Fx/Fz → slip on the rising Magic Formula branch.
+ */
+import { driveAxleLimitN, driveAxleLoadN } from './axle-model'
+import { deliverableAtShaft } from './envelope'
+import { motorTorqueFromWheel, overallRatio, wheelTorqueFromMotor } from './driveline'
+import { PhysicsInputError, requireFinite } from './errors'
+import { axleLoadsFor } from './load-case'
+import { SURFACES, type Surface, type SurfaceId } from './surfaces'
+import { gradeCos } from './traction'
+import { checkCoeffs, peakForceRatio, slipForForceRatio } from './tyre'
+import { kmhToMps } from './units'
+import type { LoadCase, VehicleParams } from './vehicle'
+
+/** Inputs that stay fixed across the cells of a map. */
+export interface CellContext {
+  vehicle: VehicleParams
+  loadCase: LoadCase
+  surface: Surface | SurfaceId
+  /** Road grade, rad (uphill > 0). Default 0. */
+  gradeRad?: number
+  /** Gear, 0 = lowest (default). */
+  gearIndex?: number
+  /** Clip the requested torque to the motor/battery envelope first (default true). */
+  applyEnvelope?: boolean
+}
+
+/** Result for one cell. Forces in N, torques in N·m at the motor shaft (negative = regen). */
+export interface CellSlipResult {
+  requestedTorqueNm: number
+  /** Torque after the motor/battery envelope (equals the request when applyEnvelope is false). */
+  deliveredTorqueNm: number
+  envelopeLimited: boolean
+  /** Longitudinal force of the drive axle on the road, driving > 0, braking < 0. */
+  wheelForceN: number
+  driveAxleLoadN: number
+  /** Traction (drive) or lock-up (regen) force limit, positive. */
+  limitForceN: number
+  /** |wheelForceN| / limitForceN; > 1 means beyond the tyre's peak. */
+  utilisation: number
+  /** Predicted slip ratio, or null when beyond the peak (spin or lock). */
+  slip: number | null
+  spin: boolean
+  lock: boolean
+  /** Motor torque that would just reach the limit (positive drive, negative regen). */
+  motorTorqueAtLimitNm: number
+}
+
+/** Resolves a surface id or object. @example resolveSurface('ice').coeffs.D // 0.1 */
+export function resolveSurface(s: Surface | SurfaceId): Surface {
+  const surface = typeof s === 'string' ? SURFACES[s] : s
+  if (!surface) throw new PhysicsInputError('surface', `unknown surface "${String(s)}"`)
+  checkCoeffs(surface.coeffs, 'surface.coeffs')
+  return surface
+}
+
+/**
+ * Validates once and returns a fast evaluator (motorTorqueNm, roadSpeedKmh) → {@link CellSlipResult}.
+ * @example const at = prepareCellSlip({ vehicle: truck, loadCase: 'laden', surface: 'wet-asphalt' }); at(1500, 20).slip
+ */
+export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadSpeedKmh: number) => CellSlipResult {
+  const { vehicle, gearIndex = 0, applyEnvelope = true } = ctx
+  const { model } = axleLoadsFor(vehicle, ctx.loadCase)
+  const surface = resolveSurface(ctx.surface)
+  const coeffs = surface.coeffs
+  const cosG = gradeCos(ctx.gradeRad ?? 0)
+  const G = overallRatio(vehicle, gearIndex)
+  const R = vehicle.wheelRadiusM
+  const mu = peakForceRatio(coeffs)
+  const driveLimit = driveAxleLimitN(model, mu, cosG, 'drive')
+  const regenLimit = driveAxleLimitN(model, mu, cosG, 'regen')
+  const atDrive = motorTorqueFromWheel(vehicle, driveLimit * R, gearIndex)
+  const atRegen = motorTorqueFromWheel(vehicle, -regenLimit * R, gearIndex)
+  return (motorTorqueNm, roadSpeedKmh) => {
+    requireFinite('motorTorqueNm', motorTorqueNm)
+    requireFinite('roadSpeedKmh', roadSpeedKmh)
+    const regen = motorTorqueNm < 0
+    let delivered = motorTorqueNm
+    if (applyEnvelope) {
+      const cap = deliverableAtShaft(vehicle, (kmhToMps(roadSpeedKmh) / R) * G, regen ? 'regen' : 'drive')
+      delivered = Math.max(-cap, Math.min(cap, motorTorqueNm))
+    }
+    const force = wheelTorqueFromMotor(vehicle, delivered, gearIndex) / R
+    const load = driveAxleLoadN(model, force, cosG)
+    const limit = regen ? regenLimit : driveLimit
+    const utilisation = Math.abs(force) / limit
+    const slip = load > 0 ? slipForForceRatio(force / load, coeffs) : force === 0 ? 0 : null
+    const beyond = slip === null
+    return {
+      requestedTorqueNm: motorTorqueNm,
+      deliveredTorqueNm: delivered,
+      envelopeLimited: delivered !== motorTorqueNm,
+      wheelForceN: force,
+      driveAxleLoadN: load,
+      limitForceN: limit,
+      utilisation,
+      slip,
+      spin: beyond && !regen,
+      lock: beyond && regen,
+      motorTorqueAtLimitNm: regen ? atRegen : atDrive,
+    }
+  }
+}
+
+/**
+ * Slip prediction for one cell (validates every call; use {@link prepareCellSlip} or slipGrid for many cells).
+ * @example cellSlip({ vehicle: truck, loadCase: 'laden', surface: 'ice', motorTorqueNm: 2000, roadSpeedKmh: 5 }).spin
+ */
+export function cellSlip(args: CellContext & { motorTorqueNm: number; roadSpeedKmh: number }): CellSlipResult {
+  return prepareCellSlip(args)(args.motorTorqueNm, args.roadSpeedKmh)
+}

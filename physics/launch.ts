@@ -1,0 +1,56 @@
+/** Standing (or rolling) launch on a drive map: pedal trace → map torque → envelope → tyre → vehicle. */
+import { checkPedalTrace, pedalAt, type PedalTrace } from './pedal'
+import { runSimulation, type SimOptions, type SimSample } from './sim-core'
+import { checkMap, lookup, type TorqueMap } from './table-lookup'
+import { PhysicsInputError, requireNonNegative } from './errors'
+
+/** Launch inputs. `map.kind` must be `'drive'`; map values are motor-shaft torque, N·m. */
+export interface LaunchOptions extends SimOptions {
+  map: TorqueMap
+  pedal: PedalTrace
+  /** Initial road speed, km/h (default 0). */
+  initialSpeedKmh?: number
+}
+
+/** Launch summary figures (times in s, null when the speed is not reached within durationS). */
+export interface LaunchSummary {
+  timeTo30KmhS: number | null
+  timeTo50KmhS: number | null
+  finalSpeedKmh: number
+  peakSlip: number
+  /** Slip at the Magic Formula peak for the surface (Infinity for a monotone curve). */
+  tyrePeakSlip: number
+  timeBeyondPeakSlipS: number
+  peakAccelMps2: number
+  peakJerkMps3: number
+}
+
+/** Launch result: time series and summary. */
+export interface LaunchResult { samples: SimSample[]; summary: LaunchSummary }
+
+/**
+ * Simulates a launch. Drive-map torque is looked up at the pedal % and the vehicle road speed,
+ * clipped to the motor envelope and battery discharge power at the actual motor speed.
+ * @example simulateLaunch({ vehicle: truck, loadCase: 'laden', surface: 'wet-asphalt', map: driveMap,
+ *   pedal: { kind: 'step', pedalPct: 100 }, durationS: 30 }).summary.timeTo50KmhS
+ */
+export function simulateLaunch(o: LaunchOptions): LaunchResult {
+  if (o.map.kind !== 'drive') throw new PhysicsInputError('map.kind', 'a launch needs a drive map')
+  checkMap(o.map)
+  checkPedalTrace(o.pedal)
+  const v0 = requireNonNegative('initialSpeedKmh', o.initialSpeedKmh ?? 0) / 3.6
+  const run = runSimulation(o, (t) => pedalAt(o.pedal, t), (p, kmh) => lookup(o.map, p, kmh), v0, [30, 50])
+  return {
+    samples: run.samples,
+    summary: {
+      timeTo30KmhS: run.crossings[0],
+      timeTo50KmhS: run.crossings[1],
+      finalSpeedKmh: run.samples[run.samples.length - 1].speedKmh,
+      peakSlip: run.peakSlip,
+      tyrePeakSlip: run.tyrePeakSlip,
+      timeBeyondPeakSlipS: run.timeBeyondPeakDriveS,
+      peakAccelMps2: run.samples.reduce((m, s) => Math.max(m, s.accelMps2), 0),
+      peakJerkMps3: run.peakJerkMps3,
+    },
+  }
+}

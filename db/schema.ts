@@ -12,9 +12,9 @@ import {
 } from 'drizzle-orm/pg-core'
 import type { VehicleParams } from '../physics/vehicle'
 
-/** The four roles; kept as text with a check constraint so adding one is a plain migration. */
-export const ROLES = ['admin', 'lead_engineer', 'calibration_engineer', 'test_driver'] as const
-export type Role = (typeof ROLES)[number]
+import { ROLES, type Role } from './roles'
+
+export { ROLES, type Role }
 
 /** What a revision's stored table holds (the `maps/` MapTable shape). */
 export interface StoredTable {

@@ -1,4 +1,4 @@
-import type { Role } from '@/db/schema'
+import { roleLabel, type Role } from './roles'
 import { errorResponse, ForbiddenError, UnauthorizedError } from './errors'
 import { userFromCookieHeader, type SessionUser } from './session'
 
@@ -40,20 +40,3 @@ export function withRole<P = Record<string, string>>(
   }
   return Object.assign(route, { access })
 }
-
-export const ROLE_LABELS: Record<Role, string> = {
-  admin: 'admin',
-  lead_engineer: 'lead engineer',
-  calibration_engineer: 'calibration engineer',
-  test_driver: 'test driver',
-}
-
-export function roleLabel(role: Role): string {
-  return ROLE_LABELS[role]
-}
-
-/** Roles that may change calibration data. */
-export const EDITORS: readonly Role[] = ['calibration_engineer', 'lead_engineer']
-
-/** Roles that may create and edit vehicle programs. */
-export const PROGRAM_EDITORS: readonly Role[] = ['admin', 'lead_engineer', 'calibration_engineer']

@@ -1,7 +1,7 @@
 import 'server-only'
 import { cookies } from 'next/headers'
 import { redirect } from 'next/navigation'
-import type { Role } from '@/db/schema'
+import type { Role } from '@/app/_lib/roles'
 import { userFromCookieHeader, type SessionUser } from './session'
 
 /**

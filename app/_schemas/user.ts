@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { ROLES } from '@/db/schema'
+import { ROLES } from '@/app/_lib/roles'
 
 export const roleSchema = z.enum(ROLES, { error: `Role must be one of ${ROLES.join(', ')}` })
 

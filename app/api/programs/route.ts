@@ -1,4 +1,5 @@
-import { PROGRAM_EDITORS, withRole } from '@/app/_lib/access'
+import { withRole } from '@/app/_lib/access'
+import { PROGRAM_EDITORS } from '@/app/_lib/roles'
 import { readJson } from '@/app/_lib/request'
 import { programInputSchema } from '@/app/_schemas/program'
 import { createProgram, listPrograms } from '@/db/queries/programs'

@@ -1,7 +1,10 @@
 import { defineConfig } from 'vitest/config'
 import path from 'node:path'
 
-const alias = { '@': path.resolve(__dirname) }
+const alias = {
+  '@': path.resolve(__dirname),
+  'server-only': path.resolve(__dirname, 'tests/support/server-only.ts'),
+}
 
 export default defineConfig({
   resolve: { alias },

@@ -1,0 +1,18 @@
+import type { Role } from '@/app/_lib/roles'
+
+export interface NavItem {
+  href: string
+  label: string
+  roles: readonly Role[] | 'all'
+}
+
+/** The main navigation; each entry names the roles that see it (the server enforces the rest). */
+export const NAV_ITEMS: NavItem[] = [
+  { href: '/', label: 'Overview', roles: 'all' },
+  { href: '/programs', label: 'Vehicle programs', roles: 'all' },
+  { href: '/admin/users', label: 'Users', roles: ['admin'] },
+]
+
+export function navFor(role: Role): NavItem[] {
+  return NAV_ITEMS.filter((i) => i.roles === 'all' || i.roles.includes(role))
+}

@@ -1,0 +1,37 @@
+import Link from 'next/link'
+import { requirePageUser } from './_lib/page-access'
+import { roleLabel } from './_lib/roles'
+import { SafetyCaution } from './_components/safety-caution'
+import { navFor } from './_components/nav-items'
+import type { Role } from '@/app/_lib/roles'
+
+const ROLE_TASKS: Record<Role, string> = {
+  calibration_engineer: 'Shape drive and regen maps, check them against the traction physics, and save revisions with a reason.',
+  test_driver: 'Drive an exact revision and file what you felt and logged against it.',
+  lead_engineer: 'Compare revisions, weigh the drive reports, and approve the one that goes into the trucks.',
+  admin: 'Manage the team’s accounts and roles.',
+}
+
+export default async function OverviewPage() {
+  const user = await requirePageUser()
+  return (
+    <div className="space-y-6">
+      <div>
+        <h1 className="text-2xl font-bold">Welcome, {user.name}</h1>
+        <p className="text-slate-600">
+          Signed in as {roleLabel(user.role)}. {ROLE_TASKS[user.role]}
+        </p>
+      </div>
+      <div className="grid gap-3 sm:grid-cols-3">
+        {navFor(user.role)
+          .filter((i) => i.href !== '/')
+          .map((i) => (
+            <Link key={i.href} href={i.href} className="card hover:border-accent">
+              <span className="font-semibold">{i.label}</span>
+            </Link>
+          ))}
+      </div>
+      <SafetyCaution />
+    </div>
+  )
+}

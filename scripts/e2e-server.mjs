@@ -1,0 +1,22 @@
+// The server e2e tests run against: the production build on a fresh PGlite folder with the demo data.
+import fs from 'node:fs'
+import os from 'node:os'
+import path from 'node:path'
+import { bin, buildIfStale, run } from './lib.mjs'
+
+const port = process.argv[2] ?? '3100'
+const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'mapwright-e2e-'))
+const env = {
+  ...process.env,
+  PGLITE_DATA_DIR: path.join(dataDir, 'pglite'),
+  NEXTAUTH_SECRET: 'e2e-secret-0123456789abcdef',
+  NEXTAUTH_URL: `http://127.0.0.1:${port}`,
+  MAPWRIGHT_DEMO: '1',
+}
+delete env.DATABASE_URL
+await buildIfStale()
+const seeded = await run(bin('tsx'), ['scripts/seed.ts'], { env })
+if (seeded !== 0) process.exit(seeded)
+const code = await run(bin('next'), ['start', '-H', '127.0.0.1', '-p', port], { env })
+fs.rmSync(dataDir, { recursive: true, force: true })
+process.exit(code)

@@ -1,6 +1,6 @@
 'use client'
 import { useRouter } from 'next/navigation'
-import { useForm, Controller } from 'react-hook-form'
+import { useForm, useWatch, Controller } from 'react-hook-form'
 import { zodResolver } from '@hookform/resolvers/zod'
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { useState } from 'react'
@@ -22,8 +22,8 @@ export function ProgramForm(props: { programId?: number; initial?: FormIn; readO
     defaultValues: props.initial ?? { name: '', description: '', params: { axleLayout: '6x4', gearRatios: [1], trailer: null } as FormIn['params'] },
     mode: 'onBlur',
   })
-  const { register, control, handleSubmit, watch, setValue, formState } = form
-  const hasTrailer = Boolean(watch('params.trailer'))
+  const { register, control, handleSubmit, setValue, formState } = form
+  const hasTrailer = Boolean(useWatch({ control, name: 'params.trailer' }))
 
   const save = useMutation({
     mutationFn: (input: FormOut) =>

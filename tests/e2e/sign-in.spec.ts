@@ -23,7 +23,7 @@ test.describe('signing in', () => {
     await page.getByLabel('Email').fill(DEMO.lead)
     await page.getByLabel('Password').fill('not the password')
     await page.getByRole('button', { name: 'Sign in' }).click()
-    await expect(page.getByRole('alert')).toHaveText(/Wrong email or password/)
+    await expect(page.getByRole('alert').filter({ hasText: /Wrong email or password/ })).toBeVisible()
     await expect(page).toHaveURL(/\/signin/)
   })
 

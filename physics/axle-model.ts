@@ -38,6 +38,11 @@ export function driveAxleLimitN(m: AxleLoadModel, mu: number, cosGrade: number, 
   const k = (mu * m.transferHeightM) / m.wheelbaseM
   const w = mu * m.staticDriveAxleLoadN * cosGrade
   if (mode === 'regen') return 1 + k > 0 ? w / (1 + k) : Infinity
-  const lift = m.steerUnloadPerN > 0 ? (m.staticSteerAxleLoadN * cosGrade) / m.steerUnloadPerN : Infinity
+  const lift = steerLiftForceN(m, cosGrade)
   return 1 - k > 0 ? Math.min(w / (1 - k), lift) : lift
+}
+
+/** Drive force (N) at which the steer axle would unload completely (Wf = 0); Infinity if it never does. @example steerLiftForceN(model, 1) */
+export function steerLiftForceN(m: AxleLoadModel, cosGrade = 1): number {
+  return m.steerUnloadPerN > 0 ? (m.staticSteerAxleLoadN * cosGrade) / m.steerUnloadPerN : Infinity
 }

@@ -2,7 +2,7 @@
  * Quasi-steady slip prediction for one map cell: motor torque → wheel force → drive-axle load
  * (with load transfer) → force ratio Fx/Fz → slip on the rising Magic Formula branch.
  */
-import { driveAxleLimitN, driveAxleLoadN } from './axle-model'
+import { driveAxleLimitN, driveAxleLoadN, steerLiftForceN } from './axle-model'
 import { deliverableAtShaft } from './envelope'
 import { motorTorqueFromWheel, overallRatio, wheelTorqueFromMotor } from './driveline'
 import { PhysicsInputError, requireFinite } from './errors'
@@ -37,6 +37,8 @@ export interface CellSlipResult {
   driveAxleLoadN: number
   /** Traction (drive) or lock-up (regen) force limit, positive. */
   limitForceN: number
+  /** What sets the limit: the tyre peak, or (drive only, rare) the steer axle unloading completely. */
+  limitedBy: 'tyre' | 'steer-axle-lift'
   /** |wheelForceN| / limitForceN; > 1 means beyond the tyre's peak. */
   utilisation: number
   /** Predicted slip ratio, or null when beyond the peak (spin or lock). */
@@ -70,6 +72,7 @@ export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadS
   const mu = peakForceRatio(coeffs)
   const driveLimit = driveAxleLimitN(model, mu, cosG, 'drive')
   const regenLimit = driveAxleLimitN(model, mu, cosG, 'regen')
+  const driveLimitedBy = driveLimit >= steerLiftForceN(model, cosG) ? 'steer-axle-lift' : 'tyre'
   const atDrive = motorTorqueFromWheel(vehicle, driveLimit * R, gearIndex)
   const atRegen = motorTorqueFromWheel(vehicle, -regenLimit * R, gearIndex)
   return (motorTorqueNm, roadSpeedKmh) => {
@@ -94,6 +97,7 @@ export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadS
       wheelForceN: force,
       driveAxleLoadN: load,
       limitForceN: limit,
+      limitedBy: regen ? 'tyre' : driveLimitedBy,
       utilisation,
       slip,
       spin: beyond && !regen,

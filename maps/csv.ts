@@ -11,7 +11,7 @@
 import { MapFormatError } from './errors'
 import { splitCsv, type CsvLine } from './csv-split'
 import { formatExact, parseExact } from './number-format'
-import { MAX_BREAKPOINTS, MIN_BREAKPOINTS, type MapKind, type MapTable } from './table'
+import { assertFiniteTable, MAX_BREAKPOINTS, MIN_BREAKPOINTS, type MapKind, type MapTable } from './table'
 
 /** Corner cell written by toCsv, per kind; it names both axes for a reader of the file. */
 export const CSV_CORNER: Readonly<Record<MapKind, string>> = { drive: 'pedal_pct\\speed_kmh', regen: 'brake_pedal_pct\\speed_kmh' }
@@ -19,10 +19,12 @@ export const CSV_CORNER: Readonly<Record<MapKind, string>> = { drive: 'pedal_pct
 /**
  * CSV text with `,` delimiter, LF line ends and a final newline. Numbers use the shortest
  * representation that reads back to the same double, so fromCsv(toCsv(t), t.kind) equals t.
+ * Throws MapInputError for a non-finite number (it could not be read back).
  * @example toCsv({ kind: 'drive', rowAxis: [0, 100], colAxis: [0, 50], values: [[0, 0], [1500, 900.5]] })
  *          // "pedal_pct\\speed_kmh,0,50\n0,0,0\n100,1500,900.5\n"
  */
 export function toCsv(table: MapTable): string {
+  assertFiniteTable(table, 'CSV')
   const lines = [[CSV_CORNER[table.kind], ...table.colAxis.map(formatExact)].join(',')]
   table.rowAxis.forEach((p, r) => lines.push([formatExact(p), ...table.values[r].map(formatExact)].join(',')))
   return lines.join('\n') + '\n'

@@ -2,7 +2,7 @@
  * Mapwright table model: drive and regen torque maps, their lookup, validation, editing,
  * comparison and file formats. Pure TypeScript, runs in the browser and on the server.
  */
-export { MIN_BREAKPOINTS, MAX_BREAKPOINTS, cloneTable, filledTable, sameAxes } from './table'
+export { MIN_BREAKPOINTS, MAX_BREAKPOINTS, cloneTable, filledTable, sameAxes, assertFiniteTable } from './table'
 export type { MapKind, MapTable } from './table'
 export { MapError, MapFormatError, MapEditError, MapInputError, formatPath } from './errors'
 export { lookup, findInterval } from './lookup'

@@ -7,17 +7,19 @@
  */
 import { MapFormatError } from './errors'
 import { mapTableSchema } from './schema'
-import type { MapTable } from './table'
+import { assertFiniteTable, type MapTable } from './table'
 
 export const JSON_FORMAT_TAG = 'mapwright-map-table'
 export const JSON_FORMAT_VERSION = 1
 
 /**
  * Pretty JSON (two-space indent, one value row per line). JSON.stringify writes shortest
- * round-trip numbers, so fromJson(toJson(t)) equals t (−0 reads back as 0).
+ * round-trip numbers, so fromJson(toJson(t)) equals t (−0 reads back as 0). Throws
+ * MapInputError for a non-finite number, which JSON would silently turn into null.
  * @example JSON.parse(toJson(t)).format // 'mapwright-map-table'
  */
 export function toJson(table: MapTable): string {
+  assertFiniteTable(table, 'JSON')
   const rows = table.values.map((r) => '    ' + JSON.stringify(r)).join(',\n')
   return (
     '{\n' +

@@ -5,6 +5,7 @@
  * (km/h). A drive map holds motoring torque; a regen map holds braking torque (≥ 0) by brake
  * pedal position, where the 0 % row is the lift-off regen applied with both pedals released.
  */
+import { MapInputError } from './errors'
 
 export type MapKind = 'drive' | 'regen'
 
@@ -42,4 +43,18 @@ export function filledTable(kind: MapKind, rowAxis: number[], colAxis: number[],
 export function sameAxes(a: MapTable, b: MapTable): boolean {
   const eq = (x: number[], y: number[]) => x.length === y.length && x.every((v, i) => v === y[i])
   return eq(a.rowAxis, b.rowAxis) && eq(a.colAxis, b.colAxis)
+}
+
+/**
+ * Throw MapInputError naming the first non-finite breakpoint or value; writers call this so a
+ * NaN never reaches a file as "NaN" (CSV) or null (JSON).
+ * @example assertFiniteTable({ ...t, values: [[NaN]] }, 'CSV') // throws "cannot write CSV: value in row 1, column 1 is NaN"
+ */
+export function assertFiniteTable(t: MapTable, format: string): void {
+  const bad = (what: string, v: number) => {
+    throw new MapInputError('not-finite', `cannot write ${format}: ${what} is ${v}`)
+  }
+  t.rowAxis.forEach((v, i) => Number.isFinite(v) || bad(`pedal breakpoint ${i + 1}`, v))
+  t.colAxis.forEach((v, i) => Number.isFinite(v) || bad(`speed breakpoint ${i + 1}`, v))
+  t.values.forEach((row, r) => row.forEach((v, c) => Number.isFinite(v) || bad(`value in row ${r + 1}, column ${c + 1}`, v)))
 }

@@ -1,6 +1,6 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { fromCsv, MapFormatError, toCsv, type MapTable } from '../../../maps'
+import { fromCsv, MapFormatError, MapInputError, toCsv, type MapTable } from '../../../maps'
 import { small } from './fixtures'
 
 /** The error fromCsv throws for `text`, so its fields can be checked. */
@@ -34,6 +34,13 @@ describe('toCsv', () => {
     const back = fromCsv(toCsv(t), 'drive')
     expect(back).toEqual(t)
     expect(Object.is(back.values[0][1], -0)).toBe(true)
+  })
+
+  it('refuses to write a non-finite number rather than a "NaN" cell', () => {
+    const t = small()
+    t.values[1][2] = Number.NaN
+    expect(() => toCsv(t)).toThrow(MapInputError)
+    expect(() => toCsv(t)).toThrow('cannot write CSV: value in row 2, column 3 is NaN')
   })
 
   it('round-trips random tables exactly (property)', () => {

@@ -1,6 +1,6 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { fromJson, MapFormatError, mapTableSchema, toJson, type MapTable } from '../../../maps'
+import { fromJson, MapFormatError, MapInputError, mapTableSchema, toJson, type MapTable } from '../../../maps'
 import { insideTable, small } from './fixtures'
 
 function jsonError(text: string): MapFormatError {
@@ -26,6 +26,10 @@ describe('toJson / fromJson', () => {
         expect(fromJson(toJson(t))).toEqual(t)
       }),
     )
+  })
+
+  it('refuses to write a non-finite number (JSON would make it null)', () => {
+    expect(() => toJson({ ...small(), colAxis: [0, 10, Infinity] })).toThrow(MapInputError)
   })
 
   it('accepts a bare table without the tag', () => {

@@ -52,6 +52,13 @@ describe('validate: structural rules', () => {
     expect(short).toEqual([expect.objectContaining({ rule: 'shape', row: 2 })])
   })
 
+  it('reports rather than throws on malformed input from untyped callers', () => {
+    const junk = { kind: 'drive', rowAxis: 'x', colAxis: [0, 1], values: null } as unknown as MapTable
+    expect(rules(validate(junk, limits))).toEqual(['shape'])
+    const strings = { kind: 'drive', rowAxis: [0, 100], colAxis: [0, 1], values: [['a', 0], [0, 0]] } as unknown as MapTable
+    expect(validate(strings, limits)).toEqual([expect.objectContaining({ rule: 'not-finite', row: 0, col: 0 })])
+  })
+
   it('not-finite: NaN or infinite values and breakpoints', () => {
     const fs = validate(withCell(t, 1, 3, Number.NaN))
     expect(fs).toEqual([expect.objectContaining({ rule: 'not-finite', row: 1, col: 3 })])

@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { afterAll, describe, expect, it } from 'vitest'
 import { checksum, cIdentifier, commentText, crc32, int32LeBytes, MapInputError, SAFETY_CAUTION, toCHeader, type CHeaderMeta, type MapTable } from '../../../maps'
-import { insideTable } from './fixtures'
+import { insideTable, small } from './fixtures'
 
 const table: MapTable = {
   kind: 'drive',
@@ -64,6 +64,13 @@ describe('toCHeader', () => {
     expect(h).toContain('closed course before it is used on public roads')
     expect(h).toContain('6x4 tractor, 40 t')
     expect(/^[\x20-\x7e\n]*$/.test(h)).toBe(true)
+  })
+
+  it('gives the CRCs stated for the worked example in docs/map-formats.md', () => {
+    const doc = toCHeader(small(), { name: 'drive_example', revision: 1, mapName: 'Drive example', vehicleProgram: 'Example 4x2' })
+    expect(define(doc, 'DRIVE_EXAMPLE_VALUES_CRC32')).toBe('0xA6ACF816u')
+    expect(define(doc, 'DRIVE_EXAMPLE_TABLE_CRC32')).toBe('0x9C724DB3u')
+    expect(checksum(small())).toBe('15c436cc04b9f54db17ee41dc6fa98e079dc1f171f95e154137d3643281fd736')
   })
 
   it('is deterministic without generatedAt, and shows it when given', () => {

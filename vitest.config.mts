@@ -1,9 +1,12 @@
 import { defineConfig } from 'vitest/config'
 import path from 'node:path'
+import { fileURLToPath } from 'node:url'
+
+const here = path.dirname(fileURLToPath(import.meta.url))
 
 const alias = {
-  '@': path.resolve(__dirname),
-  'server-only': path.resolve(__dirname, 'tests/support/server-only.ts'),
+  '@': here,
+  'server-only': path.join(here, 'tests/support/server-only.ts'),
 }
 
 export default defineConfig({

@@ -1,4 +1,5 @@
 import { ZodError } from 'zod'
+import { MapError, MapFormatError } from '@/maps'
 
 /** A domain error with the HTTP status it maps to; the message is shown to the user as is. */
 export class HttpError extends Error {
@@ -55,6 +56,8 @@ export function errorResponse(e: unknown): Response {
     const where = first?.path ? `${first.path}: ` : ''
     return jsonError(400, 'invalid_input', `${where}${first?.message ?? 'Invalid input'}`, { issues })
   }
+  if (e instanceof MapFormatError) return jsonError(400, 'invalid_format', e.message, { line: e.line, column: e.column, path: e.path })
+  if (e instanceof MapError) return jsonError(400, 'invalid_map', e.message, { rule: e.code })
   if (isUniqueViolation(e)) return jsonError(409, 'conflict', 'That already exists')
   console.error('Unhandled error in route handler', e)
   return jsonError(500, 'internal', 'Something went wrong on the server; the change was not saved')

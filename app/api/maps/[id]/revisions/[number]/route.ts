@@ -1,0 +1,10 @@
+import { withRole } from '@/app/_lib/access'
+import { loadMap, loadRevision } from '@/app/_lib/map-access'
+import { limitsFromVehicle, validate } from '@/maps'
+
+// GET /api/maps/:id/revisions/:number — one revision (or `latest`) with its table and findings
+export const GET = withRole<{ id: string; number: string }>('signed-in', async (_req, { params }) => {
+  const map = await loadMap(params.id)
+  const revision = await loadRevision(map.id, params.number)
+  return Response.json({ revision, findings: validate(revision.table, limitsFromVehicle(map.programParams)) })
+})

@@ -1,0 +1,25 @@
+import { withRole } from '@/app/_lib/access'
+import { EDITORS } from '@/app/_lib/roles'
+import { loadMap, saveOnMap } from '@/app/_lib/map-access'
+import { readJson } from '@/app/_lib/request'
+import { saveRevisionSchema } from '@/app/_schemas/map'
+import { countRevisions, listRevisions } from '@/db/queries/revisions'
+import { limitsFromVehicle, validate } from '@/maps'
+
+// GET /api/maps/:id/revisions?before=&limit= — the history, newest first, without tables
+export const GET = withRole<{ id: string }>('signed-in', async (req, { params }) => {
+  const map = await loadMap(params.id)
+  const q = new URL(req.url).searchParams
+  const before = q.get('before') ? Number(q.get('before')) : undefined
+  const limit = q.get('limit') ? Number(q.get('limit')) : undefined
+  const [revisions, total] = await Promise.all([listRevisions(map.id, { before, limit }), countRevisions(map.id)])
+  return Response.json({ revisions, total })
+})
+
+// POST /api/maps/:id/revisions — save a new revision on top of parentNumber (409 if a newer one exists)
+export const POST = withRole<{ id: string }>(EDITORS, async (req, { user, params }) => {
+  const map = await loadMap(params.id)
+  const input = await readJson(req, saveRevisionSchema)
+  const revision = await saveOnMap(map, { ...input, authorId: user.id })
+  return Response.json({ revision, findings: validate(input.table, limitsFromVehicle(map.programParams)) }, { status: 201 })
+})

@@ -1,0 +1,22 @@
+import { withRole } from '@/app/_lib/access'
+import { EDITORS } from '@/app/_lib/roles'
+import { NotFoundError, ValidationError } from '@/app/_lib/errors'
+import { readJson } from '@/app/_lib/request'
+import { createMapSchema } from '@/app/_schemas/map'
+import { createMap, listMaps } from '@/db/queries/maps'
+import { getProgram } from '@/db/queries/programs'
+
+// GET /api/maps?programId= — the maps, with their latest revision number
+export const GET = withRole('signed-in', async (req) => {
+  const programId = new URL(req.url).searchParams.get('programId')
+  return Response.json({ maps: await listMaps(programId ? { programId: Number(programId) } : {}) })
+})
+
+// POST /api/maps — create a map with its first revision
+export const POST = withRole(EDITORS, async (req, { user }) => {
+  const input = await readJson(req, createMapSchema)
+  if (input.table.kind !== input.kind) throw new ValidationError(`table.kind: must match the map kind '${input.kind}'`)
+  if (!(await getProgram(input.programId))) throw new NotFoundError(`Vehicle program ${input.programId}`)
+  const created = await createMap(input, user.id)
+  return Response.json(created, { status: 201 })
+})

@@ -1,0 +1,79 @@
+import { asc, eq, sql } from 'drizzle-orm'
+import type { MapTable } from '../../maps'
+import { getDb } from '../client'
+import { mapRevisions, maps, vehiclePrograms } from '../schema'
+import { recordAudit } from './audit'
+import { insertRevision } from './revisions'
+
+export interface MapSummary {
+  id: number
+  name: string
+  kind: 'drive' | 'regen'
+  description: string
+  programId: number
+  programName: string
+  latestNumber: number | null
+  latestAt: Date | null
+}
+
+const latest = sql<number | null>`(select max(${mapRevisions.number}) from ${mapRevisions} where ${mapRevisions.mapId} = ${maps.id})`
+const latestAt = sql<Date | null>`(select max(${mapRevisions.createdAt}) from ${mapRevisions} where ${mapRevisions.mapId} = ${maps.id})`
+
+export async function listMaps(filter: { programId?: number } = {}): Promise<MapSummary[]> {
+  const db = await getDb()
+  const rows = await db
+    .select({
+      id: maps.id,
+      name: maps.name,
+      kind: maps.kind,
+      description: maps.description,
+      programId: maps.programId,
+      programName: vehiclePrograms.name,
+      latestNumber: latest,
+      latestAt,
+    })
+    .from(maps)
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .where(filter.programId ? eq(maps.programId, filter.programId) : undefined)
+    .orderBy(asc(vehiclePrograms.name), asc(maps.kind), asc(maps.name))
+  // Drivers return timestamps from raw subqueries as strings; normalise.
+  return rows.map((r) => ({ ...r, latestAt: r.latestAt ? new Date(r.latestAt) : null, latestNumber: r.latestNumber === null ? null : Number(r.latestNumber) }))
+}
+
+export async function getMap(id: number) {
+  const db = await getDb()
+  const rows = await db
+    .select({
+      id: maps.id,
+      name: maps.name,
+      kind: maps.kind,
+      description: maps.description,
+      programId: maps.programId,
+      programName: vehiclePrograms.name,
+      programParams: vehiclePrograms.params,
+      createdAt: maps.createdAt,
+    })
+    .from(maps)
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .where(eq(maps.id, id))
+  return rows[0] ?? null
+}
+
+export type MapWithProgram = NonNullable<Awaited<ReturnType<typeof getMap>>>
+
+/** Create a map and its first revision in one transaction. */
+export async function createMap(
+  input: { programId: number; name: string; kind: 'drive' | 'regen'; description: string; table: MapTable; message: string },
+  authorId: number,
+) {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const [map] = await tx
+      .insert(maps)
+      .values({ programId: input.programId, name: input.name, kind: input.kind, description: input.description, createdBy: authorId })
+      .returning({ id: maps.id })
+    const revision = await insertRevision(tx, { mapId: map.id, number: 1, parentId: null, authorId, message: input.message, notes: '', table: input.table })
+    await recordAudit({ actorId: authorId, action: 'map.create', entityType: 'map', entityId: map.id, details: { name: input.name, kind: input.kind } }, tx)
+    return { mapId: map.id, revision }
+  })
+}

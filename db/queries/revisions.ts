@@ -1,0 +1,128 @@
+import { and, desc, eq, lt, sql } from 'drizzle-orm'
+import { checksum, type MapTable } from '../../maps'
+import { getDb, type Db } from '../client'
+import { mapRevisions, maps, users } from '../schema'
+import { recordAudit } from './audit'
+
+type Tx = Pick<Db, 'insert' | 'select'>
+
+/** Summary columns of a revision: everything but the table itself. */
+const summary = {
+  id: mapRevisions.id,
+  mapId: mapRevisions.mapId,
+  number: mapRevisions.number,
+  parentId: mapRevisions.parentId,
+  authorId: mapRevisions.authorId,
+  authorName: users.name,
+  message: mapRevisions.message,
+  notes: mapRevisions.notes,
+  checksum: mapRevisions.checksum,
+  state: mapRevisions.state,
+  createdAt: mapRevisions.createdAt,
+}
+
+export interface RevisionSummary {
+  id: number
+  mapId: number
+  number: number
+  parentId: number | null
+  authorId: number
+  authorName: string
+  message: string
+  notes: string
+  checksum: string
+  state: string
+  createdAt: Date
+}
+export type Revision = RevisionSummary & { table: MapTable }
+
+/** Insert one immutable revision row; the checksum is computed from the canonical content here, never taken from a client. */
+export async function insertRevision(
+  tx: Tx,
+  r: { mapId: number; number: number; parentId: number | null; authorId: number; message: string; notes: string; table: MapTable },
+) {
+  const [row] = await tx
+    .insert(mapRevisions)
+    .values({ ...r, table: { kind: r.table.kind, rowAxis: r.table.rowAxis, colAxis: r.table.colAxis, values: r.table.values }, checksum: checksum(r.table) })
+    .returning({ id: mapRevisions.id, number: mapRevisions.number, checksum: mapRevisions.checksum, createdAt: mapRevisions.createdAt })
+  return row
+}
+
+export type SaveResult =
+  | { ok: true; revision: { id: number; number: number; checksum: string; createdAt: Date } }
+  | { ok: false; reason: 'stale-parent'; latestNumber: number }
+  | { ok: false; reason: 'no-map' }
+
+/**
+ * Save a new revision on top of `parentNumber`. The map row is locked for the transaction, so
+ * concurrent saves queue up; a save whose parent is no longer the latest is refused (nothing is
+ * written) and told the newer number. The unique (map, number) index is the last line of defence.
+ */
+export async function saveRevision(input: {
+  mapId: number
+  parentNumber: number
+  authorId: number
+  message: string
+  notes: string
+  table: MapTable
+  action?: string
+}): Promise<SaveResult> {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const locked = await tx.select({ id: maps.id }).from(maps).where(eq(maps.id, input.mapId)).for('update')
+    if (!locked[0]) return { ok: false, reason: 'no-map' } as const
+    const [head] = await tx
+      .select({ id: mapRevisions.id, number: mapRevisions.number })
+      .from(mapRevisions)
+      .where(eq(mapRevisions.mapId, input.mapId))
+      .orderBy(desc(mapRevisions.number))
+      .limit(1)
+    const latestNumber = head?.number ?? 0
+    if (latestNumber !== input.parentNumber) return { ok: false, reason: 'stale-parent', latestNumber } as const
+    const revision = await insertRevision(tx, {
+      mapId: input.mapId,
+      number: latestNumber + 1,
+      parentId: head?.id ?? null,
+      authorId: input.authorId,
+      message: input.message,
+      notes: input.notes,
+      table: input.table,
+    })
+    await recordAudit(
+      { actorId: input.authorId, action: input.action ?? 'revision.save', entityType: 'map', entityId: input.mapId, details: { number: revision.number, checksum: revision.checksum, message: input.message } },
+      tx,
+    )
+    return { ok: true, revision } as const
+  })
+}
+
+/** Newest first, without the tables; `before` pages back from a revision number. */
+export async function listRevisions(mapId: number, opts: { limit?: number; before?: number } = {}): Promise<RevisionSummary[]> {
+  const db = await getDb()
+  return db
+    .select(summary)
+    .from(mapRevisions)
+    .innerJoin(users, eq(users.id, mapRevisions.authorId))
+    .where(opts.before ? and(eq(mapRevisions.mapId, mapId), lt(mapRevisions.number, opts.before)) : eq(mapRevisions.mapId, mapId))
+    .orderBy(desc(mapRevisions.number))
+    .limit(Math.min(opts.limit ?? 50, 500))
+}
+
+export async function countRevisions(mapId: number): Promise<number> {
+  const db = await getDb()
+  const [row] = await db.select({ n: sql<number>`count(*)::int` }).from(mapRevisions).where(eq(mapRevisions.mapId, mapId))
+  return Number(row.n)
+}
+
+/** One revision with its table; `number` omitted means the latest. */
+export async function getRevision(mapId: number, number?: number): Promise<Revision | null> {
+  const db = await getDb()
+  const rows = await db
+    .select({ ...summary, table: mapRevisions.table })
+    .from(mapRevisions)
+    .innerJoin(users, eq(users.id, mapRevisions.authorId))
+    .where(number === undefined ? eq(mapRevisions.mapId, mapId) : and(eq(mapRevisions.mapId, mapId), eq(mapRevisions.number, number)))
+    .orderBy(desc(mapRevisions.number))
+    .limit(1)
+  return rows[0] ?? null
+}

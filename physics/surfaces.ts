@@ -15,9 +15,9 @@ export interface Surface {
 }
 
 const TABLE_SOURCE =
-  'Magic Formula coefficient set after Pacejka (Tire and Vehicle Dynamics), as widely reproduced, e.g. in the ' +
-  'MathWorks "Tire-Road Interaction (Magic Formula)" documentation page. Values recalled from memory and not ' +
-  're-checked against that page while writing this module. Peak μ = D because C > 1.'
+  'Magic Formula coefficient set after Pacejka (Tire and Vehicle Dynamics), as widely reproduced in public ' +
+  'tyre-road interaction documentation (see docs/physics.md, Sources). Values recalled from memory and not ' +
+  're-checked against a primary table while writing this module. Peak μ = D because C > 1.'
 
 /**
  * The surfaces the notebook offers. Truck tyres are not passenger-car tyres: treat these as

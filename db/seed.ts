@@ -1,7 +1,9 @@
-import { sql } from 'drizzle-orm'
+import { and, eq, sql } from 'drizzle-orm'
 import type { Db } from './client'
-import { users, vehiclePrograms, type Role } from './schema'
+import { maps, users, vehiclePrograms, type Role } from './schema'
 import { demoTipper, demoTractor } from './demo/programs'
+import { demoMapHistories } from './demo/maps'
+import { insertRevision } from './queries/revisions'
 
 /** The one password of every demo account (demo mode only; listed in the README). */
 export const DEMO_PASSWORD = 'mapwright-demo'
@@ -26,6 +28,7 @@ export const DEMO_PROGRAMS = [
 export interface SeedResult {
   usersAdded: number
   programsAdded: number
+  mapsAdded: number
 }
 
 /**
@@ -45,5 +48,30 @@ export async function seedDemo(db: Db, hashPassword: (p: string) => Promise<stri
     .values(DEMO_PROGRAMS.map((p) => ({ ...p, createdBy: admin?.id ?? null })))
     .onConflictDoNothing()
     .returning({ id: vehiclePrograms.id })
-  return { usersAdded: addedUsers.length, programsAdded: addedPrograms.length }
+  const mapsAdded = await seedMaps(db)
+  return { usersAdded: addedUsers.length, programsAdded: addedPrograms.length, mapsAdded }
+}
+
+/** Demo maps with their revision histories; a map that already exists is left as it is. */
+async function seedMaps(db: Db): Promise<number> {
+  const authors = await db.select({ id: users.id, email: users.email }).from(users).where(sql`${users.role} in ('calibration_engineer', 'lead_engineer') and ${users.email} like '%@brackwater.example'`)
+  if (authors.length === 0) return 0
+  let added = 0
+  for (const m of demoMapHistories(demoTipper, demoTractor)) {
+    const [program] = await db.select({ id: vehiclePrograms.id }).from(vehiclePrograms).where(eq(vehiclePrograms.name, m.program))
+    if (!program) continue
+    const existing = await db.select({ id: maps.id }).from(maps).where(and(eq(maps.programId, program.id), eq(maps.name, m.name)))
+    if (existing.length) continue
+    await db.transaction(async (tx) => {
+      const [map] = await tx.insert(maps).values({ programId: program.id, name: m.name, kind: m.kind, description: m.description, createdBy: authors[0].id }).returning({ id: maps.id })
+      let parentId: number | null = null
+      for (const [i, r] of m.revisions.entries()) {
+        const author = authors[i % authors.length]
+        const row = await insertRevision(tx, { mapId: map.id, number: i + 1, parentId, authorId: author.id, message: r.message, notes: r.notes ?? '', table: r.table })
+        parentId = row.id
+      }
+    })
+    added++
+  }
+  return added
 }

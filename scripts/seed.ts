@@ -6,7 +6,7 @@ import { hashPassword } from '../app/_lib/password'
 async function main() {
   const { db, kind } = await getHandle()
   const result = await seedDemo(db, hashPassword)
-  console.log(`Demo data on ${kind}: ${result.usersAdded} users and ${result.programsAdded} vehicle programs added (existing rows kept).`)
+  console.log(`Demo data on ${kind}: ${result.usersAdded} users, ${result.programsAdded} vehicle programs and ${result.mapsAdded} maps added (existing rows kept).`)
   console.log(`\nDemo accounts (password for all: ${DEMO_PASSWORD}):`)
   for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(21)} ${u.email}`)
   await closeDb()

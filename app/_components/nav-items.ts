@@ -9,6 +9,7 @@ export interface NavItem {
 /** The main navigation; each entry names the roles that see it (the server enforces the rest). */
 export const NAV_ITEMS: NavItem[] = [
   { href: '/', label: 'Overview', roles: 'all' },
+  { href: '/maps', label: 'Maps', roles: 'all' },
   { href: '/programs', label: 'Vehicle programs', roles: 'all' },
   { href: '/admin/users', label: 'Users', roles: ['admin'] },
 ]

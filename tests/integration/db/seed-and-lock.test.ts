@@ -14,9 +14,9 @@ describe('demo seed', () => {
   it('adds the scenario once; a second run adds nothing', async () => {
     const db = await getDb()
     const first = await seedDemo(db, fastHash)
-    expect(first).toEqual({ usersAdded: DEMO_USERS.length, programsAdded: DEMO_PROGRAMS.length })
+    expect(first).toEqual({ usersAdded: DEMO_USERS.length, programsAdded: DEMO_PROGRAMS.length, mapsAdded: 4 })
     const second = await seedDemo(db, fastHash)
-    expect(second).toEqual({ usersAdded: 0, programsAdded: 0 })
+    expect(second).toEqual({ usersAdded: 0, programsAdded: 0, mapsAdded: 0 })
     const res = await db.execute(sql`select count(*)::int as n from users where email like '%@brackwater.example'`)
     expect((res as unknown as { rows: { n: number }[] }).rows[0].n).toBe(DEMO_USERS.length)
   })

@@ -1,0 +1,51 @@
+import Link from 'next/link'
+import { formatTime, shortChecksum } from '@/app/_components/format'
+import type { RevisionSummary } from '@/db/queries/revisions'
+
+const STATE_LABELS: Record<string, string> = { draft: 'draft' }
+
+export function HistoryTable(props: { mapId: number; revisions: RevisionSummary[]; total: number; canEdit: boolean }) {
+  return (
+    <div className="card overflow-x-auto p-0">
+      <table className="w-full text-sm">
+        <thead className="bg-slate-50 text-left text-xs uppercase text-slate-600">
+          <tr>
+            <th className="px-3 py-2">Rev.</th>
+            <th className="px-3 py-2">Author</th>
+            <th className="px-3 py-2">Saved</th>
+            <th className="px-3 py-2">Message</th>
+            <th className="px-3 py-2">Checksum</th>
+            <th className="px-3 py-2">State</th>
+            <th className="px-3 py-2" />
+          </tr>
+        </thead>
+        <tbody>
+          {props.revisions.map((r) => (
+            <tr key={r.id} data-testid={`history-row-${r.number}`} className="border-t border-line align-top">
+              <td className="px-3 py-2 font-semibold">r{r.number}</td>
+              <td className="px-3 py-2">{r.authorName}</td>
+              <td className="px-3 py-2 whitespace-nowrap">{formatTime(r.createdAt)}</td>
+              <td className="px-3 py-2">{r.message}</td>
+              <td className="px-3 py-2 font-mono text-xs" title={r.checksum}>{shortChecksum(r.checksum)}</td>
+              <td className="px-3 py-2">{STATE_LABELS[r.state] ?? r.state}</td>
+              <td className="px-3 py-2 whitespace-nowrap">
+                <Link href={`/maps/${props.mapId}/revisions/${r.number}`} className="text-accent hover:underline">Open</Link>
+                {props.canEdit && (
+                  <>
+                    {' · '}
+                    <Link href={`/maps/${props.mapId}/edit?from=${r.number}`} className="text-accent hover:underline">New draft from here</Link>
+                  </>
+                )}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      {props.total > props.revisions.length && (
+        <p className="px-3 py-2 text-xs text-slate-500">
+          Showing the newest {props.revisions.length} of {props.total} revisions.
+        </p>
+      )}
+    </div>
+  )
+}

@@ -1,0 +1,112 @@
+// The physics overlay checked against values computed by hand in the test from the published formulas.
+import { describe, expect, it } from 'vitest'
+import { mapOverlay } from '@/physics/overlay'
+import type { TorqueMap, VehicleParams } from '@/physics'
+import { rigid6x4 } from '@/tests/unit/physics/fixtures'
+
+// Standard gravity, exact by definition (3rd CGPM 1901; NIST SP 330).
+const g = 9.80665
+const v: VehicleParams = rigid6x4
+const G = v.gearRatios[0] * v.finalDriveRatio
+const eta = v.drivelineEfficiency
+const R = v.wheelRadiusM
+const L = v.wheelbaseM
+const a = v.emptyCgToFrontAxleM
+const h = v.emptyCgHeightM
+const W = v.emptyMassKg * g
+
+/**
+ * Traction-limited rear drive axle with load transfer on level ground, Gillespie, Fundamentals of
+ * Vehicle Dynamics, ch. 2: Fx_max = μ·W·(a/L) / (1 − μ·h/L), a = CG behind the front axle.
+ */
+const gillespieDriveLimitN = (mu: number) => (mu * W * (a / L)) / (1 - (mu * h) / L)
+/** Braking on the drive axle alone moves load forward: Fb_max = μ·W·(a/L) / (1 + μ·h/L) (same derivation, Fx < 0). */
+const regenLimitN = (mu: number) => (mu * W * (a / L)) / (1 + (mu * h) / L)
+/** Wheel force → motor-shaft torque: driving loses η on the way to the wheel (T_m = F·R/(G·η)); regen loses it on the way back (T_m = F·R·η/G). */
+const driveTorque = (f: number) => (f * R) / (G * eta)
+const regenTorque = (f: number) => (f * R * eta) / G
+
+// The Magic Formula (Pacejka, Tire and Vehicle Dynamics, ch. 4), written out here independently of physics/tyre.ts.
+const mf = (k: number, c: { B: number; C: number; D: number; E: number }) => {
+  const x = c.B * k
+  return c.D * Math.sin(c.C * Math.atan(x - c.E * (x - Math.atan(x))))
+}
+
+function driveMap(torques: number[]): TorqueMap {
+  const colAxis = [0, 5, 10, 20]
+  return { kind: 'drive', rowAxis: torques.map((_, i) => i * (100 / (torques.length - 1))), colAxis, values: torques.map((t) => colAxis.map(() => t)) }
+}
+
+describe('mapOverlay: traction-limit torque per speed', () => {
+  it('equals the hand-computed load-transfer limit on packed snow (μ = 0.3), converted through R, G and η', () => {
+    const limitNm = driveTorque(gillespieDriveLimitN(0.3)) // ≈ 572 N·m for this vehicle
+    const o = mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'packed-snow', map: driveMap([0, 100, 200]) })
+    expect(o.tractionLimitBySpeed).toHaveLength(4)
+    for (const p of o.tractionLimitBySpeed) {
+      expect(p.tractionLimitNm).toBeCloseTo(limitNm, 6)
+      expect(p.limitNm).toBeLessThanOrEqual(p.envelopeLimitNm)
+    }
+    expect(limitNm).toBeGreaterThan(560)
+    expect(limitNm).toBeLessThan(585)
+  })
+
+  it('gives the regen (lock-up) limit for a regen map, as a braking magnitude', () => {
+    const map: TorqueMap = { kind: 'regen', rowAxis: [0, 100], colAxis: [10, 40], values: [[100, 100], [200, 200]] }
+    const o = mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'ice', map })
+    expect(o.tractionLimitBySpeed[0].tractionLimitNm).toBeCloseTo(regenTorque(regenLimitN(0.1)), 6)
+  })
+})
+
+describe('mapOverlay: slip heat map', () => {
+  it('predicts the slip the Magic Formula gives for the cell force ratio on wet asphalt (E = 1, closed-form inverse)', () => {
+    const T = 1200
+    const o = mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'wet-asphalt', map: driveMap([0, T]) })
+    const fx = (T * G * eta) / R
+    const wr = W * (a / L) + (fx * h) / L // rear load with load transfer
+    const ratio = fx / wr
+    // Wet asphalt B = 12, C = 2.3, D = 0.82, E = 1: u = atan(Bκ), so κ = tan(tan(asin(ratio/D)/C))/B.
+    const kappa = Math.tan(Math.tan(Math.asin(ratio / 0.82) / 2.3)) / 12
+    expect(o.slip[1][0]).toBeCloseTo(kappa, 9)
+    expect(o.utilisation[1][0]).toBeCloseTo(fx / gillespieDriveLimitN(0.82), 9)
+    expect(o.slip[0][0]).toBe(0)
+    expect(o.spin[1][0]).toBe(false)
+  })
+
+  it('on dry asphalt (E = 0.97) the predicted slip reproduces the force ratio through the formula', () => {
+    const T = 2000
+    const o = mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'dry-asphalt', map: driveMap([0, T]) })
+    const fx = (T * G * eta) / R
+    const ratio = fx / (W * (a / L) + (fx * h) / L)
+    const kappa = o.slip[1][2]
+    expect(kappa).not.toBeNull()
+    expect(mf(kappa ?? NaN, { B: 10, C: 1.9, D: 1, E: 0.97 })).toBeCloseTo(ratio, 9)
+  })
+
+  it('marks cells beyond the peak as spin with no slip, and counts them', () => {
+    const limitNm = driveTorque(gillespieDriveLimitN(0.3))
+    const o = mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'packed-snow', map: driveMap([0, 0.5 * limitNm, 1.5 * limitNm]) })
+    expect(o.spin).toEqual([[false, false, false, false], [false, false, false, false], [true, true, true, true]])
+    expect(o.slip[2]).toEqual([null, null, null, null])
+    expect(o.utilisation[1][0]).toBeCloseTo(0.5, 9)
+    expect(o.utilisation[2][0]).toBeCloseTo(1.5, 9)
+    expect(o.spinCount).toBe(4)
+    // Packed snow B = 5, C = 2, E = 1: peak where atan(atan(Bκ)) = π/4, κ = tan(1)/5.
+    expect(o.tyrePeakSlip).toBeCloseTo(Math.tan(1) / 5, 9)
+  })
+
+  it('changes with the load case: laden puts more load on the drive axle, so less of the grip is used', () => {
+    const map = driveMap([0, 400, 800])
+    const empty = mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'packed-snow', map })
+    const laden = mapOverlay({ vehicle: v, loadCase: 'laden', surface: 'packed-snow', map })
+    expect(empty.spinCount).toBe(4)
+    expect(laden.spinCount).toBe(0)
+    expect(laden.utilisation[1][0]).toBeLessThan(empty.utilisation[1][0])
+  })
+
+  it('does not mutate the map', () => {
+    const map = driveMap([0, 300, 900])
+    const copy = structuredClone(map)
+    mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'ice', map })
+    expect(map).toEqual(copy)
+  })
+})

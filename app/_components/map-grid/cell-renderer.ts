@@ -1,0 +1,68 @@
+/**
+ * One renderer for every grid cell. It reads a context object (kept in a ref by the grid) rather
+ * than closing over props, so Handsontable keeps one stable renderer and a re-render is enough
+ * when the table, units or findings change.
+ */
+import type Handsontable from 'handsontable/base'
+import { baseRenderer } from 'handsontable/renderers/baseRenderer'
+import type { MapTable } from '@/maps'
+import type { ColourScale } from './colour-scale'
+import { markKey, type CellMark } from './finding-marks'
+import { fmtCell, type UnitSet } from './units'
+
+export interface RenderContext {
+  table: MapTable
+  units: UnitSet
+  scale: ColourScale
+  marks: Map<string, CellMark>
+  /**
+   * Optional extra shading per value cell (table row and column, 0-based), drawn over the colour
+   * scale: a CSS colour with alpha, or null for none. Reserved for overlays such as tyre slip.
+   */
+  cellShade?: (row: number, col: number) => string | null
+}
+
+type Renderer = (instance: Handsontable.Core, TD: HTMLTableCellElement, row: number, col: number, prop: string | number, value: unknown, cellProperties: Handsontable.CellProperties) => void
+
+const MW_CLASSES = ['mw-cell', 'mw-corner', 'mw-axis', 'mw-value', 'mw-error', 'mw-warning']
+
+/**
+ * Holds the context the renderer reads. Handsontable calls the renderer outside React's render,
+ * so a plain holder (not React state) is the right home for it.
+ */
+export class RenderStore {
+  constructor(private ctx: RenderContext) {}
+  set(ctx: RenderContext) {
+    this.ctx = ctx
+  }
+  get(): RenderContext {
+    return this.ctx
+  }
+}
+
+export function makeRenderer(store: RenderStore): Renderer {
+  return (instance, TD, row, col, prop, value, cellProperties) => {
+    baseRenderer(instance, TD, row, col, prop, value, cellProperties)
+    const { scale, marks, cellShade, units } = store.get()
+    const isAxis = row === 0 || col === 0
+    // Cells are recycled while scrolling: drop the previous cell's marks before adding ours.
+    TD.classList.remove(...MW_CLASSES)
+    TD.classList.add('mw-cell', row === 0 && col === 0 ? 'mw-corner' : isAxis ? 'mw-axis' : 'mw-value')
+    TD.style.backgroundColor = ''
+    TD.style.color = ''
+    TD.style.boxShadow = ''
+    TD.textContent = typeof value === 'number' ? fmtCell(value) : String(value ?? '')
+    if (!isAxis && typeof value === 'number') {
+      const nm = units.torqueIn(value)
+      TD.style.backgroundColor = scale.colour(nm)
+      if (scale.dark(nm)) TD.style.color = '#fff'
+      const shade = cellShade?.(row - 1, col - 1)
+      // An inset shadow paints over the background without replacing it, so both stay readable.
+      if (shade) TD.style.boxShadow = `inset 0 0 0 100px ${shade}`
+    }
+    const mark = marks.get(markKey(row, col))
+    TD.title = mark ? mark.messages.join('\n') : ''
+    if (mark) TD.classList.add(mark.severity === 'error' ? 'mw-error' : 'mw-warning')
+    TD.setAttribute('data-cell', `${row}-${col}`)
+  }
+}

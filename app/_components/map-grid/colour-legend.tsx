@@ -1,0 +1,21 @@
+/** The colour scale's key: a gradient bar with its ends in the current torque unit. */
+import type { ColourScale } from './colour-scale'
+import { fmt, type UnitSet } from './units'
+
+export function ColourLegend({ scale, units }: { scale: ColourScale; units: UnitSet }) {
+  return (
+    <div className="flex items-center gap-2 text-xs text-slate-600" aria-label="Colour scale">
+      <span>{fmt(units.torqueOut(scale.min))}</span>
+      <span className="h-3 w-40 rounded-sm border border-line" style={{ background: scale.gradient }} />
+      <span>
+        {fmt(units.torqueOut(scale.max))} {units.torque}
+      </span>
+      <span className="ml-3 inline-flex items-center gap-1">
+        <span className="inline-block h-3 w-3 border-2 border-danger" /> error
+      </span>
+      <span className="inline-flex items-center gap-1">
+        <span className="inline-block h-3 w-3 border-2 border-dashed border-warn" /> warning (hover a cell for the reason)
+      </span>
+    </div>
+  )
+}

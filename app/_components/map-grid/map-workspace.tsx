@@ -1,0 +1,65 @@
+'use client'
+/**
+ * Grid, colour key, findings and the small plot of one table, shared by the editor and the
+ * read-only revision view. Picking a finding selects its cell; the plot follows the selection.
+ */
+import { useCallback, useMemo, useState } from 'react'
+import { validate, type Finding, type MapLimits, type MapTable } from '@/maps'
+import { ColourLegend } from './colour-legend'
+import { colourScale } from './colour-scale'
+import { FindingsList } from './findings-list'
+import type { GridEdit } from './grid-data'
+import MapGrid, { type GridApi, type MapGridProps } from './map-grid'
+import type { GridRange } from './selection'
+import { SmallPlot } from './small-plot'
+import { toUnits, type UnitSet } from './units'
+
+export interface MapWorkspaceProps {
+  table: MapTable
+  units: UnitSet
+  limits: MapLimits | null
+  range: GridRange | null
+  onSelect: (r: GridRange) => void
+  onEdit?: (edits: GridEdit[]) => void
+  /** Receives the grid's API (select a cell, is a cell editor open) once it has mounted. */
+  onGridApi?: (api: GridApi | null) => void
+  cellShade?: MapGridProps['cellShade']
+}
+
+export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, onGridApi, cellShade }: MapWorkspaceProps) {
+  const [api, setApi] = useState<GridApi | null>(null)
+  const [along, setAlong] = useState<'speed' | 'pedal'>('speed')
+  const findings = useMemo(() => validate(table, limits ?? undefined), [table, limits])
+  const scale = useMemo(() => colourScale(table.values), [table])
+  const describe = useCallback((f: Finding) => toUnits(f.message, units), [units])
+  const onApi = useCallback(
+    (a: GridApi | null) => {
+      setApi(a)
+      onGridApi?.(a)
+    },
+    [onGridApi],
+  )
+  // The plot follows the selected cell; with nothing selected it shows full pedal / top speed.
+  const row = range && range.r0 >= 1 ? Math.min(range.r0, table.rowAxis.length) - 1 : table.rowAxis.length - 1
+  const col = range && range.c0 >= 1 ? Math.min(range.c0, table.colAxis.length) - 1 : 0
+
+  return (
+    <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="min-w-0 space-y-2">
+        <MapGrid table={table} units={units} scale={scale} findings={findings} describe={describe} readOnly={!onEdit} onEdit={onEdit} onSelect={onSelect} onApi={onApi} cellShade={cellShade} />
+        <ColourLegend scale={scale} units={units} />
+        <div className="flex items-center gap-2 pt-2 text-xs">
+          <span className="text-slate-600">Plot</span>
+          <button type="button" className={`btn px-2 py-0.5 text-xs ${along === 'speed' ? 'bg-accent-soft' : ''}`} onClick={() => setAlong('speed')} aria-pressed={along === 'speed'}>
+            selected row (along speed)
+          </button>
+          <button type="button" className={`btn px-2 py-0.5 text-xs ${along === 'pedal' ? 'bg-accent-soft' : ''}`} onClick={() => setAlong('pedal')} aria-pressed={along === 'pedal'}>
+            selected column (along pedal)
+          </button>
+        </div>
+        <SmallPlot table={table} units={units} limits={limits} along={along} index={along === 'speed' ? row : col} />
+      </div>
+      <FindingsList findings={findings} describe={describe} onPick={(r, c) => api?.selectCell(r, c)} />
+    </div>
+  )
+}

@@ -1,0 +1,48 @@
+/**
+ * The editor's working state: the edited table with its undo history, the revision it is based
+ * on, and the save message — mirrored to localStorage on every change so a reload keeps it.
+ * Runs only in the browser (the editor is loaded without SSR), so the draft is read on first render.
+ */
+import { useCallback, useEffect, useState } from 'react'
+import type { MapTable } from '@/maps'
+import { clearDraft, loadDraft, saveDraft } from './draft-storage'
+import { sameTable } from './same-table'
+import { useHistory } from './use-history'
+
+export interface Base {
+  number: number
+  table: MapTable
+}
+
+export function useMapDraft(mapId: number, pageBase: Base) {
+  const [restored] = useState(() => loadDraft(mapId))
+  const [base, setBase] = useState<Base>(() => (restored ? { number: restored.baseNumber, table: restored.baseTable } : pageBase))
+  const history = useHistory(restored?.table ?? pageBase.table, restored ? [restored.baseTable] : undefined)
+  const [message, setMessage] = useState(restored?.message ?? '')
+  const [notes, setNotes] = useState(restored?.notes ?? '')
+  const [restoredAt, setRestoredAt] = useState<string | null>(restored?.savedAt ?? null)
+  const dirty = !sameTable(history.table, base.table)
+
+  useEffect(() => {
+    if (!dirty && !message && !notes) return clearDraft(mapId)
+    saveDraft(mapId, { baseNumber: base.number, baseTable: base.table, table: history.table, message, notes, savedAt: new Date().toISOString() })
+  }, [mapId, base, history.table, message, notes, dirty])
+
+  const { reset } = history
+  const discard = useCallback(() => {
+    clearDraft(mapId)
+    setBase(pageBase)
+    reset(pageBase.table)
+    setMessage('')
+    setNotes('')
+    setRestoredAt(null)
+  }, [mapId, pageBase, reset])
+
+  /** Put the edits on top of a newer revision: the edited table stays exactly as it is. */
+  const rebase = useCallback((next: Base) => setBase(next), [])
+
+  /** After a save the draft is done with. */
+  const finish = useCallback(() => clearDraft(mapId), [mapId])
+
+  return { ...history, base, dirty, message, setMessage, notes, setNotes, restoredAt, dismissRestored: () => setRestoredAt(null), discard, rebase, finish }
+}

@@ -1,0 +1,10 @@
+/** Drive logs: column model, header mapping, row decoding and the incremental analyser (pure TypeScript). */
+export * from './errors'
+export * from './columns'
+export * from './header'
+export { parseLogNumber, NOT_A_NUMBER } from './number-cell'
+export * from './row-decoder'
+export * from './types'
+export { resolveThresholds, DEFAULT_SPIN_SLIP, DEFAULT_MIN_EVENT_S } from './thresholds'
+export { positiveEnergyJ, J_PER_KWH } from './energy'
+export { createLogAnalyser, type LogAnalyser } from './analyser'

@@ -1,0 +1,59 @@
+/**
+ * Map-cell occupancy: seconds spent near each breakpoint of a pedal % × km/h map. Each interval's
+ * duration goes to the four breakpoints around the operating point with bilinear weights (the same
+ * weights the map lookup uses, clamped at the edges), so the grid says how long each cell value
+ * actually shaped the torque. Weights sum to 1, so the grid sums to the assigned time.
+ */
+import type { MapOccupancy } from './types'
+
+/** Index i and weight f of the upper neighbour: value = axis[i]·(1−f) + axis[i+1]·f, clamped. */
+function locate(axis: readonly number[], x: number): [number, number] {
+  const n = axis.length
+  if (n === 1 || x <= axis[0]) return [0, 0]
+  if (x >= axis[n - 1]) return [n - 2, 1]
+  let lo = 0
+  let hi = n - 1
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1
+    if (axis[mid] <= x) lo = mid; else hi = mid
+  }
+  return [lo, (x - axis[lo]) / (axis[lo + 1] - axis[lo])]
+}
+
+/** Accumulator for one map's axes. */
+export interface OccupancyGrid {
+  /** Adds `dtS` seconds at (pedal %, speed km/h). */
+  add(pedalPct: number, speedKmh: number, dtS: number): void
+  unassigned(dtS: number): void
+  result(): MapOccupancy
+}
+
+/** Axes must be ascending (checked by the analyser). @example createOccupancy('drive', [0, 100], [0, 50]).add(50, 25, 1) */
+export function createOccupancy(kind: 'drive' | 'regen', rowAxis: readonly number[], colAxis: readonly number[]): OccupancyGrid {
+  const rows = rowAxis.slice()
+  const cols = colAxis.slice()
+  const nc = cols.length
+  const grid = new Float64Array(rows.length * nc)
+  let unassignedS = 0
+  return {
+    add(pedalPct, speedKmh, dtS) {
+      const [r, fr] = locate(rows, pedalPct)
+      const [c, fc] = locate(cols, speedKmh)
+      const k = r * nc + c
+      grid[k] += dtS * (1 - fr) * (1 - fc)
+      if (fc > 0) grid[k + 1] += dtS * (1 - fr) * fc
+      if (fr > 0) {
+        grid[k + nc] += dtS * fr * (1 - fc)
+        if (fc > 0) grid[k + nc + 1] += dtS * fr * fc
+      }
+    },
+    unassigned(dtS) { unassignedS += dtS },
+    result: () => ({
+      kind,
+      rowAxis: rows.slice(),
+      colAxis: cols.slice(),
+      seconds: rows.map((_, r) => Array.from(grid.subarray(r * nc, r * nc + nc))),
+      unassignedS,
+    }),
+  }
+}

@@ -1,0 +1,141 @@
+/** Plain data types shared by the drive-log decoder, analyser and ingest. */
+import type { Surface, SurfaceId } from '../surfaces'
+import type { LogColumnRef } from './errors'
+
+/**
+ * One logged instant in working units. NaN (or undefined for the optional fields) marks a missing
+ * value. The analyser reads a sample during `push` and never keeps or changes it.
+ */
+export interface LogSample {
+  /** Time, s; must not decrease. */
+  timeS: number
+  /** Vehicle speed over ground V, km/h. */
+  roadSpeedKmh: number
+  /** Drive-wheel tread surface speeds Ω·R, km/h: one value or one per wheel; NaN entries are missing. */
+  wheelSpeedsKmh: readonly number[]
+  /** Accelerator pedal, %. */
+  accelPedalPct: number
+  brakePedalPct?: number
+  motorTorqueNm?: number
+  motorSpeedRpm?: number
+  /** Pack current, A, positive when discharging. */
+  batteryCurrentA?: number
+  batteryVoltageV?: number
+  /** 1-based line in the file (for error messages); defaults to sample count + 1. */
+  line?: number
+}
+
+/** Slip thresholds for event detection (dimensionless slip ratio, seconds). */
+export interface SlipThresholds {
+  /** Wheel spin when κ > spinSlip. Default: the surface's peak slip, or 0.15 without a surface. */
+  spinSlip?: number
+  /** Lock-up when κ < −lockSlip. Default: the spin threshold. */
+  lockSlip?: number
+  /** Shorter excursions are not reported as events, s. Default 0.1. */
+  minDurationS?: number
+}
+
+/** Options of {@link createLogAnalyser}. Nothing here is mutated. */
+export interface LogAnalyserOptions {
+  /** Map axes for the occupancy grid: rows pedal %, columns road speed km/h (ascending). */
+  map?: { rowAxis: readonly number[]; colAxis: readonly number[] }
+  /** 'drive' indexes rows by accelerator pedal; 'regen' by brake pedal, counting only accelerator-released time. */
+  kind?: 'drive' | 'regen'
+  /** Surface whose Magic Formula peak slip is the default spin/lock threshold. */
+  surface?: Surface | SurfaceId
+  thresholds?: SlipThresholds
+  /** A time step longer than this is a gap (nothing integrated across it), s. Default 1. */
+  maxGapS?: number
+  /** Accelerator at or below this counts as released for regen occupancy, %. Default 1. */
+  pedalReleasedPct?: number
+  /** Bounded reservoir for slip percentiles (exact while the moving-sample count ≤ size). Default 16 384. */
+  reservoirSize?: number
+  /** Upper bound on plotted points per channel (min and max per bucket). Default 2000. */
+  maxSeriesPoints?: number
+  /** Events kept; later ones are counted, not stored. Default 10 000. */
+  maxEvents?: number
+  /** The time column, for the position in a time-order error. */
+  timeColumn?: LogColumnRef
+}
+
+/** Conditions at one instant of an event. */
+export interface EventPoint { timeS: number; slip: number; roadSpeedKmh: number; accelPedalPct: number; brakePedalPct: number | null }
+
+/** A wheel-spin (κ above +threshold) or lock-up (κ below −threshold) episode. */
+export interface SlipEvent {
+  kind: 'spin' | 'lock'
+  startS: number
+  /** First in-band sample after the event, or the last flagged sample before a gap / the end, s. */
+  endS: number
+  durationS: number
+  /** Signed slip of largest magnitude during the event. */
+  peakSlip: number
+  start: EventPoint
+  peak: EventPoint
+  startLine: number
+}
+
+/** Seconds spent at each map breakpoint (bilinear share), plus time not attributable to any cell. */
+export interface MapOccupancy {
+  kind: 'drive' | 'regen'
+  rowAxis: number[]
+  colAxis: number[]
+  /** seconds[row][col], s. */
+  seconds: number[][]
+  /** Covered time with no usable pedal/speed (incomplete sample, or accelerator pressed in regen), s. */
+  unassignedS: number
+}
+
+/** Per-bucket minimum and maximum of one channel; null where the bucket holds no value. */
+export interface SeriesChannel { min: (number | null)[]; max: (number | null)[] }
+
+/** Min/max-bucketed time series for plotting; spikes survive as bucket extremes. */
+export interface DownsampledSeries {
+  bucketS: number
+  /** Bucket start times, s. */
+  tS: number[]
+  roadSpeedKmh: SeriesChannel
+  wheelSpeedKmh: SeriesChannel
+  accelPedalPct: SeriesChannel
+  brakePedalPct: SeriesChannel
+  motorTorqueNm: SeriesChannel
+  slip: SeriesChannel
+}
+
+/** Everything {@link createLogAnalyser} reports. Times s, speeds km/h, energy kWh. */
+export interface AnalysisResult {
+  samples: number
+  /** Samples missing road speed, all wheel speeds or the pedal; they carry no slip. */
+  incompleteSamples: number
+  startS: number
+  endS: number
+  durationS: number
+  gaps: { count: number; totalS: number }
+  /** durationS − gaps.totalS. */
+  coveredS: number
+  duplicateTimestamps: number
+  distanceKm: number
+  maxRoadSpeedKmh: number
+  /** From V·I by the trapezoid rule; null when the log has no voltage or current. */
+  energy: { drawnKWh: number; regeneratedKWh: number; netKWh: number } | null
+  slip: {
+    /** Samples moving faster than the slip floor (road or wheel ≥ 1.8 km/h); the statistics use these. */
+    movingSamples: number
+    min: number | null
+    max: number | null
+    meanAbs: number | null
+    maxAbs: number | null
+    p50Abs: number | null
+    p95Abs: number | null
+    p99Abs: number | null
+    quantiles: 'exact' | 'reservoir'
+  }
+  thresholds: { spinSlip: number; lockSlip: number; minDurationS: number; minSpeedKmh: number; source: 'option' | 'surface' | 'default' }
+  events: SlipEvent[]
+  /** Events beyond maxEvents, counted only. */
+  eventsDropped: number
+  /** Excursions beyond a threshold shorter than minDurationS. */
+  shortExcursions: number
+  occupancy: MapOccupancy | null
+  series: DownsampledSeries
+}

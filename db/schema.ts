@@ -1,6 +1,9 @@
 import { relations, sql } from 'drizzle-orm'
 import {
+  bigint,
   boolean,
+  date,
+  real,
   check,
   index,
   integer,
@@ -113,6 +116,83 @@ export const auditLog = pgTable(
     details: jsonb('details').$type<Record<string, unknown>>().notNull().default({}),
   },
   (t) => [index('audit_log_entity_idx').on(t.entityType, t.entityId), index('audit_log_at_idx').on(t.at)],
+)
+
+/** Ratings on a small fixed scale, 1 (bad) … 5 (good). */
+export interface ReportRatings {
+  launch: number
+  tipIn: number
+  steadyPedal: number
+  liftOffRegen: number
+  brakeBlending: number
+}
+
+/** A point on the map where something was wrong; severity 4 is a safety concern. */
+export interface ReportFlag {
+  pedalPct: number
+  speedKmh: number
+  what: string
+  severity: 1 | 2 | 3 | 4
+}
+
+export const driveReports = pgTable(
+  'drive_reports',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    revisionId: integer('revision_id')
+      .notNull()
+      .references(() => mapRevisions.id),
+    driverId: integer('driver_id')
+      .notNull()
+      .references(() => users.id),
+    drivenOn: date('driven_on').notNull(),
+    vehicleUnit: text('vehicle_unit').notNull(),
+    route: text('route').notNull(),
+    surface: text('surface').notNull(),
+    weather: text('weather').notNull(),
+    ambientC: real('ambient_c').notNull(),
+    loadCase: text('load_case').notNull(),
+    payloadKg: real('payload_kg').notNull(),
+    trailer: boolean('trailer').notNull(),
+    ratings: jsonb('ratings').$type<ReportRatings>().notNull(),
+    comments: text('comments').notNull().default(''),
+    flags: jsonb('flags').$type<ReportFlag[]>().notNull().default([]),
+    /** none | open | resolved: a severity-4 flag opens it; only a lead engineer closes it, with a comment. */
+    safety: text('safety').$type<'none' | 'open' | 'resolved'>().notNull().default('none'),
+    safetyResolvedBy: integer('safety_resolved_by').references(() => users.id),
+    safetyResolvedAt: timestamp('safety_resolved_at', { withTimezone: true }),
+    safetyResolution: text('safety_resolution'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    index('drive_reports_revision_idx').on(t.revisionId),
+    index('drive_reports_driver_idx').on(t.driverId),
+    check('drive_reports_safety_check', sql`${t.safety} in ('none', 'open', 'resolved')`),
+  ],
+)
+
+export const driveLogs = pgTable(
+  'drive_logs',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    reportId: integer('report_id')
+      .notNull()
+      .references(() => driveReports.id),
+    /** Chosen by the server, never by the client. */
+    objectKey: text('object_key').notNull(),
+    fileName: text('file_name').notNull(),
+    sizeBytes: bigint('size_bytes', { mode: 'number' }).notNull(),
+    /** uploaded → analysing → done | failed */
+    status: text('status').notNull().default('uploaded'),
+    progressBytes: bigint('progress_bytes', { mode: 'number' }).notNull().default(0),
+    errorMessage: text('error_message'),
+    mapping: jsonb('mapping').$type<Record<string, string>>().notNull().default({}),
+    analysis: jsonb('analysis').$type<Record<string, unknown>>(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    analysedAt: timestamp('analysed_at', { withTimezone: true }),
+  },
+  (t) => [uniqueIndex('drive_logs_object_key_idx').on(t.objectKey), index('drive_logs_report_idx').on(t.reportId)],
 )
 
 export const usersRelations = relations(users, ({ many }) => ({ revisions: many(mapRevisions) }))

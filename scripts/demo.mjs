@@ -1,8 +1,17 @@
 // Demo: migrate, load the invented demo scenario (idempotent), then serve the app on 127.0.0.1:3000.
-import { bin, buildIfStale, run } from './lib.mjs'
+// The local stand-ins for S3 and e-mail start first, because the demo drive reports carry logs.
+import path from 'node:path'
+import { bin, buildIfStale, root, run } from './lib.mjs'
+import { startLocalServices } from './local-services.mjs'
 
 await buildIfStale()
-const env = { ...process.env, MAPWRIGHT_DEMO: '1' }
+const services = await startLocalServices(process.env.MAPWRIGHT_DATA_DIR ?? path.join(root, '.data'))
+const env = { ...process.env, ...services.env, MAPWRIGHT_DEMO: '1' }
 const seeded = await run(bin('tsx'), ['scripts/seed.ts'], { env })
-if (seeded !== 0) process.exit(seeded)
-process.exit(await run(process.execPath, ['scripts/start.mjs'], { env }))
+if (seeded !== 0) {
+  await services.close()
+  process.exit(seeded)
+}
+const code = await run(process.execPath, ['scripts/start.mjs'], { env })
+await services.close()
+process.exit(code)

@@ -7,6 +7,16 @@ const schema = z.object({
   DATABASE_URL: z.string().startsWith('postgres', 'DATABASE_URL must be a postgres:// or postgresql:// URL').optional(),
   PGLITE_DATA_DIR: z.string().optional(),
   MAPWRIGHT_DEMO: z.enum(['0', '1']).optional(),
+  S3_ENDPOINT: z.url('S3_ENDPOINT must be a URL such as http://127.0.0.1:4569').optional(),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_BUCKET: z.string().min(3, 'S3_BUCKET must name a bucket').default('mapwright-logs'),
+  S3_ACCESS_KEY_ID: z.string().optional(),
+  S3_SECRET_ACCESS_KEY: z.string().optional(),
+  S3_FORCE_PATH_STYLE: z.enum(['0', '1']).optional(),
+  SMTP_URL: z.string().regex(/^smtps?:\/\//, 'SMTP_URL must start with smtp:// or smtps://').optional(),
+  MAIL_FROM: z.string().default('Mapwright <mapwright@localhost>'),
+  MAIL_OUTBOX_FILE: z.string().optional(),
+  LOG_MAX_BYTES: z.coerce.number().int().positive().default(200 * 1024 * 1024),
 })
 
 export type Env = z.infer<typeof schema> & { authSecret: string }

@@ -126,3 +126,13 @@ export async function getRevision(mapId: number, number?: number): Promise<Revis
     .limit(1)
   return rows[0] ?? null
 }
+
+/** A revision's map and number by its row id (drive reports point at the row id). */
+export async function getRevisionById(id: number): Promise<{ id: number; mapId: number; number: number; checksum: string } | null> {
+  const db = await getDb()
+  const rows = await db
+    .select({ id: mapRevisions.id, mapId: mapRevisions.mapId, number: mapRevisions.number, checksum: mapRevisions.checksum })
+    .from(mapRevisions)
+    .where(eq(mapRevisions.id, id))
+  return rows[0] ?? null
+}

@@ -1,0 +1,54 @@
+import { z } from 'zod'
+import { SURFACE_IDS } from '@/physics'
+
+export const RATING_KEYS = ['launch', 'tipIn', 'steadyPedal', 'liftOffRegen', 'brakeBlending'] as const
+export const RATING_LABELS: Record<(typeof RATING_KEYS)[number], string> = {
+  launch: 'Launch',
+  tipIn: 'Tip-in',
+  steadyPedal: 'Steady pedal control',
+  liftOffRegen: 'Lift-off regen',
+  brakeBlending: 'Brake blending',
+}
+/** 1 = unacceptable … 5 = good; a short fixed scale a driver can answer with a thumb. */
+export const RATING_SCALE = [1, 2, 3, 4, 5] as const
+
+export const SEVERITY_LABELS = { 1: 'Note', 2: 'Annoying', 3: 'Must fix', 4: 'Safety concern' } as const
+
+const rating = (label: string) =>
+  z.number({ error: `${label}: choose a rating from 1 to 5` }).int(`${label}: choose a rating from 1 to 5`).min(1, `${label}: choose a rating from 1 to 5`).max(5, `${label}: choose a rating from 1 to 5`)
+
+export const flagSchema = z.object({
+  pedalPct: z.number({ error: 'Flag pedal must be a number (%)' }).min(0, 'Flag pedal must be 0–100 %').max(100, 'Flag pedal must be 0–100 %'),
+  speedKmh: z.number({ error: 'Flag speed must be a number (km/h)' }).min(0, 'Flag speed must not be negative').max(200, 'Flag speed must be at most 200 km/h'),
+  what: z.string().trim().min(1, 'Say what happened at the flagged point').max(500),
+  severity: z.union([z.literal(1), z.literal(2), z.literal(3), z.literal(4)], { error: 'Severity must be 1, 2, 3 or 4' }),
+})
+
+/** One schema for the report form and the API, so both refuse the same input with the same words. */
+export const reportInputSchema = z.object({
+  revisionId: z.number({ error: 'Choose the revision the vehicle was flashed with' }).int().positive(),
+  drivenOn: z.iso.date('Date must be a calendar date (YYYY-MM-DD)'),
+  vehicleUnit: z.string().trim().min(1, 'Vehicle unit is required (e.g. its fleet number)').max(60),
+  route: z.string().trim().min(1, 'Route or course is required').max(200),
+  surface: z.enum(SURFACE_IDS, { error: 'Choose a road surface' }),
+  weather: z.string().trim().min(1, 'Weather is required').max(120),
+  ambientC: z.number({ error: 'Ambient temperature must be a number (°C)' }).min(-50, 'Ambient temperature must be at least −50 °C').max(60, 'Ambient temperature must be at most 60 °C'),
+  loadCase: z.enum(['empty', 'laden', 'trailer-empty', 'trailer-laden'], { error: 'Choose a load case' }),
+  payloadKg: z.number({ error: 'Payload must be a number (kg)' }).min(0, 'Payload must not be negative').max(60_000, 'Payload must be at most 60,000 kg'),
+  trailer: z.boolean(),
+  ratings: z.object({
+    launch: rating('Launch'),
+    tipIn: rating('Tip-in'),
+    steadyPedal: rating('Steady pedal control'),
+    liftOffRegen: rating('Lift-off regen'),
+    brakeBlending: rating('Brake blending'),
+  }),
+  comments: z.string().max(10_000, 'Comments must be at most 10,000 characters').default(''),
+  flags: z.array(flagSchema).max(100, 'At most 100 flagged points').default([]),
+})
+
+export type ReportInput = z.infer<typeof reportInputSchema>
+
+export const resolveSafetySchema = z.object({
+  comment: z.string().trim().min(1, 'Say how the safety concern was resolved').max(5000),
+})

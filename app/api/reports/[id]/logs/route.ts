@@ -1,0 +1,54 @@
+import { randomUUID } from 'node:crypto'
+import { Readable } from 'node:stream'
+import { withRole } from '@/app/_lib/access'
+import { env } from '@/app/_lib/env'
+import { ValidationError } from '@/app/_lib/errors'
+import { assertOwner, loadReport } from '@/app/_lib/report-access'
+import { startLogAnalysis } from '@/app/_lib/log-jobs'
+import { deleteObject, putObjectStream } from '@/app/_lib/storage'
+import { CsvUploadGuard, PayloadTooLargeError, UnsupportedFileError } from '@/app/_lib/upload-guard'
+import { createLog, listLogs } from '@/db/queries/logs'
+import { z } from 'zod'
+
+const mappingSchema = z.record(z.string(), z.string().max(200)).refine((m) => Object.keys(m).length <= 40, 'At most 40 mapped columns')
+
+// GET /api/reports/:id/logs — the report's logs with status and progress
+export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }) => {
+  const report = await loadReport(params.id)
+  return Response.json({ logs: await listLogs(report.id) })
+})
+
+// POST /api/reports/:id/logs?name=&mapping= — the filing driver uploads a CSV data log (raw body), streamed to storage
+export const POST = withRole<{ id: string }>(['test_driver'], async (req, { user, params }) => {
+  const report = await loadReport(params.id)
+  assertOwner(report, user)
+  const q = new URL(req.url).searchParams
+  const fileName = (q.get('name') ?? 'log.csv').slice(0, 200)
+  if (!/\.(csv|txt)$/i.test(fileName)) throw new UnsupportedFileError(`${fileName} is not a .csv file`)
+  let mapping: Record<string, string> = {}
+  if (q.get('mapping')) {
+    try {
+      mapping = mappingSchema.parse(JSON.parse(q.get('mapping') ?? '{}'))
+    } catch {
+      throw new ValidationError('mapping must be a JSON object of our column name → your header name')
+    }
+  }
+  const limit = env().LOG_MAX_BYTES
+  const declared = Number(req.headers.get('content-length') ?? NaN)
+  // Refuse an oversize file before reading a byte of it when the client says how large it is.
+  if (declared > limit) throw new PayloadTooLargeError(limit)
+  if (!req.body) throw new UnsupportedFileError('The file is empty')
+
+  const objectKey = `logs/report-${report.id}/${randomUUID()}.csv`
+  const guard = new CsvUploadGuard(limit)
+  const body = Readable.fromWeb(req.body as import('node:stream/web').ReadableStream<Uint8Array>).pipe(guard)
+  try {
+    await putObjectStream(objectKey, body, 'text/csv')
+  } catch (e) {
+    await deleteObject(objectKey).catch(() => {})
+    throw guard.destroyed && guard.errored ? guard.errored : e
+  }
+  const log = await createLog({ reportId: report.id, objectKey, fileName, sizeBytes: guard.bytes, mapping })
+  startLogAnalysis(log.id)
+  return Response.json({ log }, { status: 201 })
+})

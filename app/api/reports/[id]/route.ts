@@ -1,0 +1,22 @@
+import { withRole } from '@/app/_lib/access'
+import { assertOwner, checkReportTarget, loadReport } from '@/app/_lib/report-access'
+import { readJson } from '@/app/_lib/request'
+import { reportInputSchema } from '@/app/_schemas/report'
+import { getReport, updateReport } from '@/db/queries/reports'
+import { listLogs } from '@/db/queries/logs'
+
+// GET /api/reports/:id — one drive report with its logs (status and progress, no analysis)
+export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }) => {
+  const report = await loadReport(params.id)
+  return Response.json({ report, logs: await listLogs(report.id) })
+})
+
+// PUT /api/reports/:id — the driver who filed it corrects the report
+export const PUT = withRole<{ id: string }>(['test_driver'], async (req, { user, params }) => {
+  const report = await loadReport(params.id)
+  assertOwner(report, user)
+  const input = await readJson(req, reportInputSchema)
+  await checkReportTarget(input)
+  await updateReport(report.id, input, user.id)
+  return Response.json({ report: await getReport(report.id) })
+})

@@ -1,0 +1,26 @@
+import { withRole } from '@/app/_lib/access'
+import { checkReportTarget } from '@/app/_lib/report-access'
+import { readJson } from '@/app/_lib/request'
+import { reportInputSchema } from '@/app/_schemas/report'
+import { createReport, getReport, listReports } from '@/db/queries/reports'
+
+// GET /api/reports?revisionId=&mapId=&mine=1&openSafety=1 — drive reports, newest first
+export const GET = withRole('signed-in', async (req, { user }) => {
+  const q = new URL(req.url).searchParams
+  const num = (k: string) => (q.get(k) ? Number(q.get(k)) : undefined)
+  const reports = await listReports({
+    revisionId: num('revisionId'),
+    mapId: num('mapId'),
+    driverId: q.get('mine') === '1' ? user.id : num('driverId'),
+    openSafety: q.get('openSafety') === '1',
+  })
+  return Response.json({ reports })
+})
+
+// POST /api/reports — a test driver files a drive report against one exact revision
+export const POST = withRole(['test_driver'], async (req, { user }) => {
+  const input = await readJson(req, reportInputSchema)
+  await checkReportTarget(input)
+  const id = await createReport(input, user.id)
+  return Response.json({ report: await getReport(id) }, { status: 201 })
+})

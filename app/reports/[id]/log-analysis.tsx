@@ -1,0 +1,70 @@
+'use client'
+import { useQuery } from '@tanstack/react-query'
+import { api } from '@/app/_components/api-client'
+import type { AnalysisResult } from '@/physics'
+import { LogTimePlot } from './log-time-plot'
+import { OccupancyGrid } from './occupancy-grid'
+
+const fmt = (v: number | null | undefined, d = 2) => (v === null || v === undefined ? '—' : v.toFixed(d))
+
+/** A log's analysis: summary figures, the wheel-spin and lock-up events, the plot and the map occupancy. */
+export function LogAnalysisView(props: { reportId: number; logId: number; mapKind: 'drive' | 'regen' }) {
+  const q = useQuery({
+    queryKey: ['log', props.logId],
+    queryFn: () => api<{ log: { analysis: AnalysisResult | null } }>(`/api/reports/${props.reportId}/logs/${props.logId}`),
+  })
+  const a = q.data?.log.analysis
+  if (!a) return <p className="text-sm text-slate-500">Loading analysis…</p>
+  const spins = a.events.filter((e) => e.kind === 'spin').length
+  const locks = a.events.length - spins
+  return (
+    <div className="space-y-3">
+      <dl className="grid grid-cols-2 gap-2 text-sm sm:grid-cols-4" data-testid="log-summary">
+        <Fig label="Duration" value={`${fmt(a.durationS / 60, 1)} min`} />
+        <Fig label="Distance" value={`${fmt(a.distanceKm, 1)} km`} />
+        <Fig label="Top speed" value={`${fmt(a.maxRoadSpeedKmh, 1)} km/h`} />
+        <Fig label="Samples" value={a.samples.toLocaleString('en')} />
+        <Fig label="Wheel-spin events" value={String(spins)} testId="spin-count" />
+        <Fig label="Lock-up events" value={String(locks)} testId="lock-count" />
+        <Fig label="Peak slip" value={fmt(a.slip.max, 3)} />
+        <Fig label="|slip| p95" value={fmt(a.slip.p95Abs, 3)} />
+        {a.energy && <Fig label="Energy drawn / regenerated" value={`${fmt(a.energy.drawnKWh, 1)} / ${fmt(a.energy.regeneratedKWh, 1)} kWh`} />}
+      </dl>
+      <LogTimePlot analysis={a} />
+      {a.events.length > 0 && (
+        <div className="overflow-x-auto">
+          <table className="w-full text-sm" data-testid="event-table">
+            <thead className="text-left text-xs uppercase text-slate-500">
+              <tr><th>Event</th><th>Start (s)</th><th>Duration (s)</th><th>Peak slip</th><th>Pedal at start (%)</th><th>Speed at start (km/h)</th></tr>
+            </thead>
+            <tbody>
+              {a.events.slice(0, 200).map((e, i) => (
+                <tr key={i} className="border-t border-line">
+                  <td>{e.kind === 'spin' ? 'Wheel spin' : 'Lock-up'}</td>
+                  <td>{fmt(e.startS, 1)}</td>
+                  <td>{fmt(e.durationS, 2)}</td>
+                  <td>{fmt(e.peakSlip, 3)}</td>
+                  <td>{fmt(e.kind === 'spin' ? e.start.accelPedalPct : e.start.brakePedalPct, 0)}</td>
+                  <td>{fmt(e.start.roadSpeedKmh, 1)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+      {a.occupancy && <OccupancyGrid occupancy={a.occupancy} events={a.events} mapKind={props.mapKind} />}
+      <p className="text-xs text-slate-500">
+        Slip thresholds: spin above {fmt(a.thresholds.spinSlip, 3)}, lock below −{fmt(a.thresholds.lockSlip, 3)} ({a.thresholds.source}); events shorter than {a.thresholds.minDurationS} s are not counted ({a.shortExcursions} short excursions).
+      </p>
+    </div>
+  )
+}
+
+function Fig({ label, value, testId }: { label: string; value: string; testId?: string }) {
+  return (
+    <div className="rounded border border-line px-2 py-1">
+      <dt className="text-xs text-slate-500">{label}</dt>
+      <dd className="font-semibold tabular-nums" data-testid={testId}>{value}</dd>
+    </div>
+  )
+}

@@ -1,0 +1,88 @@
+'use client'
+import { useQuery, useQueryClient } from '@tanstack/react-query'
+import { useState } from 'react'
+import { api } from '@/app/_components/api-client'
+import { uploadLog } from './upload-log'
+import { LogAnalysisView } from './log-analysis'
+
+export interface LogItem {
+  id: number
+  fileName: string
+  sizeBytes: number
+  status: string
+  progressBytes: number
+  errorMessage: string | null
+  createdAt: string
+}
+
+const mb = (b: number) => `${(b / (1024 * 1024)).toFixed(1)} MB`
+
+export function LogsPanel(props: { reportId: number; initialLogs: LogItem[]; canUpload: boolean; mapKind: 'drive' | 'regen' }) {
+  const qc = useQueryClient()
+  const [upload, setUpload] = useState<{ name: string; fraction: number } | null>(null)
+  const [error, setError] = useState<string | null>(null)
+  const [mapping, setMapping] = useState('')
+  const logs = useQuery({
+    queryKey: ['logs', props.reportId],
+    initialData: { logs: props.initialLogs },
+    queryFn: () => api<{ logs: LogItem[] }>(`/api/reports/${props.reportId}/logs`),
+    // Poll while a log is still being parsed, so the progress bar moves.
+    refetchInterval: (q) => (q.state.data?.logs.some((l) => l.status === 'uploaded' || l.status === 'analysing') ? 1000 : false),
+  })
+
+  async function onFile(file: File) {
+    setError(null)
+    setUpload({ name: file.name, fraction: 0 })
+    const q = new URLSearchParams({ name: file.name })
+    if (mapping.trim()) q.set('mapping', mapping.trim())
+    try {
+      await uploadLog(`/api/reports/${props.reportId}/logs?${q}`, file, (fraction) => setUpload({ name: file.name, fraction }))
+      await qc.invalidateQueries({ queryKey: ['logs', props.reportId] })
+    } catch (e) {
+      setError(e instanceof Error ? e.message : String(e))
+    } finally {
+      setUpload(null)
+    }
+  }
+
+  return (
+    <section className="card space-y-3">
+      <h2 className="font-semibold">Data logs</h2>
+      {props.canUpload && (
+        <div className="space-y-2">
+          <label htmlFor="log-file" className="label">Attach the vehicle’s data log (CSV, up to 200 MB)</label>
+          <input id="log-file" type="file" accept=".csv,text/csv" disabled={Boolean(upload)} onChange={(e) => e.target.files?.[0] && onFile(e.target.files[0])} />
+          <details className="text-sm">
+            <summary className="cursor-pointer text-slate-600">Different column names? Map them</summary>
+            <textarea aria-label="Column mapping (JSON)" className="field mt-1 font-mono text-xs" rows={3} placeholder='{"road_speed_kmh": "VehSpd", "time_s": "t"}' value={mapping} onChange={(e) => setMapping(e.target.value)} />
+          </details>
+          {upload && <Progress label={`Uploading ${upload.name}`} fraction={upload.fraction} />}
+          {error && <p role="alert" className="error-text text-sm">{error}</p>}
+        </div>
+      )}
+      {logs.data.logs.length === 0 && <p className="text-sm text-slate-500">No log attached.</p>}
+      {logs.data.logs.map((l) => (
+        <div key={l.id} className="space-y-2 border-t border-line pt-2" data-testid={`log-${l.id}`}>
+          <p className="text-sm">
+            <a className="text-accent hover:underline" href={`/api/reports/${props.reportId}/logs/${l.id}/file`}>{l.fileName}</a> · {mb(l.sizeBytes)} · <span data-testid="log-status">{l.status}</span>
+          </p>
+          {(l.status === 'analysing' || l.status === 'uploaded') && <Progress label="Reading the log" fraction={l.sizeBytes ? l.progressBytes / l.sizeBytes : 0} />}
+          {l.status === 'failed' && <p role="alert" className="error-text text-sm">{l.errorMessage}</p>}
+          {l.status === 'done' && <LogAnalysisView reportId={props.reportId} logId={l.id} mapKind={props.mapKind} />}
+        </div>
+      ))}
+    </section>
+  )
+}
+
+function Progress({ label, fraction }: { label: string; fraction: number }) {
+  const pct = Math.round(Math.min(1, Math.max(0, fraction)) * 100)
+  return (
+    <div>
+      <p className="text-xs text-slate-600">{label}: {pct} %</p>
+      <div role="progressbar" aria-label={label} aria-valuenow={pct} aria-valuemin={0} aria-valuemax={100} className="h-2 rounded bg-slate-200">
+        <div className="h-2 rounded bg-accent" style={{ width: `${pct}%` }} />
+      </div>
+    </div>
+  )
+}

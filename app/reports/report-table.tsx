@@ -1,0 +1,45 @@
+import Link from 'next/link'
+import type { ReportRow } from '@/db/queries/reports'
+import { SURFACES, type SurfaceId } from '@/physics'
+
+export function SafetyBadge({ safety }: { safety: string }) {
+  if (safety === 'open') return <span className="rounded bg-danger px-1.5 py-0.5 text-xs font-semibold text-white">safety concern open</span>
+  if (safety === 'resolved') return <span className="rounded bg-slate-200 px-1.5 py-0.5 text-xs">safety concern resolved</span>
+  return null
+}
+
+export function surfaceLabel(id: string): string {
+  return id in SURFACES ? SURFACES[id as SurfaceId].label : id
+}
+
+export function ReportTable({ reports }: { reports: ReportRow[] }) {
+  if (reports.length === 0) return <p className="text-slate-600">No drive reports.</p>
+  return (
+    <div className="card overflow-x-auto p-0">
+      <table className="w-full text-sm">
+        <thead className="bg-slate-50 text-left text-xs uppercase text-slate-600">
+          <tr>
+            <th className="px-3 py-2">Date</th>
+            <th className="px-3 py-2">Map and revision</th>
+            <th className="px-3 py-2">Driver</th>
+            <th className="px-3 py-2">Surface, load</th>
+            <th className="px-3 py-2">Flags</th>
+            <th className="px-3 py-2" />
+          </tr>
+        </thead>
+        <tbody>
+          {reports.map((r) => (
+            <tr key={r.id} className="border-t border-line" data-testid={`report-row-${r.id}`}>
+              <td className="px-3 py-2 whitespace-nowrap">{r.drivenOn}</td>
+              <td className="px-3 py-2">{r.programName} · {r.mapName} r{r.revisionNumber}</td>
+              <td className="px-3 py-2">{r.driverName}</td>
+              <td className="px-3 py-2">{surfaceLabel(r.surface)}, {r.loadCase}</td>
+              <td className="px-3 py-2">{r.flags.length} <SafetyBadge safety={r.safety} /></td>
+              <td className="px-3 py-2"><Link href={`/reports/${r.id}`} className="text-accent hover:underline">Open</Link></td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  )
+}

@@ -1,0 +1,139 @@
+import { and, desc, eq, sql, type SQL } from 'drizzle-orm'
+import { getDb } from '../client'
+import { driveReports, mapRevisions, maps, users, vehiclePrograms, type ReportFlag, type ReportRatings } from '../schema'
+import { recordAudit } from './audit'
+
+export interface ReportFields {
+  revisionId: number
+  drivenOn: string
+  vehicleUnit: string
+  route: string
+  surface: string
+  weather: string
+  ambientC: number
+  loadCase: string
+  payloadKg: number
+  trailer: boolean
+  ratings: ReportRatings
+  comments: string
+  flags: ReportFlag[]
+}
+
+const safetyFlags = (flags: ReportFlag[]) => flags.filter((f) => f.severity === 4).length
+
+const columns = {
+  id: driveReports.id,
+  revisionId: driveReports.revisionId,
+  revisionNumber: mapRevisions.number,
+  revisionChecksum: mapRevisions.checksum,
+  mapId: maps.id,
+  mapName: maps.name,
+  mapKind: maps.kind,
+  programId: vehiclePrograms.id,
+  programName: vehiclePrograms.name,
+  driverId: driveReports.driverId,
+  driverName: users.name,
+  drivenOn: driveReports.drivenOn,
+  vehicleUnit: driveReports.vehicleUnit,
+  route: driveReports.route,
+  surface: driveReports.surface,
+  weather: driveReports.weather,
+  ambientC: driveReports.ambientC,
+  loadCase: driveReports.loadCase,
+  payloadKg: driveReports.payloadKg,
+  trailer: driveReports.trailer,
+  ratings: driveReports.ratings,
+  comments: driveReports.comments,
+  flags: driveReports.flags,
+  safety: driveReports.safety,
+  safetyResolvedAt: driveReports.safetyResolvedAt,
+  safetyResolution: driveReports.safetyResolution,
+  createdAt: driveReports.createdAt,
+  updatedAt: driveReports.updatedAt,
+}
+
+async function selectReports(where: SQL | undefined, limit = 200) {
+  const db = await getDb()
+  return db
+    .select(columns)
+    .from(driveReports)
+    .innerJoin(mapRevisions, eq(mapRevisions.id, driveReports.revisionId))
+    .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .innerJoin(users, eq(users.id, driveReports.driverId))
+    .where(where)
+    .orderBy(desc(driveReports.drivenOn), desc(driveReports.id))
+    .limit(limit)
+}
+
+export type ReportRow = Awaited<ReturnType<typeof selectReports>>[number]
+
+export async function getReport(id: number): Promise<ReportRow | null> {
+  return (await selectReports(eq(driveReports.id, id), 1))[0] ?? null
+}
+
+export async function listReports(filter: { revisionId?: number; mapId?: number; driverId?: number; openSafety?: boolean } = {}) {
+  const conds: SQL[] = []
+  if (filter.revisionId) conds.push(eq(driveReports.revisionId, filter.revisionId))
+  if (filter.mapId) conds.push(eq(maps.id, filter.mapId))
+  if (filter.driverId) conds.push(eq(driveReports.driverId, filter.driverId))
+  if (filter.openSafety) conds.push(eq(driveReports.safety, 'open'))
+  return selectReports(conds.length ? and(...conds) : undefined)
+}
+
+export async function createReport(input: ReportFields, driverId: number): Promise<number> {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(driveReports)
+      .values({ ...input, driverId, safety: safetyFlags(input.flags) > 0 ? 'open' : 'none' })
+      .returning({ id: driveReports.id })
+    await recordAudit({ actorId: driverId, action: 'report.create', entityType: 'drive_report', entityId: row.id, details: { revisionId: input.revisionId, safety: safetyFlags(input.flags) > 0 } }, tx)
+    return row.id
+  })
+}
+
+/**
+ * Replace a report's fields. A safety concern never closes by editing: once open it stays open
+ * until a lead resolves it, and a resolved one reopens if more severity-4 flags are added.
+ */
+export async function updateReport(id: number, input: ReportFields, actorId: number): Promise<void> {
+  const db = await getDb()
+  await db.transaction(async (tx) => {
+    const [cur] = await tx.select({ safety: driveReports.safety, flags: driveReports.flags }).from(driveReports).where(eq(driveReports.id, id)).for('update')
+    const before = safetyFlags(cur.flags)
+    const after = safetyFlags(input.flags)
+    const safety = cur.safety === 'open' || (cur.safety === 'none' && after > 0) || (cur.safety === 'resolved' && after > before) ? 'open' : cur.safety
+    await tx.update(driveReports).set({ ...input, safety, updatedAt: new Date() }).where(eq(driveReports.id, id))
+    await recordAudit({ actorId, action: 'report.update', entityType: 'drive_report', entityId: id, details: { safety } }, tx)
+  })
+}
+
+export async function resolveSafety(id: number, leadId: number, comment: string): Promise<boolean> {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const rows = await tx
+      .update(driveReports)
+      .set({ safety: 'resolved', safetyResolvedBy: leadId, safetyResolvedAt: new Date(), safetyResolution: comment, updatedAt: new Date() })
+      .where(and(eq(driveReports.id, id), eq(driveReports.safety, 'open')))
+      .returning({ id: driveReports.id })
+    if (!rows[0]) return false
+    await recordAudit({ actorId: leadId, action: 'report.safety-resolved', entityType: 'drive_report', entityId: id, details: { comment } }, tx)
+    return true
+  })
+}
+
+/** Reports per revision, and how many have an open safety concern (for notebook and release gate). */
+export async function reportCountsByRevision(mapId: number) {
+  const db = await getDb()
+  return db
+    .select({
+      revisionId: driveReports.revisionId,
+      reports: sql<number>`count(*)::int`,
+      openSafety: sql<number>`count(*) filter (where ${driveReports.safety} = 'open')::int`,
+    })
+    .from(driveReports)
+    .innerJoin(mapRevisions, eq(mapRevisions.id, driveReports.revisionId))
+    .where(eq(mapRevisions.mapId, mapId))
+    .groupBy(driveReports.revisionId)
+}

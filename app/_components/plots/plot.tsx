@@ -1,0 +1,56 @@
+'use client'
+/**
+ * The one way the app draws a Plotly figure: loaded in the browser only (`ssr: false`), with the
+ * mode bar always on and its "download plot as PNG" button named after the figure.
+ */
+import dynamic from 'next/dynamic'
+import type { Config, Data, Layout } from 'plotly.js'
+
+const PlotlyComponent = dynamic(() => import('./plotly-component'), {
+  ssr: false,
+  loading: () => <div className="grid h-full min-h-40 place-items-center text-sm text-slate-500">Loading plot…</div>,
+})
+
+/** What a relayout event carries that we use: the 3D camera after a drag. */
+export type RelayoutEvent = Record<string, unknown>
+
+export interface PlotProps {
+  data: Data[]
+  layout: Partial<Layout>
+  /** PNG file name (without extension) for the mode bar's download button. */
+  filename: string
+  height?: number
+  onRelayout?: (e: RelayoutEvent) => void
+  className?: string
+}
+
+const BASE_LAYOUT: Partial<Layout> = {
+  autosize: true,
+  margin: { l: 56, r: 16, t: 36, b: 48 },
+  font: { family: 'Inter, ui-sans-serif, system-ui, sans-serif', size: 12, color: '#14202b' },
+  paper_bgcolor: '#ffffff',
+  plot_bgcolor: '#ffffff',
+  // Keeps zoom and camera across data updates (a unit switch must not reset the view).
+  uirevision: 'keep',
+}
+
+export function Plot({ data, layout, filename, height = 380, onRelayout, className = '' }: PlotProps) {
+  const config: Partial<Config> = {
+    displaylogo: false,
+    displayModeBar: true,
+    responsive: true,
+    toImageButtonOptions: { format: 'png', filename, scale: 2 },
+  }
+  return (
+    <div className={className} style={{ height }}>
+      <PlotlyComponent
+        data={data}
+        layout={{ ...BASE_LAYOUT, ...layout }}
+        config={config}
+        onRelayout={onRelayout}
+        useResizeHandler
+        style={{ width: '100%', height: '100%' }}
+      />
+    </div>
+  )
+}

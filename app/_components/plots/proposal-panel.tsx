@@ -1,0 +1,94 @@
+'use client'
+/**
+ * "Propose a traction-safe draft": asks the server for a draft of a revision with every cell above
+ * the traction limit lowered to the limit less a margin, shows the changes, and saves the draft as
+ * a new revision only when the engineer writes a message and presses save, like any other edit.
+ */
+import Link from 'next/link'
+import { useMutation } from '@tanstack/react-query'
+import { useState } from 'react'
+import { api } from '@/app/_components/api-client'
+import type { ProposalResponse } from '@/app/_lib/propose'
+import { ChangeTable } from './change-table'
+import { LOAD_CASE_LABELS, type OverlayChoice } from './overlay-controls'
+import { SURFACES } from '@/physics/surfaces'
+import { fmt0, type PlotUnits } from './units'
+
+export interface ProposalPanelProps {
+  mapId: number
+  mapName: string
+  baseNumber: number
+  choice: OverlayChoice
+  units: PlotUnits
+}
+
+export function ProposalPanel({ mapId, mapName, baseNumber, choice, units }: ProposalPanelProps) {
+  const [margin, setMargin] = useState(10)
+  const [message, setMessage] = useState('')
+  const where = `${LOAD_CASE_LABELS[choice.loadCase].toLowerCase()} on ${SURFACES[choice.surface].label.toLowerCase()}${choice.gradePct ? `, ${choice.gradePct} % grade` : ''}`
+  const propose = useMutation({
+    mutationFn: () => api<ProposalResponse>(`/api/maps/${mapId}/revisions/${baseNumber}/propose`, {
+      method: 'POST', json: { loadCase: choice.loadCase, surface: choice.surface, gradePct: choice.gradePct, marginPct: margin },
+    }),
+  })
+  const save = useMutation({
+    mutationFn: (p: ProposalResponse) => api<{ revision: { number: number } }>(`/api/maps/${mapId}/revisions`, {
+      method: 'POST',
+      json: { parentNumber: p.latestNumber, message, notes: `Traction-safe draft from r${p.baseNumber}: cells above the traction limit for ${where}, less ${margin} %, lowered (${p.changes.length} cells).`, table: p.table },
+    }),
+  })
+  const p = propose.data
+  const rows = p ? p.changes.map((c) => ({ pedalPct: p.table.rowAxis[c.row], speedKmh: p.table.colAxis[c.col], before: c.before, after: c.after, note: c.reason === 'limit' ? 'above the limit' : 'pedal order' })) : []
+  return (
+    <section className="card space-y-3" aria-label="Traction-safe draft">
+      <div className="flex flex-wrap items-end gap-3">
+        <h3 className="font-semibold">Traction-safe draft of {mapName} r{baseNumber}</h3>
+        <label className="w-28">
+          <span className="label">Margin (%)</span>
+          <input className="field" type="number" min={0} max={50} value={margin} onChange={(e) => setMargin(Math.min(50, Math.max(0, Number(e.target.value) || 0)))} />
+        </label>
+        <button type="button" className="btn" disabled={propose.isPending} onClick={() => { save.reset(); propose.mutate() }}>
+          {propose.isPending ? 'Proposing…' : 'Propose a traction-safe draft'}
+        </button>
+        <span className="text-xs text-slate-500">for {where}</span>
+      </div>
+      {propose.error && <p className="error-text" role="alert">{propose.error.message}</p>}
+      {p && (
+        <div className="space-y-3">
+          <p className="text-sm" data-testid="proposal-summary">
+            {p.changes.length === 0
+              ? 'Every cell is already under the traction limit less the margin; nothing to change.'
+              : `${p.changes.length} cells lowered; ceiling ${fmt0(units.torqueOut(Math.min(...p.ceilingByCol)))}–${fmt0(units.torqueOut(Math.max(...p.ceilingByCol)))} ${units.torque}. Not saved yet.`}
+          </p>
+          {p.baseNumber !== p.latestNumber && (
+            <p className="rounded bg-amber-50 px-2 py-1 text-sm text-amber-900">
+              The draft starts from r{p.baseNumber}, but r{p.latestNumber} is the latest: saving puts this draft on top of r{p.latestNumber} and replaces its values.
+            </p>
+          )}
+          <ChangeTable rows={rows} units={units} testId="proposal-table" />
+          {p.changes.length > 0 && !save.data && <SaveDraft message={message} onMessage={setMessage} pending={save.isPending} onSave={() => save.mutate(p)} />}
+          {save.error && <p className="error-text" role="alert">{save.error.message}</p>}
+          {save.data && (
+            <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">
+              Saved as r{save.data.revision.number}.{' '}
+              <Link className="text-accent underline" href={`/maps/compare?a=${mapId}:${p.baseNumber}&b=${mapId}:${save.data.revision.number}`}>Compare r{p.baseNumber} with r{save.data.revision.number}</Link>
+            </p>
+          )}
+        </div>
+      )}
+    </section>
+  )
+}
+
+function SaveDraft({ message, onMessage, pending, onSave }: { message: string; onMessage: (m: string) => void; pending: boolean; onSave: () => void }) {
+  const blank = message.trim() === ''
+  return (
+    <form className="flex flex-wrap items-end gap-2" onSubmit={(e) => { e.preventDefault(); if (!blank) onSave() }}>
+      <label className="min-w-72 flex-1">
+        <span className="label">Why (required)</span>
+        <input className="field" value={message} onChange={(e) => onMessage(e.target.value)} placeholder="e.g. Keep the empty truck within grip on gravel" />
+      </label>
+      <button type="submit" className="btn-primary" disabled={blank || pending}>{pending ? 'Saving…' : 'Save as new revision'}</button>
+    </form>
+  )
+}

@@ -1,0 +1,72 @@
+'use client'
+/**
+ * Predicted slip ratio per map cell as a heat map, with the cells beyond the tyre curve's peak
+ * (no steady slip exists: the wheel spins in drive or locks in regen) filled solid red. The
+ * colour saturates at the surface's peak slip, so "dark" means "close to the edge".
+ */
+import type { Data } from 'plotly.js'
+import type { MapTable } from '@/maps'
+import { SLIP_SCALE, SOLID_BEYOND } from './palette'
+import { Plot } from './plot'
+import { fmt1, type PlotUnits } from './units'
+
+export interface SlipOverlay {
+  slip: (number | null)[][]
+  spin: boolean[][]
+  utilisation: number[][]
+  spinCount: number
+  tyrePeakSlip: number | null
+}
+
+export interface SlipHeatmapProps {
+  table: MapTable
+  overlay: SlipOverlay
+  units: PlotUnits
+  title: string
+  filename: string
+  testId: string
+}
+
+export function SlipHeatmap({ table, overlay, units: u, title, filename, testId }: SlipHeatmapProps) {
+  // Categories, not numbers: the breakpoints are uneven, and every cell should be as wide as in the grid.
+  const x = table.colAxis.map((s) => fmt1(u.speedOut(s)))
+  const y = table.rowAxis.map((p) => `${fmt1(p)} %`)
+  const beyond = table.kind === 'regen' ? 'lock' : 'spin'
+  const util = overlay.utilisation.map((row) => row.map((v) => `${Math.round(v * 100)} %`))
+  const data: Data[] = [
+    {
+      type: 'heatmap', x, y, z: overlay.slip, colorscale: SLIP_SCALE, zmin: 0, zmax: overlay.tyrePeakSlip ?? undefined,
+      customdata: util,
+      colorbar: { title: { text: 'slip ratio', side: 'right' }, thickness: 12 },
+      hovertemplate: `%{y}, %{x} ${u.speed}<br>slip %{z:.3f}, grip used %{customdata}<extra></extra>`,
+      xgap: 1, ygap: 1,
+    },
+    {
+      type: 'heatmap', x, y, z: overlay.spin.map((row) => row.map((s) => (s ? 1 : null))), colorscale: SOLID_BEYOND, showscale: false,
+      text: overlay.spin.map((row) => row.map((s) => (s ? beyond : ''))), texttemplate: '%{text}', textfont: { color: '#ffffff', size: 10 },
+      hovertemplate: `%{y}, %{x} ${u.speed}<br>beyond the tyre peak (${beyond})<extra></extra>`,
+      xgap: 1, ygap: 1,
+    },
+  ]
+  return (
+    <figure data-testid={testId} data-spin-count={overlay.spinCount} className="space-y-1">
+      <Plot
+        filename={filename}
+        height={360}
+        data={data}
+        layout={{
+          title: { text: title, font: { size: 14 } },
+          xaxis: { title: { text: `Road speed (${u.speed})` }, type: 'category' },
+          yaxis: { title: { text: `${table.kind === 'regen' ? 'Brake pedal' : 'Pedal'} (%)` }, type: 'category' },
+          margin: { l: 64, r: 16, t: 36, b: 48 },
+        }}
+      />
+      <figcaption className="text-sm text-slate-700" data-testid={`${testId}-caption`}>
+        {overlay.spinCount === 0
+          ? 'No cell beyond the tyre peak.'
+          : `${overlay.spinCount} ${overlay.spinCount === 1 ? 'cell' : 'cells'} beyond the tyre peak (${beyond}).`}
+        {overlay.tyrePeakSlip !== null && ` Peak slip of this surface: ${overlay.tyrePeakSlip.toFixed(3)}.`}
+      </figcaption>
+    </figure>
+  )
+}

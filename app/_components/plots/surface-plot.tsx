@@ -1,0 +1,81 @@
+'use client'
+/**
+ * A torque map as a 3D surface: road speed across, pedal into the page, torque up. Optionally the
+ * traction-limit sheet (the motor-shaft torque the drive axle can transmit at each speed) is drawn
+ * over it, so cells poking through the sheet are the ones that would spin or lock.
+ */
+import type { Data, Scene } from 'plotly.js'
+import type { MapTable } from '@/maps'
+import { TORQUE_SCALE, SOLID_LIMIT } from './palette'
+import { Plot, type RelayoutEvent } from './plot'
+import type { PlotUnits } from './units'
+
+export interface SurfacePlotProps {
+  table: MapTable
+  units: PlotUnits
+  title: string
+  filename: string
+  /** Shared colour range, in stored N·m (so two plots compare colour for colour). */
+  range?: { min: number; max: number }
+  /** Traction limit per speed column, N·m; omitted = no sheet. */
+  limitBySpeed?: number[]
+  colorscale?: [number, string][]
+  /** Centre the colour scale on 0 (difference surfaces). */
+  diverging?: boolean
+  zLabel?: string
+  camera?: Camera
+  onCamera?: (c: Camera) => void
+  height?: number
+}
+
+/** A 3D camera (eye, centre, up) as Plotly lays it out. */
+export type Camera = NonNullable<Scene['camera']>
+
+/** The camera a 3D relayout event carries, if any. */
+export function cameraOf(e: RelayoutEvent): Camera | null {
+  const c = e['scene.camera']
+  return c && typeof c === 'object' ? (c as Camera) : null
+}
+
+export function SurfacePlot(p: SurfacePlotProps) {
+  const u = p.units
+  const x = p.table.colAxis.map(u.speedOut)
+  const y = p.table.rowAxis
+  const z = p.table.values.map((row) => row.map(u.torqueOut))
+  const pedalWord = p.table.kind === 'regen' ? 'Brake pedal' : 'Pedal'
+  const zLabel = p.zLabel ?? `${p.table.kind === 'regen' ? 'Regen torque' : 'Torque'} (${u.torque})`
+  const data: Data[] = [
+    {
+      type: 'surface', x, y, z, name: p.title, colorscale: p.colorscale ?? TORQUE_SCALE,
+      ...(p.range ? { cmin: u.torqueOut(p.range.min), cmax: u.torqueOut(p.range.max) } : {}),
+      ...(p.diverging ? { cmid: 0 } : {}),
+      colorbar: { title: { text: u.torque, side: 'right' }, thickness: 12, len: 0.7 },
+      hovertemplate: `%{x:.1f} ${u.speed}, %{y} %<br>%{z:.1f} ${u.torque}<extra></extra>`,
+      contours: { z: { show: true, usecolormap: true, width: 1, highlightcolor: '#14202b' } },
+    },
+  ]
+  if (p.limitBySpeed)
+    data.push({
+      type: 'surface', x, y, z: y.map(() => p.limitBySpeed?.map(u.torqueOut) ?? []), name: 'Traction limit',
+      colorscale: SOLID_LIMIT, showscale: false, opacity: 0.35,
+      hovertemplate: `Traction limit at %{x:.1f} ${u.speed}: %{z:.0f} ${u.torque}<extra></extra>`,
+    })
+  return (
+    <Plot
+      filename={p.filename}
+      height={p.height ?? 400}
+      data={data}
+      onRelayout={(e) => { const c = cameraOf(e); if (c && p.onCamera) p.onCamera(c) }}
+      layout={{
+        title: { text: p.title, font: { size: 14 } },
+        margin: { l: 0, r: 0, t: 36, b: 0 },
+        scene: {
+          xaxis: { title: { text: `Road speed (${u.speed})` } },
+          yaxis: { title: { text: `${pedalWord} (%)` } },
+          zaxis: { title: { text: zLabel } },
+          ...(p.camera ? { camera: p.camera } : {}),
+        },
+      }}
+    />
+  )
+}

@@ -1,0 +1,62 @@
+'use client'
+/** A and B as 3D surfaces with one shared camera and colour range, and the difference B − A beside the change table. */
+import { useMemo, useState } from 'react'
+import { ChangeTable, type ChangeRow } from '@/app/_components/plots/change-table'
+import { DIFF_SCALE } from '@/app/_components/plots/palette'
+import { SurfacePlot, type Camera } from '@/app/_components/plots/surface-plot'
+import type { PlotUnits } from '@/app/_components/plots/units'
+import type { MapDiff, MapTable } from '@/maps'
+import type { MapOverlay } from '@/physics/overlay'
+import type { Side } from './compare-data'
+
+interface Props {
+  a: Side
+  b: Side
+  diff: MapDiff
+  units: PlotUnits
+  limits: { a?: MapOverlay; b?: MapOverlay } | null
+  rows: ChangeRow[]
+}
+
+function range(tables: MapTable[]) {
+  let min = Infinity
+  let max = -Infinity
+  for (const t of tables) for (const row of t.values) for (const v of row) [min, max] = [Math.min(min, v), Math.max(max, v)]
+  return { min, max: max > min ? max : min + 1 }
+}
+
+/** B − A on A's grid: zero where nothing changed. */
+function differenceTable(a: MapTable, d: MapDiff): MapTable {
+  const values = a.values.map((row) => row.map(() => 0))
+  for (const c of d.changed) values[c.row][c.col] = c.delta
+  return { ...a, values }
+}
+
+const limitOf = (o?: MapOverlay) => o?.tractionLimitBySpeed.map((p) => p.tractionLimitNm)
+
+export function CompareSurfaces({ a, b, diff, units, limits, rows }: Props) {
+  // One camera for all three surfaces: a drag on any of them sets it, the others follow.
+  const [camera, setCamera] = useState<Camera | undefined>(undefined)
+  const shared = useMemo(() => range([a.table, b.table]), [a.table, b.table])
+  const delta = useMemo(() => differenceTable(a.table, diff), [a.table, diff])
+  const dMax = Math.max(1, ...diff.changed.map((c) => Math.abs(c.delta)).filter(Number.isFinite))
+  const common = { units, camera, onCamera: setCamera, range: shared }
+  return (
+    <>
+      <div className="grid gap-4 lg:grid-cols-2" data-testid="compare-surfaces">
+        <div className="card p-2"><SurfacePlot {...common} table={a.table} title={`A: ${a.mapName} r${a.number}`} filename={`map-${a.mapId}-r${a.number}`} limitBySpeed={limits ? limitOf(limits.a) : undefined} /></div>
+        <div className="card p-2"><SurfacePlot {...common} table={b.table} title={`B: ${b.mapName} r${b.number}`} filename={`map-${b.mapId}-r${b.number}`} limitBySpeed={limits ? limitOf(limits.b) : undefined} /></div>
+      </div>
+      <section className="grid gap-4 lg:grid-cols-2">
+        <div className="card p-2">
+          <SurfacePlot units={units} camera={camera} onCamera={setCamera} table={delta} range={{ min: -dMax, max: dMax }} colorscale={DIFF_SCALE} diverging
+            title="Difference B − A" zLabel={`B − A (${units.torque})`} filename={`difference-${a.mapId}-r${a.number}-${b.mapId}-r${b.number}`} />
+        </div>
+        <div className="card space-y-2">
+          <h2 className="font-semibold">Changed cells, largest first</h2>
+          <ChangeTable rows={rows} units={units} />
+        </div>
+      </section>
+    </>
+  )
+}

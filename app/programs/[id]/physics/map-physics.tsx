@@ -1,0 +1,42 @@
+'use client'
+/** The chosen revision as a surface under its traction-limit sheet, its slip heat map and the traction-safe draft. */
+import { useQuery } from '@tanstack/react-query'
+import { api } from '@/app/_components/api-client'
+import type { OverlayChoice } from '@/app/_components/plots/overlay-controls'
+import { ProposalPanel } from '@/app/_components/plots/proposal-panel'
+import { SlipHeatmap } from '@/app/_components/plots/slip-heatmap'
+import { SurfacePlot } from '@/app/_components/plots/surface-plot'
+import type { PlotUnits } from '@/app/_components/plots/units'
+import { useOverlay } from '@/app/_components/plots/use-overlay'
+import type { MapTable } from '@/maps'
+import type { ProgramMap } from './physics-workbench'
+
+export function MapPhysics({ map, rev, choice, units, canEdit }: { map: ProgramMap; rev: number; choice: OverlayChoice; units: PlotUnits; canEdit: boolean }) {
+  const table = useQuery({
+    queryKey: ['revision-table', map.id, rev],
+    queryFn: () => api<{ revision: { table: MapTable } }>(`/api/maps/${map.id}/revisions/${rev}`).then((r) => r.revision.table),
+    staleTime: Infinity,
+  })
+  const overlay = useOverlay(map.id, rev, choice)
+  const err = table.error ?? overlay.error
+  const title = `${map.name} r${rev}`
+  return (
+    <section className="space-y-2">
+      <h2 className="text-lg font-semibold">{title} against the traction limit</h2>
+      {err && <p className="error-text" role="alert">{err.message}</p>}
+      {table.data && overlay.data ? (
+        <div className="grid gap-4 lg:grid-cols-2">
+          <div className="card p-2">
+            <SurfacePlot table={table.data} units={units} title={title} filename={`map-${map.id}-r${rev}`} limitBySpeed={overlay.data.tractionLimitBySpeed.map((p) => p.tractionLimitNm)} />
+          </div>
+          <div className="card">
+            <SlipHeatmap table={table.data} overlay={overlay.data} units={units} title={`Predicted slip, ${title}`} filename={`slip-${map.id}-r${rev}`} testId="slip-heatmap" />
+          </div>
+        </div>
+      ) : (
+        !err && <p className="text-sm text-slate-500">Loading the map…</p>
+      )}
+      {canEdit && <ProposalPanel mapId={map.id} mapName={map.name} baseNumber={rev} choice={choice} units={units} />}
+    </section>
+  )
+}

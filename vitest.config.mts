@@ -24,6 +24,7 @@ export default defineConfig({
           include: ['tests/integration/**/*.test.ts'],
           environment: 'node',
           setupFiles: ['tests/integration/setup.ts'],
+          globalSetup: ['tests/integration/global-setup.ts'],
           // PGlite in memory per file; files run in parallel workers but each owns its database.
           testTimeout: 30_000,
           hookTimeout: 60_000,

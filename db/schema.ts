@@ -27,6 +27,12 @@ export interface StoredTable {
   values: number[][]
 }
 
+export interface ReleaseConditions {
+  surfaces: string[]
+  loadCases: string[]
+  marginPct: number
+}
+
 export const users = pgTable(
   'users',
   {
@@ -52,6 +58,11 @@ export const vehiclePrograms = pgTable(
     name: text('name').notNull(),
     description: text('description').notNull().default(''),
     params: jsonb('params').$type<VehicleParams>().notNull(),
+    /** What the release gate checks: surfaces and load cases, and the traction margin in %. */
+    releaseConditions: jsonb('release_conditions')
+      .$type<ReleaseConditions>()
+      .notNull()
+      .default({ surfaces: ['wet-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'], marginPct: 10 }),
     createdBy: integer('created_by').references(() => users.id),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
@@ -114,6 +125,8 @@ export const auditLog = pgTable(
     entityType: text('entity_type').notNull(),
     entityId: integer('entity_id'),
     details: jsonb('details').$type<Record<string, unknown>>().notNull().default({}),
+    /** Client address as the server saw it (X-Forwarded-For first hop when behind a proxy). */
+    ip: text('ip'),
   },
   (t) => [index('audit_log_entity_idx').on(t.entityType, t.entityId), index('audit_log_at_idx').on(t.at)],
 )
@@ -162,6 +175,9 @@ export const driveReports = pgTable(
     safetyResolvedBy: integer('safety_resolved_by').references(() => users.id),
     safetyResolvedAt: timestamp('safety_resolved_at', { withTimezone: true }),
     safetyResolution: text('safety_resolution'),
+    /** Set when a lead engineer has read the report; the driver may no longer edit it after that. */
+    leadReadAt: timestamp('lead_read_at', { withTimezone: true }),
+    leadReadBy: integer('lead_read_by').references(() => users.id),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
@@ -193,6 +209,125 @@ export const driveLogs = pgTable(
     analysedAt: timestamp('analysed_at', { withTimezone: true }),
   },
   (t) => [uniqueIndex('drive_logs_object_key_idx').on(t.objectKey), index('drive_logs_report_idx').on(t.reportId)],
+)
+
+export const reportComments = pgTable(
+  'report_comments',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    reportId: integer('report_id')
+      .notNull()
+      .references(() => driveReports.id),
+    authorId: integer('author_id')
+      .notNull()
+      .references(() => users.id),
+    body: text('body').notNull(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('report_comments_report_idx').on(t.reportId)],
+)
+
+/** Every state change of a revision: who moved it, from what to what, and why. */
+export const revisionEvents = pgTable(
+  'revision_events',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    revisionId: integer('revision_id')
+      .notNull()
+      .references(() => mapRevisions.id),
+    actorId: integer('actor_id')
+      .notNull()
+      .references(() => users.id),
+    action: text('action').notNull(),
+    fromState: text('from_state').notNull(),
+    toState: text('to_state').notNull(),
+    comment: text('comment').notNull().default(''),
+    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('revision_events_revision_idx').on(t.revisionId)],
+)
+
+/** Review comments on a revision, optionally pinned to one cell. */
+export const reviewComments = pgTable(
+  'review_comments',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    revisionId: integer('revision_id')
+      .notNull()
+      .references(() => mapRevisions.id),
+    authorId: integer('author_id')
+      .notNull()
+      .references(() => users.id),
+    row: integer('row'),
+    col: integer('col'),
+    body: text('body').notNull(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('review_comments_revision_idx').on(t.revisionId)],
+)
+
+/** A revision released to the vehicles. At most one current release per map. */
+export const releases = pgTable(
+  'releases',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    mapId: integer('map_id')
+      .notNull()
+      .references(() => maps.id),
+    revisionId: integer('revision_id')
+      .notNull()
+      .references(() => mapRevisions.id),
+    releasedBy: integer('released_by')
+      .notNull()
+      .references(() => users.id),
+    releasedAt: timestamp('released_at', { withTimezone: true }).notNull().defaultNow(),
+    /** Gate exceptions the lead acknowledged, each with a reason. */
+    acknowledgements: jsonb('acknowledgements').$type<{ key: string; reason: string }[]>().notNull().default([]),
+    /** Set when a later release took its place. */
+    retiredAt: timestamp('retired_at', { withTimezone: true }),
+    withdrawnAt: timestamp('withdrawn_at', { withTimezone: true }),
+    withdrawnBy: integer('withdrawn_by').references(() => users.id),
+    withdrawReason: text('withdraw_reason'),
+  },
+  (t) => [
+    index('releases_map_idx').on(t.mapId),
+    uniqueIndex('releases_one_current_per_map_idx').on(t.mapId).where(sql`${t.retiredAt} is null and ${t.withdrawnAt} is null`),
+  ],
+)
+
+/** Outgoing e-mail, written in the same transaction as the change it reports, then sent with retries. */
+export const mailOutbox = pgTable(
+  'mail_outbox',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    to: jsonb('to').$type<string[]>().notNull(),
+    subject: text('subject').notNull(),
+    text: text('text').notNull(),
+    status: text('status').$type<'pending' | 'sent' | 'failed'>().notNull().default('pending'),
+    attempts: integer('attempts').notNull().default(0),
+    lastError: text('last_error'),
+    nextAttemptAt: timestamp('next_attempt_at', { withTimezone: true }).notNull().defaultNow(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    sentAt: timestamp('sent_at', { withTimezone: true }),
+  },
+  (t) => [index('mail_outbox_status_idx').on(t.status, t.nextAttemptAt)],
+)
+
+/** One-time links (invite, password reset): only a hash of the token is stored. */
+export const authTokens = pgTable(
+  'auth_tokens',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    userId: integer('user_id')
+      .notNull()
+      .references(() => users.id),
+    kind: text('kind').$type<'invite' | 'reset'>().notNull(),
+    tokenHash: text('token_hash').notNull(),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    usedAt: timestamp('used_at', { withTimezone: true }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('auth_tokens_hash_idx').on(t.tokenHash)],
 )
 
 export const usersRelations = relations(users, ({ many }) => ({ revisions: many(mapRevisions) }))

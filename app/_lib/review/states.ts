@@ -1,0 +1,75 @@
+/**
+ * The review workflow of a revision as a pure state machine: which action moves which state, and
+ * who may take it. The server checks every transition here before it touches the database.
+ */
+import type { Role } from '../roles'
+
+export const STATES = ['draft', 'in_review', 'returned', 'approved', 'released', 'retired', 'withdrawn'] as const
+export type RevisionState = (typeof STATES)[number]
+
+export const STATE_LABELS: Record<RevisionState, string> = {
+  draft: 'Draft',
+  in_review: 'Waiting for review',
+  returned: 'Sent back',
+  approved: 'Approved',
+  released: 'Released',
+  retired: 'Replaced by a later release',
+  withdrawn: 'Release withdrawn',
+}
+
+export type ReviewAction = 'submit' | 'approve' | 'send_back' | 'release' | 'withdraw'
+
+export const ACTION_LABELS: Record<ReviewAction, string> = {
+  submit: 'Submit for review',
+  approve: 'Approve',
+  send_back: 'Send back',
+  release: 'Release to the vehicles',
+  withdraw: 'Withdraw release',
+}
+
+interface Rule {
+  from: RevisionState
+  to: RevisionState
+  roles: readonly Role[]
+  /** A comment (reason) is required. */
+  needsComment: boolean
+}
+
+const RULES: Record<ReviewAction, Rule> = {
+  submit: { from: 'draft', to: 'in_review', roles: ['calibration_engineer', 'lead_engineer'], needsComment: false },
+  approve: { from: 'in_review', to: 'approved', roles: ['lead_engineer'], needsComment: false },
+  send_back: { from: 'in_review', to: 'returned', roles: ['lead_engineer'], needsComment: true },
+  release: { from: 'approved', to: 'released', roles: ['lead_engineer'], needsComment: false },
+  withdraw: { from: 'released', to: 'withdrawn', roles: ['lead_engineer'], needsComment: true },
+}
+
+export type TransitionCheck =
+  | { ok: true; to: RevisionState }
+  | { ok: false; status: 403 | 409 | 400; reason: string }
+
+/**
+ * May `actor` take `action` on a revision in `state` written by `authorId`?
+ * Only the author submits; nobody approves their own revision (a second pair of eyes).
+ * @example checkTransition('approve', 'in_review', { id: 2, role: 'lead_engineer' }, 1) // { ok: true, to: 'approved' }
+ */
+export function checkTransition(action: ReviewAction, state: RevisionState, actor: { id: number; role: Role }, authorId: number, comment = ''): TransitionCheck {
+  const rule = RULES[action]
+  if (!rule.roles.includes(actor.role)) return { ok: false, status: 403, reason: `${ACTION_LABELS[action]} needs the role ${rule.roles.join(' or ').replace(/_/g, ' ')}` }
+  if (state !== rule.from) return { ok: false, status: 409, reason: `${ACTION_LABELS[action]} is possible only from “${STATE_LABELS[rule.from]}”; this revision is “${STATE_LABELS[state]}”` }
+  if (action === 'submit' && actor.id !== authorId) return { ok: false, status: 403, reason: 'Only the author of a revision submits it for review' }
+  if (action === 'approve' && actor.id === authorId) return { ok: false, status: 403, reason: 'A lead engineer cannot approve their own revision; another lead must review it' }
+  if (rule.needsComment && !comment.trim()) return { ok: false, status: 400, reason: `${ACTION_LABELS[action]} needs a comment saying why` }
+  return { ok: true, to: rule.to }
+}
+
+/** The actions this actor could take now (for showing buttons; the server re-checks). */
+export function availableActions(state: RevisionState, actor: { id: number; role: Role }, authorId: number): ReviewAction[] {
+  return (Object.keys(RULES) as ReviewAction[]).filter((a) => {
+    const c = checkTransition(a, state, actor, authorId, 'x')
+    return c.ok
+  })
+}
+
+export function isState(s: string): s is RevisionState {
+  return (STATES as readonly string[]).includes(s)
+}

@@ -5,8 +5,7 @@
  * energy) or held at the earlier sample (occupancy, zero-order hold, as a sampling logger records).
  */
 import { PhysicsInputError, requireFinite, requirePositive } from '../errors'
-import { slipRatio } from '../slip'
-import { kmhToMps } from '../units'
+import { SLIP_SPEED_FLOOR_MPS } from '../constants'
 import { positiveEnergyJ, J_PER_KWH } from './energy'
 import { LogFormatError } from './errors'
 import { createEventDetector } from './events'
@@ -24,6 +23,7 @@ export interface LogAnalyser {
   finish(): AnalysisResult
 }
 
+const positivePart = positiveEnergyJ // local binding for the per-row path
 const fin = (x: number | undefined): x is number => x !== undefined && x === x && x !== Infinity && x !== -Infinity
 
 function checkAxis(name: string, axis: readonly number[]): void {
@@ -73,10 +73,13 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
     let wheelKmh = NaN
     if (fin(road) && fin(pedal)) {
       const ws = s.wheelSpeedsKmh
-      const vRoad = kmhToMps(road)
+      const vRoad = road / 3.6 // m/s, as kmhToMps
+      const den = Math.max(Math.abs(vRoad), SLIP_SPEED_FLOOR_MPS)
       for (let w = 0; w < ws.length; w++) {
         if (!fin(ws[w])) continue
-        const k = slipRatio(kmhToMps(ws[w]), vRoad)
+        // physics slipRatio(kmhToMps(wheel), kmhToMps(road)) written out: this loop runs per wheel per row,
+        // and its argument checks are already done here (both finite). A unit test pins the two equal.
+        const k = (ws[w] / 3.6 - vRoad) / den
         if (!(Math.abs(k) <= Math.abs(kappa))) { kappa = k; wheelKmh = ws[w] }
       }
     }
@@ -89,10 +92,10 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
       if (dt === 0) dup++
       if (dt > maxGapS) { gapCount++; gapS += dt; detector.interrupt() }
       else {
-        if (fin(road) && prevRoad === prevRoad) distM += 0.5 * kmhToMps(prevRoad + road) * dt
+        if (fin(road) && prevRoad === prevRoad) distM += (0.5 * (prevRoad + road) / 3.6) * dt
         if (power === power && prevPower === prevPower) {
-          drawnJ += positiveEnergyJ(prevPower, power, dt)
-          regenJ += positiveEnergyJ(-prevPower, -power, dt)
+          drawnJ += positivePart(prevPower, power, dt)
+          regenJ += positivePart(-prevPower, -power, dt)
         }
         if (grid) { if (prevOccPedal === prevOccPedal) grid.add(prevOccPedal, prevOccSpeed, dt); else grid.unassigned(dt) }
       }

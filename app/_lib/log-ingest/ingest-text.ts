@@ -1,0 +1,21 @@
+/**
+ * One-shot analysis of a small log already in memory: papaparse on the whole string, then the same row
+ * sink as the streaming path. Handy for tests and tiny uploads; use {@link ingestLog} for files.
+ */
+import Papa from 'papaparse'
+import { LogFormatError } from '@/physics/drive-log'
+import { sniffHeaderLine } from './header-line'
+import { createLogRowSink, type LogIngestResult, type LogReadOptions } from './row-sink'
+
+/** @example ingestLogText('time_s,road_speed_kmh,wheel_speed_kmh,accel_pedal_pct\n0,0,0,0\n', {}).samples // 1 */
+export function ingestLogText(text: string, opts: LogReadOptions = {}): LogIngestResult {
+  if (text.includes('\u0000')) throw new LogFormatError('not-csv', 0, null, 'binary data (a NUL character); upload the log as CSV text')
+  const body = text.replace(/^\uFEFF/, '')
+  if (body.trim() === '') throw new LogFormatError('empty', 0, null, 'the log is empty')
+  const nl = body.search(/[\r\n]/)
+  const delimiter = sniffHeaderLine(nl >= 0 ? body.slice(0, nl) : body)
+  const parsed = Papa.parse<string[]>(body, { delimiter, header: false, dynamicTyping: false, skipEmptyLines: false })
+  const sink = createLogRowSink(opts)
+  sink.rows(parsed.data, parsed.errors)
+  return sink.finish(Buffer.byteLength(text))
+}

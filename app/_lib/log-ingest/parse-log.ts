@@ -1,0 +1,88 @@
+/**
+ * Server-side streaming ingest of a CSV drive log: bytes → validated UTF-8 text → papaparse's streaming
+ * parser (Node stream input, `chunk` callback, `header: false`, no dynamic typing) → row sink → analyser.
+ * Only one parser chunk (~64 KiB of text) and the analyser's bounded state are held at any time.
+ */
+import { Readable } from 'node:stream'
+import Papa from 'papaparse'
+import { LogFormatError } from '@/physics/drive-log'
+import { readHead } from './header-line'
+import { createLogRowSink, type LogIngestResult, type LogReadOptions } from './row-sink'
+import { textChunks, type LogByteSource } from './text-source'
+
+/** Options of {@link ingestLog}. */
+export interface IngestOptions extends LogReadOptions {
+  /** Called after each parsed chunk with bytes read so far and data rows analysed. */
+  onProgress?(bytes: number, rows: number): void
+  /** Refuse (`too-large`) once more bytes than this arrive. Default: no limit. */
+  maxBytes?: number
+}
+
+/** Text the parser may hold without completing a row before we call the row malformed (unbalanced quote). */
+const MAX_PENDING_CHARS = 1 << 20
+
+async function* prepend(head: string, rest: AsyncIterator<string>): AsyncGenerator<string> {
+  try {
+    yield head
+    for (;;) {
+      const n = await rest.next()
+      if (n.done) return
+      yield n.value
+    }
+  } finally {
+    await rest.return?.(undefined) // closes the source when the parse stops early
+  }
+}
+
+/**
+ * Reads, validates and analyses a CSV drive log from a stream. Rejects with {@link LogFormatError}
+ * (line and column where known) for non-CSV input, a bad header, a malformed row, time going
+ * backwards, or more than `maxBytes`; other errors from the source are passed through.
+ * @example const result = await ingestLog(fs.createReadStream('log.csv'), { surface: 'wet-asphalt' })
+ */
+export async function ingestLog(source: LogByteSource, opts: IngestOptions = {}): Promise<LogIngestResult> {
+  const counter = { bytes: 0 }
+  const chunks = textChunks(source, counter, opts.maxBytes)
+  const { head, delimiter } = await readHead(chunks)
+  const sink = createLogRowSink(opts)
+  const readable = Readable.from(prepend(head, chunks), { objectMode: true })
+  let fed = 0
+  readable.on('data', (s: string) => { fed += s.length }) // runs before papaparse's listener: chars handed over so far
+
+  return new Promise<LogIngestResult>((resolve, reject) => {
+    let settled = false
+    const fail = (e: unknown) => {
+      if (settled) return
+      settled = true
+      readable.destroy()
+      reject(e)
+    }
+    Papa.parse<string[], NodeJS.ReadableStream>(readable, {
+      delimiter,
+      header: false,
+      dynamicTyping: false,
+      skipEmptyLines: false,
+      chunk(results, parser) {
+        if (settled) return
+        try {
+          sink.rows(results.data, results.errors)
+          if (fed - results.meta.cursor > MAX_PENDING_CHARS)
+            throw new LogFormatError('row', 0, null, `no complete row in over ${MAX_PENDING_CHARS} characters after row ${sink.dataRows + 1} of data (an unbalanced quote?)`)
+          opts.onProgress?.(counter.bytes, sink.dataRows)
+        } catch (e) {
+          fail(e) // first: abort() calls complete() synchronously
+          parser.abort()
+        }
+      },
+      complete() {
+        if (settled) return
+        try {
+          const result = sink.finish(counter.bytes)
+          settled = true
+          resolve(result)
+        } catch (e) { fail(e) }
+      },
+      error(e: Error) { fail(e) },
+    })
+  })
+}

@@ -1,6 +1,7 @@
 import { roleLabel, type Role } from './roles'
 import { errorResponse, ForbiddenError, UnauthorizedError } from './errors'
 import { userFromCookieHeader, type SessionUser } from './session'
+import { runWithRequestContext } from '@/db/request-context'
 
 /** Who may call an entry point: listed roles, any signed-in user, or anyone. */
 export type Access = readonly Role[] | 'signed-in' | 'public'
@@ -33,10 +34,17 @@ export function withRole<P = Record<string, string>>(
     try {
       const user = await userFromCookieHeader(req.headers.get('cookie'))
       assertAccess(user, access)
-      return await handler(req, { user, params: await ctx.params })
+      const params = await ctx.params
+      return await runWithRequestContext({ ip: clientIp(req) }, () => handler(req, { user, params }))
     } catch (e) {
       return errorResponse(e)
     }
   }
   return Object.assign(route, { access })
+}
+
+/** The caller's address: the first X-Forwarded-For hop when a proxy sets it, else X-Real-IP. */
+export function clientIp(req: Request): string | null {
+  const fwd = req.headers.get('x-forwarded-for')
+  return fwd?.split(',')[0].trim() || req.headers.get('x-real-ip') || null
 }

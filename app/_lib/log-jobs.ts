@@ -42,8 +42,10 @@ export async function analyse(logId: number): Promise<void> {
   const result = await ingestLog(await getObjectStream(log.objectKey), {
     mapping: log.mapping,
     wheelRadiusM: map.programParams.wheelRadiusM,
-    analyser: { map: { rowAxis: full.table.rowAxis, colAxis: full.table.colAxis }, kind: map.kind, surface: report.surface as SurfaceId },
-    onProgress: (bytes) => {
+    map: { rowAxis: full.table.rowAxis, colAxis: full.table.colAxis },
+    kind: map.kind,
+    surface: report.surface as SurfaceId,
+    onProgress: (bytes: number) => {
       // Throttle progress writes: one a second is plenty for a progress bar.
       const now = Date.now()
       if (now - lastWrite > 1000) {

@@ -1,6 +1,7 @@
-import { desc, eq, and } from 'drizzle-orm'
+import { and, desc, eq, gte, ilike, lte } from 'drizzle-orm'
 import { getDb, type Db } from '../client'
-import { auditLog } from '../schema'
+import { auditLog, users } from '../schema'
+import { currentRequestContext } from '../request-context'
 
 export interface AuditEntry {
   actorId: number | null
@@ -13,18 +14,34 @@ export interface AuditEntry {
 /** Record who did what; pass `tx` to write it in the same transaction as the change itself. */
 export async function recordAudit(entry: AuditEntry, tx?: Pick<Db, 'insert'>): Promise<void> {
   const db = tx ?? (await getDb())
-  await db.insert(auditLog).values({ ...entry, entityId: entry.entityId ?? null, details: entry.details ?? {} })
+  await db.insert(auditLog).values({ ...entry, entityId: entry.entityId ?? null, details: entry.details ?? {}, ip: currentRequestContext()?.ip ?? null })
 }
 
-export async function listAudit(filter: { entityType?: string; entityId?: number; limit?: number } = {}) {
+export interface AuditFilter {
+  entityType?: string
+  entityId?: number
+  actorId?: number
+  action?: string
+  since?: Date
+  until?: Date
+  limit?: number
+}
+
+/** Newest first, with the actor's name. */
+export async function listAudit(filter: AuditFilter = {}) {
   const db = await getDb()
   const conds = []
   if (filter.entityType) conds.push(eq(auditLog.entityType, filter.entityType))
   if (filter.entityId !== undefined) conds.push(eq(auditLog.entityId, filter.entityId))
+  if (filter.actorId !== undefined) conds.push(eq(auditLog.actorId, filter.actorId))
+  if (filter.action) conds.push(ilike(auditLog.action, `${filter.action}%`))
+  if (filter.since) conds.push(gte(auditLog.at, filter.since))
+  if (filter.until) conds.push(lte(auditLog.at, filter.until))
   return db
-    .select()
+    .select({ id: auditLog.id, at: auditLog.at, actorId: auditLog.actorId, actorName: users.name, action: auditLog.action, entityType: auditLog.entityType, entityId: auditLog.entityId, details: auditLog.details, ip: auditLog.ip })
     .from(auditLog)
+    .leftJoin(users, eq(users.id, auditLog.actorId))
     .where(conds.length ? and(...conds) : undefined)
     .orderBy(desc(auditLog.at), desc(auditLog.id))
-    .limit(filter.limit ?? 200)
+    .limit(Math.min(filter.limit ?? 200, 10_000))
 }

@@ -51,6 +51,7 @@ export async function getMap(id: number) {
       programId: maps.programId,
       programName: vehiclePrograms.name,
       programParams: vehiclePrograms.params,
+      programReleaseConditions: vehiclePrograms.releaseConditions,
       createdAt: maps.createdAt,
     })
     .from(maps)

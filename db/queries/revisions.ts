@@ -128,10 +128,10 @@ export async function getRevision(mapId: number, number?: number): Promise<Revis
 }
 
 /** A revision's map and number by its row id (drive reports point at the row id). */
-export async function getRevisionById(id: number): Promise<{ id: number; mapId: number; number: number; checksum: string } | null> {
+export async function getRevisionById(id: number): Promise<{ id: number; mapId: number; number: number; checksum: string; state: string; authorId: number } | null> {
   const db = await getDb()
   const rows = await db
-    .select({ id: mapRevisions.id, mapId: mapRevisions.mapId, number: mapRevisions.number, checksum: mapRevisions.checksum })
+    .select({ id: mapRevisions.id, mapId: mapRevisions.mapId, number: mapRevisions.number, checksum: mapRevisions.checksum, state: mapRevisions.state, authorId: mapRevisions.authorId })
     .from(mapRevisions)
     .where(eq(mapRevisions.id, id))
   return rows[0] ?? null

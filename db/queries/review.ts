@@ -1,0 +1,133 @@
+import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm'
+import { getDb, type Db } from '../client'
+import { mapRevisions, maps, releases, reviewComments, revisionEvents, users, vehiclePrograms } from '../schema'
+import { recordAudit } from './audit'
+import { enqueueMail, type OutgoingMail } from './mail'
+
+type Tx = Parameters<Parameters<Db['transaction']>[0]>[0]
+
+export type TransitionResult = { ok: true } | { ok: false; currentState: string }
+
+/**
+ * Move a revision from one state to another if (and only if) it is still in `from`: two leads
+ * approving at once both run this, one wins and the other is told the state changed. The event,
+ * the audit row and the mail are written in the same transaction.
+ */
+export async function transitionRevision(input: {
+  revisionId: number
+  actorId: number
+  action: string
+  from: string
+  to: string
+  comment: string
+  mail?: OutgoingMail[]
+  extra?: (tx: Tx) => Promise<void>
+}): Promise<TransitionResult> {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const moved = await tx
+      .update(mapRevisions)
+      .set({ state: input.to })
+      .where(and(eq(mapRevisions.id, input.revisionId), eq(mapRevisions.state, input.from)))
+      .returning({ id: mapRevisions.id, mapId: mapRevisions.mapId, number: mapRevisions.number })
+    if (!moved[0]) {
+      const [cur] = await tx.select({ state: mapRevisions.state }).from(mapRevisions).where(eq(mapRevisions.id, input.revisionId))
+      return { ok: false, currentState: cur?.state ?? 'missing' } as const
+    }
+    await tx.insert(revisionEvents).values({ revisionId: input.revisionId, actorId: input.actorId, action: input.action, fromState: input.from, toState: input.to, comment: input.comment })
+    if (input.extra) await input.extra(tx)
+    await recordAudit({ actorId: input.actorId, action: `revision.${input.action}`, entityType: 'map', entityId: moved[0].mapId, details: { revision: moved[0].number, from: input.from, to: input.to, comment: input.comment } }, tx)
+    await enqueueMail(input.mail ?? [], tx)
+    return { ok: true } as const
+  })
+}
+
+/** The current (neither retired nor withdrawn) release of a map, if any. */
+export async function currentRelease(mapId: number) {
+  const db = await getDb()
+  const rows = await db
+    .select({ id: releases.id, revisionId: releases.revisionId, number: mapRevisions.number, checksum: mapRevisions.checksum, releasedAt: releases.releasedAt, releasedBy: releases.releasedBy, releasedByName: users.name, acknowledgements: releases.acknowledgements })
+    .from(releases)
+    .innerJoin(mapRevisions, eq(mapRevisions.id, releases.revisionId))
+    .innerJoin(users, eq(users.id, releases.releasedBy))
+    .where(and(eq(releases.mapId, mapId), isNull(releases.retiredAt), isNull(releases.withdrawnAt)))
+  return rows[0] ?? null
+}
+
+export async function getReleaseById(id: number) {
+  const db = await getDb()
+  const rows = await db.select().from(releases).where(eq(releases.id, id))
+  return rows[0] ?? null
+}
+
+/** Inside a release transition: retire the map's current release and record the new one. */
+export async function recordRelease(tx: Tx, r: { mapId: number; revisionId: number; releasedBy: number; acknowledgements: { key: string; reason: string }[] }) {
+  const now = new Date()
+  const prior = await tx
+    .update(releases)
+    .set({ retiredAt: now })
+    .where(and(eq(releases.mapId, r.mapId), isNull(releases.retiredAt), isNull(releases.withdrawnAt)))
+    .returning({ revisionId: releases.revisionId })
+  for (const p of prior) await tx.update(mapRevisions).set({ state: 'retired' }).where(and(eq(mapRevisions.id, p.revisionId), eq(mapRevisions.state, 'released')))
+  const [row] = await tx.insert(releases).values({ ...r, releasedAt: now }).returning({ id: releases.id })
+  return row.id
+}
+
+/** Inside a withdraw transition: close the release and bring back the one it replaced, if any. */
+export async function recordWithdrawal(tx: Tx, w: { mapId: number; revisionId: number; actorId: number; reason: string }): Promise<number | null> {
+  await tx
+    .update(releases)
+    .set({ withdrawnAt: new Date(), withdrawnBy: w.actorId, withdrawReason: w.reason })
+    .where(and(eq(releases.mapId, w.mapId), eq(releases.revisionId, w.revisionId), isNull(releases.retiredAt), isNull(releases.withdrawnAt)))
+  const [previous] = await tx
+    .select({ id: releases.id, revisionId: releases.revisionId })
+    .from(releases)
+    .where(and(eq(releases.mapId, w.mapId), isNull(releases.withdrawnAt), sql`${releases.retiredAt} is not null`))
+    .orderBy(desc(releases.releasedAt), desc(releases.id))
+    .limit(1)
+  if (!previous) return null
+  await tx.update(releases).set({ retiredAt: null }).where(eq(releases.id, previous.id))
+  await tx.update(mapRevisions).set({ state: 'released' }).where(eq(mapRevisions.id, previous.revisionId))
+  return previous.revisionId
+}
+
+export async function listRevisionEvents(filter: { revisionId?: number; mapId?: number }) {
+  const db = await getDb()
+  return db
+    .select({ id: revisionEvents.id, revisionId: revisionEvents.revisionId, number: mapRevisions.number, action: revisionEvents.action, fromState: revisionEvents.fromState, toState: revisionEvents.toState, comment: revisionEvents.comment, at: revisionEvents.at, actorName: users.name })
+    .from(revisionEvents)
+    .innerJoin(mapRevisions, eq(mapRevisions.id, revisionEvents.revisionId))
+    .innerJoin(users, eq(users.id, revisionEvents.actorId))
+    .where(filter.revisionId ? eq(revisionEvents.revisionId, filter.revisionId) : eq(mapRevisions.mapId, filter.mapId ?? -1))
+    .orderBy(desc(revisionEvents.at), desc(revisionEvents.id))
+}
+
+export async function addReviewComment(c: { revisionId: number; authorId: number; row: number | null; col: number | null; body: string }) {
+  const db = await getDb()
+  const [row] = await db.insert(reviewComments).values(c).returning()
+  return row
+}
+
+export async function listReviewComments(filter: { revisionId?: number; mapId?: number }) {
+  const db = await getDb()
+  return db
+    .select({ id: reviewComments.id, revisionId: reviewComments.revisionId, number: mapRevisions.number, row: reviewComments.row, col: reviewComments.col, body: reviewComments.body, createdAt: reviewComments.createdAt, authorName: users.name })
+    .from(reviewComments)
+    .innerJoin(mapRevisions, eq(mapRevisions.id, reviewComments.revisionId))
+    .innerJoin(users, eq(users.id, reviewComments.authorId))
+    .where(filter.revisionId ? eq(reviewComments.revisionId, filter.revisionId) : eq(mapRevisions.mapId, filter.mapId ?? -1))
+    .orderBy(asc(reviewComments.createdAt))
+}
+
+/** Revisions in a state, across maps, oldest first (the lead's queue; an engineer's sent-back list). */
+export async function revisionsInState(state: string, filter: { authorId?: number } = {}) {
+  const db = await getDb()
+  return db
+    .select({ id: mapRevisions.id, mapId: maps.id, mapName: maps.name, programName: vehiclePrograms.name, number: mapRevisions.number, message: mapRevisions.message, authorId: mapRevisions.authorId, authorName: users.name, createdAt: mapRevisions.createdAt })
+    .from(mapRevisions)
+    .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .innerJoin(users, eq(users.id, mapRevisions.authorId))
+    .where(filter.authorId ? and(eq(mapRevisions.state, state), eq(mapRevisions.authorId, filter.authorId)) : eq(mapRevisions.state, state))
+    .orderBy(asc(mapRevisions.createdAt))
+}

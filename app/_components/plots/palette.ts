@@ -24,8 +24,9 @@ export const DIFF_SCALE: Scale = [
 
 export const SLIP_SCALE: Scale = [
   [0, '#fbfaf3'],
-  [0.5, '#f3c873'],
-  [0.85, '#d97706'],
+  [0.2, '#f6e2a8'],
+  [0.5, '#eeac4c'],
+  [0.8, '#d97706'],
   [1, '#8a4b0f'],
 ]
 

@@ -55,7 +55,7 @@ export function SlipHeatmap({ table, overlay, units: u, title, filename, testId 
         height={360}
         data={data}
         layout={{
-          title: { text: title, font: { size: 14 } },
+          title: { text: title, font: { size: 14 }, x: 0.01, xanchor: 'left' },
           xaxis: { title: { text: `Road speed (${u.speed})` }, type: 'category' },
           yaxis: { title: { text: `${table.kind === 'regen' ? 'Brake pedal' : 'Pedal'} (%)` }, type: 'category' },
           margin: { l: 64, r: 16, t: 36, b: 48 },

@@ -31,6 +31,9 @@ export interface SurfacePlotProps {
 /** A 3D camera (eye, centre, up) as Plotly lays it out. */
 export type Camera = NonNullable<Scene['camera']>
 
+/** Looking from low speed, low pedal towards the far corner, far enough out that the axis titles fit. */
+export const DEFAULT_CAMERA: Camera = { eye: { x: -1.5, y: -1.7, z: 0.95 }, center: { x: 0, y: 0, z: -0.1 }, up: { x: 0, y: 0, z: 1 } }
+
 /** The camera a 3D relayout event carries, if any. */
 export function cameraOf(e: RelayoutEvent): Camera | null {
   const c = e['scene.camera']
@@ -67,13 +70,16 @@ export function SurfacePlot(p: SurfacePlotProps) {
       data={data}
       onRelayout={(e) => { const c = cameraOf(e); if (c && p.onCamera) p.onCamera(c) }}
       layout={{
-        title: { text: p.title, font: { size: 14 } },
+        title: { text: p.title, font: { size: 14 }, x: 0.01, xanchor: 'left' },
         margin: { l: 0, r: 0, t: 36, b: 0 },
+        showlegend: false,
         scene: {
           xaxis: { title: { text: `Road speed (${u.speed})` } },
           yaxis: { title: { text: `${pedalWord} (%)` } },
           zaxis: { title: { text: zLabel } },
-          ...(p.camera ? { camera: p.camera } : {}),
+          aspectmode: 'manual',
+          aspectratio: { x: 1.25, y: 1, z: 0.75 },
+          camera: p.camera ?? DEFAULT_CAMERA,
         },
       }}
     />

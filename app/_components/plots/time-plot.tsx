@@ -31,10 +31,10 @@ export function TimePlot({ t, lines, title, yLabel, filename, refs = [] }: TimeP
       height={260}
       data={data}
       layout={{
-        title: { text: title, font: { size: 13 } },
+        title: { text: title, font: { size: 13 }, x: 0.01, xanchor: 'left' },
         xaxis: { title: { text: 'Time (s)' }, zeroline: false, gridcolor: '#eceee8' },
         yaxis: { title: { text: yLabel }, gridcolor: '#eceee8' },
-        legend: { orientation: 'h', y: 1.12, x: 1, xanchor: 'right' },
+        legend: { x: 0.99, xanchor: 'right', y: 0.04, yanchor: 'bottom', bgcolor: 'rgba(255,255,255,0.75)' },
         margin: { l: 60, r: 12, t: 40, b: 44 },
         shapes: refs.map((r) => ({ type: 'line', xref: 'paper', x0: 0, x1: 1, y0: r.y, y1: r.y, line: { color: '#b42318', dash: 'dot', width: 1 } })),
         annotations: refs.map((r) => ({ xref: 'paper', x: 1, y: r.y, text: r.label, showarrow: false, xanchor: 'right', yanchor: 'bottom', font: { size: 10, color: '#b42318' } })),

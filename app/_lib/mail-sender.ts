@@ -3,7 +3,7 @@ import { dueMail, markFailed, markSent } from '@/db/queries/mail'
 import { env } from './env'
 
 const key = Symbol.for('mapwright.mail')
-type G = typeof globalThis & { [key]?: { transport: Transporter; timer: NodeJS.Timeout; busy: boolean } }
+type G = typeof globalThis & { [key]?: { transport: Transporter; timer: NodeJS.Timeout; queue: Promise<unknown> } }
 
 function state() {
   const g = globalThis as G
@@ -14,7 +14,7 @@ function state() {
     // Retries that were deferred by back-off are picked up by this timer; unref: never keeps a process alive.
     const timer = setInterval(() => void deliverPending(), 30_000)
     timer.unref()
-    g[key] = { transport, timer, busy: false }
+    g[key] = { transport, timer, queue: Promise.resolve() }
   }
   return g[key]!
 }
@@ -25,23 +25,26 @@ function state() {
  */
 export async function deliverPending(): Promise<{ sent: number; failed: number }> {
   const s = state()
-  if (!s || s.busy) return { sent: 0, failed: 0 }
-  s.busy = true
+  if (!s) return { sent: 0, failed: 0 }
+  // Runs are chained, never concurrent, so one message is never sent twice; a caller waits for
+  // the run in flight and then for its own.
+  const run = s.queue.then(() => sendDue(s.transport))
+  s.queue = run.catch(() => {})
+  return run
+}
+
+async function sendDue(transport: Transporter): Promise<{ sent: number; failed: number }> {
   let sent = 0
   let failed = 0
-  try {
-    for (const m of await dueMail()) {
-      try {
-        await s.transport.sendMail({ from: env().MAIL_FROM, to: m.to, subject: m.subject, text: m.text })
-        await markSent(m.id)
-        sent++
-      } catch (e) {
-        await markFailed(m.id, m.attempts, e instanceof Error ? e.message : String(e))
-        failed++
-      }
+  for (const m of await dueMail()) {
+    try {
+      await transport.sendMail({ from: env().MAIL_FROM, to: m.to, subject: m.subject, text: m.text })
+      await markSent(m.id)
+      sent++
+    } catch (e) {
+      await markFailed(m.id, m.attempts, e instanceof Error ? e.message : String(e))
+      failed++
     }
-  } finally {
-    s.busy = false
   }
   return { sent, failed }
 }

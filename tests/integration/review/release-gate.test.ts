@@ -38,13 +38,15 @@ describe('release gate: each condition alone blocks the release', () => {
   })
 
   it('a cell above the traction limit blocks it until the lead acknowledges it with a reason', async () => {
-    // SMALL_DRIVE asks 1,600 N·m at standstill: far beyond the traction of the empty tipper on snow.
-    const s = await approvedWithReport(SMALL_DRIVE)
+    // 2,800 N·m at standstill is about 66 kN at the wheels (× 3.2 × 4.1 × 0.93 ÷ 0.52 m). On packed snow
+    // (μ 0.3) the drive tandem carries at most ~63 kN even laden; on wet asphalt laden it carries ~170 kN.
+    const strong = { ...SMALL_DRIVE, values: [[100, 0, 0], [1400, 700, 400], [2800, 1500, 800]] }
+    const s = await approvedWithReport(strong)
     const g = await call(gateRoute.GET, { cookie: s.leadCookie, params: { revisionId: String(s.revisionId) } })
     expect(g.body.gate.conditions.map((c: { met: boolean }) => c.met)).toEqual([true, false, true])
     const keys: string[] = g.body.gate.exceptions.map((e: { key: string }) => e.key)
-    // Default conditions: wet asphalt and packed snow × empty and laden; 1,600 N·m spins on all four.
-    expect(keys.sort()).toEqual(['traction:packed-snow:empty', 'traction:packed-snow:laden', 'traction:wet-asphalt:empty', 'traction:wet-asphalt:laden'])
+    expect(keys).toEqual(expect.arrayContaining(['traction:packed-snow:empty', 'traction:packed-snow:laden']))
+    expect(keys).not.toContain('traction:wet-asphalt:laden')
     expect((await act(s.revisionId, s.leadCookie, 'release')).status).toBe(409)
     const partial = await act(s.revisionId, s.leadCookie, 'release', { acknowledgements: [{ key: keys[0], reason: 'traction control covers it' }] })
     expect(partial.status).toBe(409)

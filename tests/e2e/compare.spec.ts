@@ -1,0 +1,102 @@
+import { expect, test, type Page } from '@playwright/test'
+import { DEMO, signIn } from './helpers'
+
+/** A demo map's id, read from the map list (ids depend on the seed order). */
+async function mapId(page: Page, name: string): Promise<number> {
+  await page.goto('/maps')
+  const href = await page.getByRole('link', { name, exact: true }).first().getAttribute('href')
+  return Number(href?.split('/')[2])
+}
+
+type GraphDiv = HTMLElement & { _fullLayout?: { scene?: { camera?: { eye?: { x: number; y: number; z: number } } } } }
+const eyeOf = (page: Page, i: number) =>
+  page.locator('[data-testid="compare-surfaces"] .js-plotly-plot').nth(i).evaluate((el) => (el as GraphDiv)._fullLayout?.scene?.camera?.eye ?? null)
+
+test.describe('comparing two revisions', () => {
+  test.use({ viewport: { width: 1400, height: 900 } })
+
+  test('shows both surfaces, the difference and the changes, and the slip heat map follows the load case', async ({ page }) => {
+    await signIn(page, DEMO.calib)
+    const site = await mapId(page, 'Site drive')
+    await page.goto(`/maps/compare?a=${site}:2&b=${site}:3&loadCase=empty&surface=gravel`)
+    await expect(page.getByRole('heading', { name: 'Compare two revisions' })).toBeVisible()
+    await expect(page.getByRole('note')).toContainText('closed course')
+
+    // Two surfaces and the difference (WebGL canvases), and two heat maps.
+    const surfaces = page.locator('[data-testid="compare-surfaces"] .js-plotly-plot')
+    await expect(surfaces).toHaveCount(2)
+    await expect(page.locator('.js-plotly-plot')).toHaveCount(5)
+    await expect(page.locator('.js-plotly-plot .gl-container canvas').first()).toBeVisible()
+    await expect(page.getByText('Difference B − A')).toBeVisible()
+
+    // Revision 3 capped launch torque below 10 km/h: 12 cells, the 100 % / 0 km/h cell by 1,200 N·m first.
+    const rows = page.getByTestId('change-table').locator('tbody tr')
+    await expect(rows).toHaveCount(12)
+    await expect(rows.first()).toContainText('-1,200')
+
+    // Empty on gravel: r3 still spins 4 cells; laden puts enough load on the tandem that none spins.
+    const heatB = page.getByTestId('slip-heatmap-b')
+    await expect(heatB).toHaveAttribute('data-spin-count', '4')
+    await expect(page.getByTestId('slip-heatmap-a')).toHaveAttribute('data-spin-count', '12')
+    await expect(heatB.locator('.heatmap, .hm').first()).toBeAttached()
+    await page.screenshot({ path: 'docs/compare.png', fullPage: true })
+
+    await page.getByLabel('Load case').selectOption('laden')
+    await expect(heatB).toHaveAttribute('data-spin-count', '0')
+    await expect(page.getByTestId('slip-heatmap-b-caption')).toHaveText(/No cell beyond the tyre peak/)
+    await expect(page).toHaveURL(/loadCase=laden/)
+    await page.getByLabel('Surface').selectOption('ice')
+    await expect(heatB).not.toHaveAttribute('data-spin-count', '0')
+    await expect(page).toHaveURL(/surface=ice/)
+
+    // Units: the change table follows the switch.
+    await page.getByLabel('Units').selectOption('imperial')
+    await expect(page.getByTestId('change-table').locator('thead')).toContainText('lbf·ft')
+    await expect(rows.first()).toContainText('-885.1')
+  })
+
+  test('dragging one surface turns the other with it', async ({ page }) => {
+    await signIn(page, DEMO.lead)
+    const site = await mapId(page, 'Site drive')
+    await page.goto(`/maps/compare?a=${site}:1&b=${site}:3`)
+    const first = page.locator('[data-testid="compare-surfaces"] .js-plotly-plot').first()
+    await expect(first.locator('.gl-container canvas')).toBeVisible()
+    const before = await eyeOf(page, 1)
+    const box = await first.boundingBox()
+    if (!box) throw new Error('no plot box')
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2)
+    await page.mouse.down()
+    await page.mouse.move(box.x + box.width / 2 + 160, box.y + box.height / 2 + 40, { steps: 12 })
+    await page.mouse.up()
+    await expect.poll(async () => JSON.stringify(await eyeOf(page, 1))).not.toBe(JSON.stringify(before))
+    const [a, b] = [await eyeOf(page, 0), await eyeOf(page, 1)]
+    expect(b?.x).toBeCloseTo(a?.x ?? NaN, 6)
+    expect(b?.y).toBeCloseTo(a?.y ?? NaN, 6)
+  })
+
+  test('refuses to compare a drive map with a regen map, with the reason', async ({ page }) => {
+    await signIn(page, DEMO.driver)
+    const drive = await mapId(page, 'Site drive')
+    const regen = await mapId(page, 'Site regen')
+    await page.goto(`/maps/compare?a=${drive}:1&b=${regen}:1`)
+    await expect(page.getByRole('alert')).toContainText('is a drive map and “Site regen” is a regen map')
+    await expect(page.locator('.js-plotly-plot')).toHaveCount(0)
+  })
+
+  test('an engineer proposes a traction-safe draft and saves it as a new revision', async ({ page }) => {
+    await signIn(page, DEMO.calib)
+    const road = await mapId(page, 'Road drive')
+    await page.goto(`/maps/compare?a=${road}:1&b=${road}:2&loadCase=empty&surface=gravel`)
+    await page.getByRole('button', { name: 'Propose a traction-safe draft' }).click()
+    await expect(page.getByTestId('proposal-summary')).toContainText('cells lowered')
+    await expect(page.getByTestId('proposal-table').locator('tbody tr').first()).toContainText('above the limit')
+    const save = page.getByRole('button', { name: 'Save as new revision' })
+    await expect(save).toBeDisabled()
+    await page.getByLabel('Why (required)').fill('Keep the solo tractor within grip on gravel')
+    await save.click()
+    await expect(page.getByRole('status')).toContainText('Saved as r3')
+    await page.getByRole('link', { name: 'Compare r2 with r3' }).click()
+    await expect(page).toHaveURL(new RegExp(`a=${road}%3A2|a=${road}:2`))
+    await expect(page.getByTestId('slip-heatmap-b')).toHaveAttribute('data-spin-count', '0')
+  })
+})

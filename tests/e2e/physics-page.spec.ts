@@ -1,0 +1,27 @@
+import { expect, test } from '@playwright/test'
+import { DEMO, signIn } from './helpers'
+
+test('a test driver runs a launch and a lift-off on the program physics page', async ({ page }) => {
+  await signIn(page, DEMO.driver)
+  await page.goto('/programs')
+  const href = await page.getByRole('link', { name: 'BX-64 Tipper' }).first().getAttribute('href')
+  await page.goto(`${href}/physics`)
+  await expect(page.getByRole('heading', { name: 'Physics of BX-64 Tipper' })).toBeVisible()
+  await expect(page.getByRole('note')).toContainText('closed course')
+  await expect(page.getByTestId('traction-table').locator('tbody tr')).toHaveCount(10) // 5 surfaces × empty, laden
+
+  await page.getByLabel('Surface').selectOption('wet-asphalt')
+  await page.getByRole('button', { name: 'Run launch' }).click()
+  const summary = page.getByTestId('simulation-summary')
+  await expect(summary).toContainText(/Time to 30 km\/h\s*\d+\.\d\d s/)
+  await expect(summary).toContainText('Peak jerk')
+  await expect(page.getByTestId('simulation-plots').locator('.js-plotly-plot')).toHaveCount(6)
+  await expect(page.getByRole('button', { name: 'Propose a traction-safe draft' })).toHaveCount(0) // drivers do not edit
+
+  await page.getByLabel('Map').selectOption({ label: 'Site regen (regen)' })
+  await page.getByLabel('Surface').selectOption('ice')
+  await expect(page).toHaveURL(/surface=ice/)
+  await page.getByRole('button', { name: 'Run lift-off' }).click()
+  await expect(summary).toContainText(/Drive axle locks\s*yes/)
+  await expect(page.getByTestId('slip-heatmap')).not.toHaveAttribute('data-spin-count', '0')
+})

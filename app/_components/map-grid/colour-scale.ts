@@ -32,11 +32,16 @@ function at(t: number): [number, number, number] {
   return [0, 1, 2].map((k) => Math.round(a[k] + (b[k] - a[k]) * f)) as [number, number, number]
 }
 
-/** A scale spanning the finite values of a table (0 is always inside, so a flat map is not all dark). */
-export function colourScale(values: number[][]): ColourScale {
+/**
+ * A scale from 0 (or the lowest value) to `ceiling`, normally the motor peak torque, so colours
+ * mean the same thing across maps and do not shift while one wild value is being typed in;
+ * values above it take the darkest colour. Without a ceiling the scale spans the table's values.
+ */
+export function colourScale(values: number[][], ceiling?: number): ColourScale {
   let min = 0
   let max = 0
   for (const row of values) for (const v of row) if (Number.isFinite(v)) [min, max] = [Math.min(min, v), Math.max(max, v)]
+  if (ceiling !== undefined && ceiling > 0) max = ceiling
   const span = max - min || 1
   const t = (v: number) => (v - min) / span
   return {

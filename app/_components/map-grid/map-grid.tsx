@@ -97,7 +97,7 @@ export default function MapGrid({ table, units, scale, findings, describe, readO
         maxCols={cols}
         fixedRowsTop={1}
         fixedColumnsStart={1}
-        colWidths={(c: number) => (c === 0 ? 124 : 60)}
+        colWidths={(c: number) => (c === 0 ? 112 : 56)}
         height={rows > 24 ? 560 : 'auto'}
         width="100%"
         outsideClickDeselects={false}

@@ -30,7 +30,7 @@ export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, on
   const [api, setApi] = useState<GridApi | null>(null)
   const [along, setAlong] = useState<'speed' | 'pedal'>('speed')
   const findings = useMemo(() => validate(table, limits ?? undefined), [table, limits])
-  const scale = useMemo(() => colourScale(table.values), [table])
+  const scale = useMemo(() => colourScale(table.values, limits?.motorPeakTorqueNm), [table, limits])
   const describe = useCallback((f: Finding) => toUnits(f.message, units), [units])
   const onApi = useCallback(
     (a: GridApi | null) => {
@@ -47,7 +47,7 @@ export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, on
     <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_22rem]">
       <div className="min-w-0 space-y-2">
         <MapGrid table={table} units={units} scale={scale} findings={findings} describe={describe} readOnly={!onEdit} onEdit={onEdit} onSelect={onSelect} onApi={onApi} cellShade={cellShade} />
-        <ColourLegend scale={scale} units={units} />
+        <ColourLegend scale={scale} units={units} ceiling={limits ? 'motor peak' : undefined} />
         <div className="flex items-center gap-2 pt-2 text-xs">
           <span className="text-slate-600">Plot</span>
           <button type="button" className={`btn px-2 py-0.5 text-xs ${along === 'speed' ? 'bg-accent-soft' : ''}`} onClick={() => setAlong('speed')} aria-pressed={along === 'speed'}>

@@ -4,6 +4,8 @@ import { requirePageUser } from '@/app/_lib/page-access'
 import { EDITORS } from '@/app/_lib/roles'
 import { getMap } from '@/db/queries/maps'
 import { countRevisions, listRevisions } from '@/db/queries/revisions'
+import { listReviewComments, listRevisionEvents } from '@/db/queries/review'
+import { listReports } from '@/db/queries/reports'
 import { HistoryTable } from './history-table'
 import { NotebookEntries } from './notebook-entries'
 
@@ -18,7 +20,13 @@ export default async function MapNotebookPage(props: {
   const map = Number.isInteger(id) && id > 0 ? await getMap(id) : null
   if (!map) notFound()
   const { saved } = await props.searchParams
-  const [revisions, total] = await Promise.all([listRevisions(map.id, { limit: 50 }), countRevisions(map.id)])
+  const [revisions, total, events, comments, reports] = await Promise.all([
+    listRevisions(map.id, { limit: 50 }),
+    countRevisions(map.id),
+    listRevisionEvents({ mapId: map.id }),
+    listReviewComments({ mapId: map.id }),
+    listReports({ mapId: map.id }),
+  ])
   const latest = revisions[0]
   return (
     <div className="space-y-6">
@@ -39,6 +47,11 @@ export default async function MapNotebookPage(props: {
               Open latest (r{latest.number})
             </Link>
           )}
+          {user.role === 'test_driver' && (
+            <Link href={`/reports/new?map=${map.id}`} className="btn">
+              File a drive report
+            </Link>
+          )}
           {EDITORS.includes(user.role) && (
             <Link href={`/maps/${map.id}/edit`} className="btn-primary">
               Edit
@@ -57,7 +70,7 @@ export default async function MapNotebookPage(props: {
       </section>
       <section>
         <h2 className="mb-2 text-lg font-semibold">Notebook</h2>
-        <NotebookEntries revisions={revisions} />
+        <NotebookEntries revisions={revisions} events={events} comments={comments} reports={reports} />
       </section>
     </div>
   )

@@ -3,6 +3,8 @@ import { requirePageUser } from './_lib/page-access'
 import { roleLabel } from './_lib/roles'
 import { SafetyCaution } from './_components/safety-caution'
 import { navFor } from './_components/nav-items'
+import { WaitingList } from './_components/waiting-list'
+import { waitingFor } from './_lib/waiting'
 import type { Role } from '@/app/_lib/roles'
 
 const ROLE_TASKS: Record<Role, string> = {
@@ -14,6 +16,7 @@ const ROLE_TASKS: Record<Role, string> = {
 
 export default async function OverviewPage() {
   const user = await requirePageUser()
+  const boxes = await waitingFor(user)
   return (
     <div className="space-y-6">
       <div>
@@ -22,6 +25,13 @@ export default async function OverviewPage() {
           Signed in as {roleLabel(user.role)}. {ROLE_TASKS[user.role]}
         </p>
       </div>
+      {boxes.length > 0 && (
+        <div className="grid gap-3 md:grid-cols-2 lg:grid-cols-3">
+          {boxes.map((b) => (
+            <WaitingList key={b.testId} {...b} />
+          ))}
+        </div>
+      )}
       <div className="grid gap-3 sm:grid-cols-3">
         {navFor(user.role)
           .filter((i) => i.href !== '/')

@@ -1,7 +1,8 @@
-import { and, desc, eq, sql, type SQL } from 'drizzle-orm'
+import { and, asc, desc, eq, isNull, sql, type SQL } from 'drizzle-orm'
 import { getDb } from '../client'
-import { driveReports, mapRevisions, maps, users, vehiclePrograms, type ReportFlag, type ReportRatings } from '../schema'
+import { driveReports, mapRevisions, maps, reportComments, users, vehiclePrograms, type ReportFlag, type ReportRatings } from '../schema'
 import { recordAudit } from './audit'
+import { enqueueMail, type OutgoingMail } from './mail'
 
 export interface ReportFields {
   revisionId: number
@@ -48,6 +49,7 @@ const columns = {
   safety: driveReports.safety,
   safetyResolvedAt: driveReports.safetyResolvedAt,
   safetyResolution: driveReports.safetyResolution,
+  leadReadAt: driveReports.leadReadAt,
   createdAt: driveReports.createdAt,
   updatedAt: driveReports.updatedAt,
 }
@@ -81,7 +83,8 @@ export async function listReports(filter: { revisionId?: number; mapId?: number;
   return selectReports(conds.length ? and(...conds) : undefined)
 }
 
-export async function createReport(input: ReportFields, driverId: number): Promise<number> {
+/** `safetyMail` is queued in the same transaction when the report opens a safety concern. */
+export async function createReport(input: ReportFields, driverId: number, safetyMail?: (id: number) => OutgoingMail): Promise<number> {
   const db = await getDb()
   return db.transaction(async (tx) => {
     const [row] = await tx
@@ -89,6 +92,7 @@ export async function createReport(input: ReportFields, driverId: number): Promi
       .values({ ...input, driverId, safety: safetyFlags(input.flags) > 0 ? 'open' : 'none' })
       .returning({ id: driveReports.id })
     await recordAudit({ actorId: driverId, action: 'report.create', entityType: 'drive_report', entityId: row.id, details: { revisionId: input.revisionId, safety: safetyFlags(input.flags) > 0 } }, tx)
+    if (safetyFlags(input.flags) > 0 && safetyMail) await enqueueMail([safetyMail(row.id)], tx)
     return row.id
   })
 }
@@ -97,7 +101,7 @@ export async function createReport(input: ReportFields, driverId: number): Promi
  * Replace a report's fields. A safety concern never closes by editing: once open it stays open
  * until a lead resolves it, and a resolved one reopens if more severity-4 flags are added.
  */
-export async function updateReport(id: number, input: ReportFields, actorId: number): Promise<void> {
+export async function updateReport(id: number, input: ReportFields, actorId: number, safetyMail?: (id: number) => OutgoingMail): Promise<void> {
   const db = await getDb()
   await db.transaction(async (tx) => {
     const [cur] = await tx.select({ safety: driveReports.safety, flags: driveReports.flags }).from(driveReports).where(eq(driveReports.id, id)).for('update')
@@ -105,6 +109,7 @@ export async function updateReport(id: number, input: ReportFields, actorId: num
     const after = safetyFlags(input.flags)
     const safety = cur.safety === 'open' || (cur.safety === 'none' && after > 0) || (cur.safety === 'resolved' && after > before) ? 'open' : cur.safety
     await tx.update(driveReports).set({ ...input, safety, updatedAt: new Date() }).where(eq(driveReports.id, id))
+    if (safety === 'open' && cur.safety !== 'open' && safetyMail) await enqueueMail([safetyMail(id)], tx)
     await recordAudit({ actorId, action: 'report.update', entityType: 'drive_report', entityId: id, details: { safety } }, tx)
   })
 }
@@ -136,4 +141,40 @@ export async function reportCountsByRevision(mapId: number) {
     .innerJoin(mapRevisions, eq(mapRevisions.id, driveReports.revisionId))
     .where(eq(mapRevisions.mapId, mapId))
     .groupBy(driveReports.revisionId)
+}
+
+/** A lead engineer has read the report: from now on the driver can no longer edit it. */
+export async function markReportRead(id: number, leadId: number): Promise<void> {
+  const db = await getDb()
+  await db.transaction(async (tx) => {
+    const rows = await tx.update(driveReports).set({ leadReadAt: new Date(), leadReadBy: leadId }).where(and(eq(driveReports.id, id), isNull(driveReports.leadReadAt))).returning({ id: driveReports.id })
+    if (rows[0]) await recordAudit({ actorId: leadId, action: 'report.read', entityType: 'drive_report', entityId: id }, tx)
+  })
+}
+
+export async function addReportComment(reportId: number, authorId: number, body: string) {
+  const db = await getDb()
+  const [row] = await db.insert(reportComments).values({ reportId, authorId, body }).returning()
+  return row
+}
+
+export async function listReportComments(reportId: number) {
+  const db = await getDb()
+  return db
+    .select({ id: reportComments.id, body: reportComments.body, createdAt: reportComments.createdAt, authorName: users.name })
+    .from(reportComments)
+    .innerJoin(users, eq(users.id, reportComments.authorId))
+    .where(eq(reportComments.reportId, reportId))
+    .orderBy(asc(reportComments.createdAt))
+}
+
+/** Addresses of everyone who wrote a revision of the map (its engineers). */
+export async function engineersOfMap(mapId: number): Promise<string[]> {
+  const db = await getDb()
+  const rows = await db
+    .selectDistinct({ email: users.email })
+    .from(mapRevisions)
+    .innerJoin(users, eq(users.id, mapRevisions.authorId))
+    .where(and(eq(mapRevisions.mapId, mapId), eq(users.disabled, false)))
+  return rows.map((r) => r.email)
 }

@@ -38,7 +38,7 @@ test.describe('comparing two revisions', () => {
     const heatB = page.getByTestId('slip-heatmap-b')
     await expect(heatB).toHaveAttribute('data-spin-count', '4')
     await expect(page.getByTestId('slip-heatmap-a')).toHaveAttribute('data-spin-count', '12')
-    await expect(heatB.locator('.heatmap, .hm').first()).toBeAttached()
+    await expect(heatB.locator('.main-svg').first()).toBeVisible()
     await page.screenshot({ path: 'docs/compare.png', fullPage: true })
 
     await page.getByLabel('Load case').selectOption('laden')

@@ -10,7 +10,7 @@ test('a test driver runs a launch and a lift-off on the program physics page', a
   await expect(page.getByRole('note')).toContainText('closed course')
   await expect(page.getByTestId('traction-table').locator('tbody tr')).toHaveCount(10) // 5 surfaces × empty, laden
 
-  await page.getByLabel('Surface').selectOption('wet-asphalt')
+  await page.getByLabel('Surface', { exact: true }).selectOption('wet-asphalt')
   await page.getByRole('button', { name: 'Run launch' }).click()
   const summary = page.getByTestId('simulation-summary')
   await expect(summary).toContainText(/Time to 30 km\/h\s*\d+\.\d\d s/)
@@ -18,8 +18,8 @@ test('a test driver runs a launch and a lift-off on the program physics page', a
   await expect(page.getByTestId('simulation-plots').locator('.js-plotly-plot')).toHaveCount(6)
   await expect(page.getByRole('button', { name: 'Propose a traction-safe draft' })).toHaveCount(0) // drivers do not edit
 
-  await page.getByLabel('Map').selectOption({ label: 'Site regen (regen)' })
-  await page.getByLabel('Surface').selectOption('ice')
+  await page.getByLabel('Map', { exact: true }).selectOption({ label: 'Site regen (regen)' })
+  await page.getByLabel('Surface', { exact: true }).selectOption('ice')
   await expect(page).toHaveURL(/surface=ice/)
   await page.getByRole('button', { name: 'Run lift-off' }).click()
   await expect(summary).toContainText(/Drive axle locks\s*yes/)

@@ -1,6 +1,7 @@
 /**
- * One-shot analysis of a small log already in memory: papaparse on the whole string, then the same row
- * sink as the streaming path. Handy for tests and tiny uploads; use {@link ingestLog} for files.
+ * One-shot analysis of a small log already in memory: papaparse's full CSV parse of the whole string into
+ * cells, then the same row sink as the streaming path (which splits lines itself), so the two cross-check.
+ * Handy for tests and tiny uploads; use {@link ingestLog} for files.
  */
 import Papa from 'papaparse'
 import { LogFormatError } from '@/physics/drive-log'
@@ -15,7 +16,7 @@ export function ingestLogText(text: string, opts: LogReadOptions = {}): LogInges
   const nl = body.search(/[\r\n]/)
   const delimiter = sniffHeaderLine(nl >= 0 ? body.slice(0, nl) : body)
   const parsed = Papa.parse<string[]>(body, { delimiter, header: false, dynamicTyping: false, skipEmptyLines: false })
-  const sink = createLogRowSink(opts)
+  const sink = createLogRowSink(opts, delimiter)
   sink.rows(parsed.data, parsed.errors)
   return sink.finish(Buffer.byteLength(text))
 }

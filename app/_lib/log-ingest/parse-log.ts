@@ -1,13 +1,17 @@
 /**
  * Server-side streaming ingest of a CSV drive log: bytes → validated UTF-8 text → papaparse's streaming
- * parser (Node stream input, `chunk` callback, `header: false`, no dynamic typing) → row sink → analyser.
- * Only one parser chunk (~64 KiB of text) and the analyser's bounded state are held at any time.
+ * parser (Node stream input, `chunk` callback) → row sink → analyser. Papaparse carries the stream: chunk
+ * boundaries, partial lines, line-ending detection and line splitting. It runs in its fast mode with a
+ * delimiter that cannot occur, so each row it returns is one physical line; the sink splits unquoted
+ * lines and reads the numbers in place (no cell strings, no row objects), and hands any line with a
+ * double quote back to papaparse's full CSV rules. Only one parser chunk (~64 KiB of text) and the
+ * analyser's bounded state are held at any time.
  */
 import { Readable } from 'node:stream'
 import Papa from 'papaparse'
 import { LogFormatError } from '@/physics/drive-log'
 import { readHead } from './header-line'
-import { createLogRowSink, type LogIngestResult, type LogReadOptions } from './row-sink'
+import { createLogRowSink, LINE_SPLIT_DELIMITER, type LogIngestResult, type LogReadOptions } from './row-sink'
 import { textChunks, type LogByteSource } from './text-source'
 
 /** Options of {@link ingestLog}. */
@@ -44,7 +48,7 @@ export async function ingestLog(source: LogByteSource, opts: IngestOptions = {})
   const counter = { bytes: 0 }
   const chunks = textChunks(source, counter, opts.maxBytes)
   const { head, delimiter } = await readHead(chunks)
-  const sink = createLogRowSink(opts)
+  const sink = createLogRowSink(opts, delimiter)
   const readable = Readable.from(prepend(head, chunks), { objectMode: true })
   let fed = 0
   readable.on('data', (s: string) => { fed += s.length }) // runs before papaparse's listener: chars handed over so far
@@ -58,14 +62,15 @@ export async function ingestLog(source: LogByteSource, opts: IngestOptions = {})
       reject(e)
     }
     Papa.parse<string[], NodeJS.ReadableStream>(readable, {
-      delimiter,
+      delimiter: LINE_SPLIT_DELIMITER,
+      fastMode: true, // split lines only; quotes are handled per line by the sink
       header: false,
       dynamicTyping: false,
       skipEmptyLines: false,
       chunk(results, parser) {
         if (settled) return
         try {
-          sink.rows(results.data, results.errors)
+          sink.lines(results.data)
           if (fed - results.meta.cursor > MAX_PENDING_CHARS)
             throw new LogFormatError('row', 0, null, `no complete row in over ${MAX_PENDING_CHARS} characters after row ${sink.dataRows + 1} of data (an unbalanced quote?)`)
           opts.onProgress?.(counter.bytes, sink.dataRows)

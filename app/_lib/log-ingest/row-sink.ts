@@ -1,12 +1,15 @@
 /**
- * Consumes parsed CSV rows (arrays of cells, header first) and feeds the pure analyser. Shared by the
- * streaming ingest and the one-shot text parse, so both give the same result for the same bytes.
- * Line numbers count physical lines, assuming no line breaks inside quoted cells.
+ * Consumes a parsed log and feeds the pure analyser, in one of two forms:
+ *  • `rows`: CSV rows already split into cells by papaparse (the one-shot path; line numbers count rows);
+ *  • `lines`: whole physical lines from papaparse's streaming line splitter (the streaming path). An
+ *    unquoted line is split and read in place; a line holding a double quote is re-parsed by papaparse
+ *    with full CSV quoting, joining the following lines while a quoted cell is still open.
+ * Both give the same result for the same bytes.
  */
-import type { ParseError } from 'papaparse'
+import Papa, { type ParseError } from 'papaparse'
 import {
-  createLogAnalyser, createRowDecoder, LogFormatError, resolveLogHeader,
-  type AnalysisResult, type LogAnalyser, type LogAnalyserOptions, type LogHeaderMapping, type LogLayout, type RowDecoder,
+  createLogAnalyser, createRowDecoders, LogFormatError, resolveLogHeader,
+  type AnalysisResult, type LineDecoder, type LogAnalyser, type LogAnalyserOptions, type LogHeaderMapping, type LogLayout, type RowDecoder,
 } from '@/physics/drive-log'
 
 /** Options for reading a log: header mapping, wheel radius for angular wheel speeds, and the analysis. */
@@ -30,25 +33,59 @@ export interface LogIngestResult extends AnalysisResult {
 /** Row consumer; `rows` takes one parser chunk of rows and its parse errors (row indexes relative to the chunk). */
 export interface LogRowSink {
   rows(rows: readonly (readonly string[])[], errors: readonly ParseError[]): void
+  /** Physical lines, each as papaparse's line splitter returns it (normally one element). */
+  lines(lines: readonly (readonly string[])[]): void
   readonly dataRows: number
   finish(bytes: number): LogIngestResult
 }
 
 const isBlank = (r: readonly string[]) => r.length === 1 && r[0].trim() === ''
+/** A quoted record may span at most this many characters. */
+const MAX_QUOTED_RECORD = 1 << 20
+// The line splitter's delimiter: a control character refused in the header, so a line is normally one cell.
+export const LINE_SPLIT_DELIMITER = '\u001f'
 
-/** @example const sink = createLogRowSink({ surface: 'dry-asphalt' }); sink.rows(papaRows, []); sink.finish(bytes) */
-export function createLogRowSink(opts: LogReadOptions): LogRowSink {
+/** @example const sink = createLogRowSink({ surface: 'dry-asphalt' }, ','); sink.rows(papaRows, []); sink.finish(bytes) */
+export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowSink {
   let line = 0
   let dataRows = 0
   let layout: LogLayout | null = null
   let decode: RowDecoder | null = null
+  let decodeLine: LineDecoder | null = null
   let analyser: LogAnalyser | null = null
+  let quoted: { text: string; line: number } | null = null
 
   const header = (cells: readonly string[]) => {
     layout = resolveLogHeader(cells, { mapping: opts.mapping, wheelRadiusM: opts.wheelRadiusM, requireBrake: opts.kind === 'regen' && !!opts.map })
     const time = layout.byChannel.time
-    decode = createRowDecoder(layout)
+    const d = createRowDecoders(layout, delimiter)
+    decode = d.fromFields
+    decodeLine = d.fromLine
     analyser = createLogAnalyser({ ...opts, timeColumn: time ? { index: time.index + 1, name: time.header } : undefined })
+  }
+  /** One complete record as cells, at its first physical line. */
+  const record = (cells: readonly string[], at: number) => {
+    if (decode === null || analyser === null) {
+      if (isBlank(cells)) return
+      if (at !== 1) throw new LogFormatError('header', at, null, 'the header must be the first line')
+      header(cells)
+      return
+    }
+    if (isBlank(cells)) return
+    analyser.push(decode(cells, at))
+    dataRows++
+  }
+  /** Full CSV parse of a record holding quotes; null while a quoted cell is still open. */
+  const parseQuoted = (text: string, at: number): string[] | null => {
+    const p = Papa.parse<string[]>(text, { delimiter, header: false, dynamicTyping: false, skipEmptyLines: false })
+    if (p.errors.some((e) => e.code === 'MissingQuotes')) {
+      if (text.length > MAX_QUOTED_RECORD) throw new LogFormatError('row', at, null, 'malformed CSV: a quoted field is not closed')
+      return null
+    }
+    if (p.errors.length) throw new LogFormatError('row', at, null, `malformed CSV: ${p.errors[0].message}`)
+    const rows = p.data.length > 1 && isBlank(p.data[p.data.length - 1]) ? p.data.slice(0, -1) : p.data
+    if (rows.length !== 1) throw new LogFormatError('row', at, null, 'malformed CSV: quoting splits this line into several records')
+    return rows[0]
   }
 
   return {
@@ -58,22 +95,33 @@ export function createLogRowSink(opts: LogReadOptions): LogRowSink {
         const e = errors.reduce((a, b) => ((a.row ?? 0) <= (b.row ?? 0) ? a : b))
         throw new LogFormatError('row', base + (e.row ?? 0) + 1, null, `malformed CSV: ${e.message}`)
       }
-      for (let i = 0; i < rows.length; i++) {
-        const r = rows[i]
+      for (let i = 0; i < rows.length; i++) record(rows[i], ++line)
+    },
+    lines(parts) {
+      for (let i = 0; i < parts.length; i++) {
+        const p = parts[i]
+        const text = p.length === 1 ? p[0] : p.join(LINE_SPLIT_DELIMITER)
         line++
-        if (decode === null || analyser === null) {
-          if (isBlank(r)) continue
-          if (line !== 1) throw new LogFormatError('header', line, null, 'the header must be the first line')
-          header(r)
+        if (quoted !== null) {
+          quoted.text += '\n' + text
+          const cells = parseQuoted(quoted.text, quoted.line)
+          if (cells) { const at = quoted.line; quoted = null; record(cells, at) }
           continue
         }
-        if (isBlank(r)) continue
-        analyser.push(decode(r, line))
+        if (text.indexOf('"') >= 0) {
+          const cells = parseQuoted(text, line)
+          if (cells) record(cells, line); else quoted = { text, line }
+          continue
+        }
+        if (decodeLine === null || analyser === null) { record(Papa.parse<string[]>(text, { delimiter }).data[0] ?? [''], line); continue }
+        if (text.length === 0 || (text.trim() === '' && text.indexOf(delimiter) < 0)) continue // blank line
+        analyser.push(decodeLine(text, line))
         dataRows++
       }
     },
     get dataRows() { return dataRows },
     finish(bytes) {
+      if (quoted !== null) throw new LogFormatError('row', quoted.line, null, 'malformed CSV: a quoted field is not closed at the end of the log')
       if (!layout || !analyser) throw new LogFormatError('empty', 0, null, 'the log is empty')
       if (dataRows === 0) throw new LogFormatError('empty', line, null, 'the log has a header but no data rows')
       const l: LogLayout = layout

@@ -3,6 +3,7 @@ import { checkReportTarget } from '@/app/_lib/report-access'
 import { readJson } from '@/app/_lib/request'
 import { reportInputSchema } from '@/app/_schemas/report'
 import { createReport, getReport, listReports } from '@/db/queries/reports'
+import { nudgeMail, safetyMailFor } from '@/app/_lib/report-mail'
 
 // GET /api/reports?revisionId=&mapId=&mine=1&openSafety=1 — drive reports, newest first
 export const GET = withRole('signed-in', async (req, { user }) => {
@@ -21,6 +22,7 @@ export const GET = withRole('signed-in', async (req, { user }) => {
 export const POST = withRole(['test_driver'], async (req, { user }) => {
   const input = await readJson(req, reportInputSchema)
   await checkReportTarget(input)
-  const id = await createReport(input, user.id)
+  const id = await createReport(input, user.id, await safetyMailFor(input, user))
+  nudgeMail()
   return Response.json({ report: await getReport(id) }, { status: 201 })
 })

@@ -1,8 +1,10 @@
 import { withRole } from '@/app/_lib/access'
 import { assertOwner, checkReportTarget, loadReport } from '@/app/_lib/report-access'
 import { readJson } from '@/app/_lib/request'
+import { ConflictError } from '@/app/_lib/errors'
 import { reportInputSchema } from '@/app/_schemas/report'
 import { getReport, updateReport } from '@/db/queries/reports'
+import { nudgeMail, safetyMailFor } from '@/app/_lib/report-mail'
 import { listLogs } from '@/db/queries/logs'
 
 // GET /api/reports/:id — one drive report with its logs (status and progress, no analysis)
@@ -15,8 +17,10 @@ export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }
 export const PUT = withRole<{ id: string }>(['test_driver'], async (req, { user, params }) => {
   const report = await loadReport(params.id)
   assertOwner(report, user)
+  if (report.leadReadAt) throw new ConflictError('A lead engineer has read this report; it can no longer be edited. Add a comment instead.')
   const input = await readJson(req, reportInputSchema)
   await checkReportTarget(input)
-  await updateReport(report.id, input, user.id)
+  await updateReport(report.id, input, user.id, await safetyMailFor(input, user))
+  nudgeMail()
   return Response.json({ report: await getReport(report.id) })
 })

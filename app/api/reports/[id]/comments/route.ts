@@ -1,0 +1,24 @@
+import { z } from 'zod'
+import { withRole } from '@/app/_lib/access'
+import { EDITORS } from '@/app/_lib/roles'
+import { loadReport } from '@/app/_lib/report-access'
+import { readJson } from '@/app/_lib/request'
+import { addReportComment, listReportComments } from '@/db/queries/reports'
+import { recordAudit } from '@/db/queries/audit'
+
+const commentSchema = z.object({ body: z.string().trim().min(1, 'The comment is empty').max(5000) })
+
+// GET /api/reports/:id/comments — engineers' comments on a drive report
+export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }) => {
+  const report = await loadReport(params.id)
+  return Response.json({ comments: await listReportComments(report.id) })
+})
+
+// POST /api/reports/:id/comments — an engineer comments on a drive report
+export const POST = withRole<{ id: string }>(EDITORS, async (req, { user, params }) => {
+  const report = await loadReport(params.id)
+  const { body } = await readJson(req, commentSchema)
+  const comment = await addReportComment(report.id, user.id, body)
+  await recordAudit({ actorId: user.id, action: 'report.comment', entityType: 'drive_report', entityId: report.id })
+  return Response.json({ comment }, { status: 201 })
+})

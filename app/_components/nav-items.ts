@@ -14,6 +14,8 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/reports', label: 'Drive reports', roles: 'all' },
   { href: '/programs', label: 'Vehicle programs', roles: 'all' },
   { href: '/admin/users', label: 'Users', roles: ['admin'] },
+  { href: '/admin/mail', label: 'E-mail', roles: ['admin'] },
+  { href: '/admin/audit', label: 'Audit trail', roles: ['admin', 'lead_engineer'] },
 ]
 
 export function navFor(role: Role): NavItem[] {

@@ -48,3 +48,19 @@ export function clientIp(req: Request): string | null {
   const fwd = req.headers.get('x-forwarded-for')
   return fwd?.split(',')[0].trim() || req.headers.get('x-real-ip') || null
 }
+
+/**
+ * A route anyone may call (sign-in helpers such as a password reset). Declared like the others so
+ * the access-matrix test sees it, with the same error handling.
+ */
+export function publicRoute<P = Record<string, string>>(handler: (req: Request, ctx: { params: P }) => Promise<Response>) {
+  const route = async (req: Request, ctx: NextCtx<P>): Promise<Response> => {
+    try {
+      const params = await ctx.params
+      return await runWithRequestContext({ ip: clientIp(req) }, () => handler(req, { params }))
+    } catch (e) {
+      return errorResponse(e)
+    }
+  }
+  return Object.assign(route, { access: 'public' as const })
+}

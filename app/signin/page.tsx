@@ -12,6 +12,9 @@ export default async function SignInPage() {
       <h1 className="mb-1 text-2xl font-bold">Sign in</h1>
       <p className="mb-6 text-sm text-slate-600">Use the account your admin gave you.</p>
       <SignInForm />
+      <p className="mt-3 text-sm">
+        <a href="/forgot-password" className="text-accent hover:underline">Forgot your password?</a>
+      </p>
     </div>
   )
 }

@@ -79,7 +79,7 @@ test.describe('comparing two revisions', () => {
     const drive = await mapId(page, 'Site drive')
     const regen = await mapId(page, 'Site regen')
     await page.goto(`/maps/compare?a=${drive}:1&b=${regen}:1`)
-    await expect(page.getByRole('alert')).toContainText('is a drive map and “Site regen” is a regen map')
+    await expect(page.getByRole('alert').filter({ hasText: 'is a drive map' })).toContainText('is a drive map and “Site regen” is a regen map')
     await expect(page.locator('.js-plotly-plot')).toHaveCount(0)
   })
 

@@ -25,6 +25,10 @@ import type { UnitSet } from './units'
 registerCellType(TextCellType)
 registerPlugin(CopyPaste)
 
+// Module constants so their identity never changes between renders (see afterSelectionEnd).
+const COPY_PASTE = { rowsLimit: 65, columnsLimit: 65 }
+const colWidth = (c: number) => (c === 0 ? 112 : 56)
+
 /** What the parent may ask of the grid after it has mounted. */
 export interface GridApi {
   selectCell: (row: number, col: number) => void
@@ -79,6 +83,19 @@ export default function MapGrid({ table, units, scale, findings, describe, readO
     [onEdit],
   )
 
+  // Stable handlers: the wrapper passes every changed prop to updateSettings, and a selection
+  // hook re-run by that update would otherwise feed back into a render loop.
+  const lastRange = useRef('')
+  const afterSelectionEnd = useCallback(
+    (r0: number, c0: number, r1: number, c1: number) => {
+      const key = `${r0},${c0},${r1},${c1}`
+      if (key === lastRange.current) return
+      lastRange.current = key
+      onSelect?.({ r0, c0, r1, c1 })
+    },
+    [onSelect],
+  )
+
   const rows = data.length
   const cols = data[0]?.length ?? 0
   return (
@@ -91,13 +108,13 @@ export default function MapGrid({ table, units, scale, findings, describe, readO
         hotRenderer={renderer}
         cells={cells}
         beforeChange={beforeChange}
-        afterSelectionEnd={(r0: number, c0: number, r1: number, c1: number) => onSelect?.({ r0, c0, r1, c1 })}
-        copyPaste={{ rowsLimit: 65, columnsLimit: 65 }}
+        afterSelectionEnd={afterSelectionEnd}
+        copyPaste={COPY_PASTE}
         maxRows={rows}
         maxCols={cols}
         fixedRowsTop={1}
         fixedColumnsStart={1}
-        colWidths={(c: number) => (c === 0 ? 112 : 56)}
+        colWidths={colWidth}
         height={rows > 24 ? 560 : 'auto'}
         width="100%"
         outsideClickDeselects={false}

@@ -40,8 +40,8 @@ export interface LogRowSink {
 }
 
 const isBlank = (r: readonly string[]) => r.length === 1 && r[0].trim() === ''
-/** A quoted record may span at most this many characters. */
-const MAX_QUOTED_RECORD = 1 << 20
+/** A record with a quoted cell that spans lines may be at most this long. */
+const MAX_QUOTED_RECORD = 65_536
 // The line splitter's delimiter: a control character refused in the header, so a line is normally one cell.
 export const LINE_SPLIT_DELIMITER = '\u001f'
 
@@ -78,10 +78,7 @@ export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowS
   /** Full CSV parse of a record holding quotes; null while a quoted cell is still open. */
   const parseQuoted = (text: string, at: number): string[] | null => {
     const p = Papa.parse<string[]>(text, { delimiter, header: false, dynamicTyping: false, skipEmptyLines: false })
-    if (p.errors.some((e) => e.code === 'MissingQuotes')) {
-      if (text.length > MAX_QUOTED_RECORD) throw new LogFormatError('row', at, null, 'malformed CSV: a quoted field is not closed')
-      return null
-    }
+    if (p.errors.some((e) => e.code === 'MissingQuotes')) return null
     if (p.errors.length) throw new LogFormatError('row', at, null, `malformed CSV: ${p.errors[0].message}`)
     const rows = p.data.length > 1 && isBlank(p.data[p.data.length - 1]) ? p.data.slice(0, -1) : p.data
     if (rows.length !== 1) throw new LogFormatError('row', at, null, 'malformed CSV: quoting splits this line into several records')
@@ -104,6 +101,8 @@ export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowS
         line++
         if (quoted !== null) {
           quoted.text += '\n' + text
+          if (quoted.text.length > MAX_QUOTED_RECORD) throw new LogFormatError('row', quoted.line, null, 'malformed CSV: a quoted field is not closed')
+          if (text.indexOf('"') < 0) continue // only a quote can close the open cell: no re-parse needed
           const cells = parseQuoted(quoted.text, quoted.line)
           if (cells) { const at = quoted.line; quoted = null; record(cells, at) }
           continue
@@ -114,7 +113,7 @@ export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowS
           continue
         }
         if (decodeLine === null || analyser === null) { record(Papa.parse<string[]>(text, { delimiter }).data[0] ?? [''], line); continue }
-        if (text.length === 0 || (text.trim() === '' && text.indexOf(delimiter) < 0)) continue // blank line
+        if (text.length === 0 || (text.charCodeAt(0) <= 32 && text.trim() === '' && text.indexOf(delimiter) < 0)) continue // blank line
         analyser.push(decodeLine(text, line))
         dataRows++
       }

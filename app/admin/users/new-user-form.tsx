@@ -1,5 +1,6 @@
 'use client'
-import { useForm } from 'react-hook-form'
+import { useForm, type Resolver } from 'react-hook-form'
+import { z } from 'zod'
 import { zodResolver } from '@hookform/resolvers/zod'
 import { useMutation } from '@tanstack/react-query'
 import { useState } from 'react'
@@ -8,15 +9,20 @@ import { ROLE_LABELS, ROLES } from '@/app/_lib/roles'
 import { createUserSchema, type CreateUserInput } from '@/app/_schemas/user'
 
 export function NewUserForm({ onCreated }: { onCreated: () => void }) {
+  const [invite, setInvite] = useState(false)
   const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null)
   const { register, handleSubmit, reset, formState } = useForm<CreateUserInput>({
-    resolver: zodResolver(createUserSchema),
+    // An invitee sets their own password, so the form does not ask for one.
+    resolver: zodResolver(invite ? createUserSchema.extend({ password: createUserSchema.shape.password.optional().or(z.literal('')) }) : createUserSchema) as Resolver<CreateUserInput>,
     defaultValues: { role: 'test_driver' },
   })
   const create = useMutation({
-    mutationFn: (input: CreateUserInput) => api<{ user: { email: string } }>('/api/users', { method: 'POST', json: input }),
+    mutationFn: (input: CreateUserInput) =>
+      invite
+        ? api<{ user: { email: string } }>('/api/users/invite', { method: 'POST', json: { email: input.email, name: input.name, role: input.role } })
+        : api<{ user: { email: string } }>('/api/users', { method: 'POST', json: input }),
     onSuccess: ({ user }) => {
-      setMessage({ ok: true, text: `Created ${user.email}.` })
+      setMessage({ ok: true, text: invite ? `Invited ${user.email}: a one-time link is on its way.` : `Created ${user.email}.` })
       reset({ role: 'test_driver', email: '', name: '', password: '' })
       onCreated()
     },
@@ -44,13 +50,16 @@ export function NewUserForm({ onCreated }: { onCreated: () => void }) {
           ))}
         </select>
       </div>
-      <div>
+      <label className="flex items-center gap-2 text-sm md:col-span-2">
+        <input type="checkbox" checked={invite} onChange={(e) => setInvite(e.target.checked)} /> Invite by e-mail (they set their own password through a one-time link)
+      </label>
+      {!invite && <div>
         <label htmlFor="nu-password" className="label">Initial password</label>
         <input id="nu-password" type="password" autoComplete="new-password" className="field" {...register('password')} />
         {err.password && <p className="error-text">{err.password.message}</p>}
-      </div>
+      </div>}
       <div className="md:col-span-2 flex items-center gap-3">
-        <button type="submit" className="btn-primary" disabled={create.isPending}>Create user</button>
+        <button type="submit" className="btn-primary" disabled={create.isPending}>{invite ? 'Send invitation' : 'Create user'}</button>
         {message && (
           <p role={message.ok ? 'status' : 'alert'} className={message.ok ? 'text-sm text-accent' : 'error-text text-sm'}>
             {message.text}

@@ -58,6 +58,23 @@ describe('ingestLog (streaming) equals a one-shot parse', () => {
     expect(await ingestLog(generateLogChunks(gen), OPTS)).toEqual(ingestLogText(generateLog(gen).csv, OPTS))
   })
 
+  it('lines with quoted cells (commas, doubled quotes, a quoted number) go through full CSV rules', async () => {
+    const quotedText = text.split('\r\n').map((l, i) => (i > 0 && l && i % 97 === 0 ? l.replace(/,x$/, ',"a, ""b"", c"').replace(/^([^,]*),/, '"$1",') : l)).join('\r\n')
+    expect(quotedText).toContain('"a, ""b"", c"')
+    const bytesQ = new TextEncoder().encode(quotedText)
+    expect(await ingestLog(streamOf(bytesQ, [4099, 65_536, 200_001]), OPTS)).toEqual(ingestLogText(quotedText, OPTS))
+  })
+
+  it('a quoted cell spanning lines is one record; error lines stay physical lines after it', async () => {
+    const h = 'time_s,road_speed_kmh,wheel_speed_kmh,accel_pedal_pct,note'
+    const log = `${h}\n0,10,10,5,"two\nlines"\n0.1,10,10,5,ok\n0.2,10,10,5,"x"\n`
+    const r = await ingestLog(Readable.from([Buffer.from(log)]))
+    expect(r.samples).toBe(3)
+    expect(r.columns.ignored).toEqual([{ header: 'note', index: 5, reason: 'not a column Mapwright reads' }])
+    const e = await rejection(ingestLog(Readable.from([Buffer.from(log + '0.3,bad,10,5,z\n')])))
+    expect(e).toMatchObject({ line: 6, column: { index: 2 } })
+  })
+
   it('reports progress with growing bytes and rows', async () => {
     const seen: [number, number][] = []
     const r = await ingestLog(streamOf(bytes, [50_000, 150_000, 300_000]), { ...OPTS, onProgress: (b, n) => seen.push([b, n]) })

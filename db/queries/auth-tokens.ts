@@ -1,0 +1,34 @@
+import { and, eq, gt, isNull } from 'drizzle-orm'
+import { getDb } from '../client'
+import { authTokens, users } from '../schema'
+import { recordAudit } from './audit'
+import { enqueueMail, type OutgoingMail } from './mail'
+
+/** Store a one-time link's hash and queue its e-mail in one transaction. */
+export async function createAuthToken(t: { userId: number; kind: 'invite' | 'reset'; tokenHash: string; expiresAt: Date; mail: OutgoingMail; actorId: number | null }) {
+  const db = await getDb()
+  await db.transaction(async (tx) => {
+    await tx.insert(authTokens).values({ userId: t.userId, kind: t.kind, tokenHash: t.tokenHash, expiresAt: t.expiresAt })
+    await enqueueMail([t.mail], tx)
+    await recordAudit({ actorId: t.actorId, action: `auth.${t.kind}-link`, entityType: 'user', entityId: t.userId }, tx)
+  })
+}
+
+/**
+ * Use a one-time link: if the hash names an unused, unexpired token, mark it used and set the
+ * password, atomically (a second use, even at the same instant, finds it used). Returns the user id.
+ */
+export async function consumeAuthToken(tokenHash: string, passwordHash: string): Promise<number | null> {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const [tok] = await tx
+      .update(authTokens)
+      .set({ usedAt: new Date() })
+      .where(and(eq(authTokens.tokenHash, tokenHash), isNull(authTokens.usedAt), gt(authTokens.expiresAt, new Date())))
+      .returning({ userId: authTokens.userId, kind: authTokens.kind })
+    if (!tok) return null
+    await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, tok.userId))
+    await recordAudit({ actorId: tok.userId, action: `auth.${tok.kind}-used`, entityType: 'user', entityId: tok.userId }, tx)
+    return tok.userId
+  })
+}

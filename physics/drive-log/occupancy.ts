@@ -6,18 +6,27 @@
  */
 import type { MapOccupancy } from './types'
 
-/** Index i and weight f of the upper neighbour: value = axis[i]·(1−f) + axis[i+1]·f, clamped. */
-function locate(axis: readonly number[], x: number): [number, number] {
+/**
+ * Lower breakpoint index of x on an ascending axis, clamped to [0, n − 2] (0 for a one-point axis);
+ * the weight of the upper neighbour is then (x − axis[i])/(axis[i+1] − axis[i]) clamped to [0, 1].
+ */
+function lowerIndex(axis: readonly number[], x: number): number {
   const n = axis.length
-  if (n === 1 || x <= axis[0]) return [0, 0]
-  if (x >= axis[n - 1]) return [n - 2, 1]
-  let lo = 0
-  let hi = n - 1
+  if (n < 3 || x <= axis[1]) return 0
+  if (x >= axis[n - 2]) return n - 2
+  let lo = 1
+  let hi = n - 2
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1
     if (axis[mid] <= x) lo = mid; else hi = mid
   }
-  return [lo, (x - axis[lo]) / (axis[lo + 1] - axis[lo])]
+  return lo
+}
+
+function upperWeight(axis: readonly number[], i: number, x: number): number {
+  if (axis.length === 1) return 0
+  const f = (x - axis[i]) / (axis[i + 1] - axis[i])
+  return f <= 0 ? 0 : f >= 1 ? 1 : f
 }
 
 /** Accumulator for one map's axes. */
@@ -37,8 +46,11 @@ export function createOccupancy(kind: 'drive' | 'regen', rowAxis: readonly numbe
   let unassignedS = 0
   return {
     add(pedalPct, speedKmh, dtS) {
-      const [r, fr] = locate(rows, pedalPct)
-      const [c, fc] = locate(cols, speedKmh)
+      // No tuples here: this runs once per log row.
+      const r = lowerIndex(rows, pedalPct)
+      const fr = upperWeight(rows, r, pedalPct)
+      const c = lowerIndex(cols, speedKmh)
+      const fc = upperWeight(cols, c, speedKmh)
       const k = r * nc + c
       grid[k] += dtS * (1 - fr) * (1 - fc)
       if (fc > 0) grid[k + 1] += dtS * (1 - fr) * fc

@@ -24,6 +24,8 @@ export interface RenderContext {
 
 type Renderer = (instance: Handsontable.Core, TD: HTMLTableCellElement, row: number, col: number, prop: string | number, value: unknown, cellProperties: Handsontable.CellProperties) => void
 
+const AXIS_BAND = '#e3e9ed'
+const AXIS_CORNER = '#cfd8de'
 const MW_CLASSES = ['mw-cell', 'mw-corner', 'mw-axis', 'mw-value', 'mw-error', 'mw-warning']
 
 /**
@@ -52,6 +54,8 @@ export function makeRenderer(store: RenderStore): Renderer {
     TD.style.color = ''
     TD.style.boxShadow = ''
     TD.textContent = typeof value === 'number' ? fmtCell(value) : String(value ?? '')
+    // Inline like the value colours, so the theme's cell background cannot win over the axis band.
+    if (isAxis) TD.style.backgroundColor = row === 0 && col === 0 ? AXIS_CORNER : AXIS_BAND
     if (!isAxis && typeof value === 'number') {
       const nm = units.torqueIn(value)
       TD.style.backgroundColor = scale.colour(nm)

@@ -15,7 +15,7 @@ export interface GridEdit {
 }
 
 export function cornerText(table: MapTable, u: UnitSet): string {
-  return `${table.kind === 'regen' ? 'brake %' : 'pedal %'} \\ ${u.speed} · ${u.torque}`
+  return `${table.kind === 'regen' ? 'brake' : 'pedal'} %\\${u.speed} · ${u.torque}`
 }
 
 /**

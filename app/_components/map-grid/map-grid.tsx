@@ -27,7 +27,7 @@ registerPlugin(CopyPaste)
 
 // Module constants so their identity never changes between renders (see afterSelectionEnd).
 const COPY_PASTE = { rowsLimit: 65, columnsLimit: 65 }
-const colWidth = (c: number) => (c === 0 ? 112 : 56)
+const colWidth = (c: number) => (c === 0 ? 118 : 58)
 
 /** What the parent may ask of the grid after it has mounted. */
 export interface GridApi {
@@ -107,6 +107,7 @@ export default function MapGrid({ table, units, scale, findings, describe, readO
         themeName="ht-theme-main"
         hotRenderer={renderer}
         cells={cells}
+        readOnlyCellClassName="mw-readonly" // not the default dimmed style, which would hide the colour scale
         beforeChange={beforeChange}
         afterSelectionEnd={afterSelectionEnd}
         copyPaste={COPY_PASTE}

@@ -44,7 +44,7 @@ export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, on
   const col = range && range.c0 >= 1 ? Math.min(range.c0, table.colAxis.length) - 1 : 0
 
   return (
-    <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_22rem]">
+    <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
       <div className="min-w-0 space-y-2">
         <MapGrid table={table} units={units} scale={scale} findings={findings} describe={describe} readOnly={!onEdit} onEdit={onEdit} onSelect={onSelect} onApi={onApi} cellShade={cellShade} />
         <ColourLegend scale={scale} units={units} ceiling={limits ? 'motor peak' : undefined} />

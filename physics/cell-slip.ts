@@ -4,12 +4,12 @@
  */
 import { driveAxleLimitN, driveAxleLoadN, steerLiftForceN } from './axle-model'
 import { deliverableAtShaft } from './envelope'
-import { motorTorqueFromWheel, overallRatio, wheelTorqueFromMotor } from './driveline'
+import { motorTorqueFromWheel, overallRatio } from './driveline'
 import { PhysicsInputError, requireFinite } from './errors'
 import { axleLoadsFor } from './load-case'
 import { SURFACES, type Surface, type SurfaceId } from './surfaces'
 import { gradeCos } from './traction'
-import { checkCoeffs, peakForceRatio, slipForForceRatio } from './tyre'
+import { checkCoeffs, peakForceRatio, slipSolverFor } from './tyre'
 import { kmhToMps } from './units'
 import type { LoadCase, VehicleParams } from './vehicle'
 
@@ -75,6 +75,9 @@ export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadS
   const driveLimitedBy = driveLimit >= steerLiftForceN(model, cosG) ? 'steer-axle-lift' : 'tyre'
   const atDrive = motorTorqueFromWheel(vehicle, driveLimit * R, gearIndex)
   const atRegen = motorTorqueFromWheel(vehicle, -regenLimit * R, gearIndex)
+  // Per cell only the two inputs are validated: the curve, ratio and efficiency were checked above.
+  const solve = slipSolverFor(coeffs)
+  const eta = vehicle.drivelineEfficiency
   return (motorTorqueNm, roadSpeedKmh) => {
     requireFinite('motorTorqueNm', motorTorqueNm)
     requireFinite('roadSpeedKmh', roadSpeedKmh)
@@ -84,11 +87,12 @@ export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadS
       const cap = deliverableAtShaft(vehicle, (kmhToMps(roadSpeedKmh) / R) * G, regen ? 'regen' : 'drive')
       delivered = Math.max(-cap, Math.min(cap, motorTorqueNm))
     }
-    const force = wheelTorqueFromMotor(vehicle, delivered, gearIndex) / R
+    const wheelTorque = delivered >= 0 ? delivered * G * eta : (delivered * G) / eta // wheelTorqueFromMotor, G checked above
+    const force = wheelTorque / R
     const load = driveAxleLoadN(model, force, cosG)
     const limit = regen ? regenLimit : driveLimit
     const utilisation = Math.abs(force) / limit
-    const slip = load > 0 ? slipForForceRatio(force / load, coeffs) : force === 0 ? 0 : null
+    const slip = load > 0 ? solve(force / load) : force === 0 ? 0 : null
     const beyond = slip === null
     return {
       requestedTorqueNm: motorTorqueNm,

@@ -102,10 +102,14 @@ export function peakForceRatio(c: MagicFormulaCoeffs): number {
 export function slipForForceRatio(ratio: number, c: MagicFormulaCoeffs, stats?: SolveStats): number | null {
   requireFinite('ratio', ratio)
   checkCoeffs(c)
+  return solveRatio(ratio, c, peakTarget(c), stats)
+}
+
+/** The body of {@link slipForForceRatio} for a finite ratio and checked coefficients, given `t = peakTarget(c)`. */
+function solveRatio(ratio: number, c: MagicFormulaCoeffs, t: number | null, stats?: SolveStats): number | null {
   if (stats) stats.solves++
   if (ratio === 0) return 0
   const r = Math.abs(ratio)
-  const t = peakTarget(c)
   const sign = ratio < 0 ? -1 : 1
   if (t !== null) {
     if (r > c.D * (1 + 1e-12)) return null
@@ -113,4 +117,16 @@ export function slipForForceRatio(ratio: number, c: MagicFormulaCoeffs, stats?: 
   } else if (r >= c.D * Math.sin(c.C * Math.atan(innerSup(c.E)))) return null
   const target = Math.tan(Math.asin(r / c.D) / c.C)
   return sign * solveInner(target, c.E, stats) / c.B
+}
+
+/**
+ * {@link slipForForceRatio} for many ratios on one curve: checks the coefficients and finds the peak
+ * once, then each call only validates its ratio. Same results, same errors for a bad ratio.
+ * @example const solve = slipSolverFor(SURFACES.ice.coeffs); solve(0.05)
+ */
+export function slipSolverFor(c: MagicFormulaCoeffs): (ratio: number, stats?: SolveStats) => number | null {
+  checkCoeffs(c)
+  const coeffs: MagicFormulaCoeffs = { B: c.B, C: c.C, D: c.D, E: c.E } // a snapshot: later changes to c cannot unvalidate it
+  const t = peakTarget(coeffs)
+  return (ratio, stats) => solveRatio(requireFinite('ratio', ratio), coeffs, t, stats)
 }

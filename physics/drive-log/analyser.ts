@@ -58,6 +58,7 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
   let distM = 0, drawnJ = 0, regenJ = 0, hasPower = false, maxRoad = -Infinity
   let moving = 0, slipMin = Infinity, slipMax = -Infinity, sumAbs = 0, maxAbs = 0
   let finished = false
+  let eventOpen = false
   const point: EventPoint = { timeS: 0, slip: 0, roadSpeedKmh: 0, accelPedalPct: 0, brakePedalPct: null }
   const seriesRow = [NaN, NaN, NaN, NaN, NaN, NaN]
 
@@ -90,7 +91,7 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
     else {
       const dt = t - prevT
       if (dt === 0) dup++
-      if (dt > maxGapS) { gapCount++; gapS += dt; detector.interrupt() }
+      if (dt > maxGapS) { gapCount++; gapS += dt; if (eventOpen) { detector.interrupt(); eventOpen = false } }
       else {
         if (fin(road) && prevRoad === prevRoad) distM += (0.5 * (prevRoad + road) / 3.6) * dt
         if (power === power && prevPower === prevPower) {
@@ -103,9 +104,13 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
     const brake = fin(s.brakePedalPct) ? s.brakePedalPct : NaN
     if (complete) {
       const isMoving = Math.max(Math.abs(road), Math.abs(wheelKmh)) >= th.minSpeedKmh
-      point.timeS = t; point.slip = kappa; point.roadSpeedKmh = road; point.accelPedalPct = pedal
-      point.brakePedalPct = brake === brake ? brake : null
-      detector.sample(isMoving ? (kappa > th.spinSlip ? 'spin' : kappa < -th.lockSlip ? 'lock' : null) : null, point, line)
+      const state = isMoving ? (kappa > th.spinSlip ? 'spin' : kappa < -th.lockSlip ? 'lock' : null) : null
+      if (state !== null || eventOpen) { // most samples are in band with no event open: skip the call
+        point.timeS = t; point.slip = kappa; point.roadSpeedKmh = road; point.accelPedalPct = pedal
+        point.brakePedalPct = brake === brake ? brake : null
+        detector.sample(state, point, line)
+        eventOpen = state !== null
+      }
       if (isMoving) {
         moving++
         const a = Math.abs(kappa)
@@ -115,7 +120,7 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
         if (kappa > slipMax) slipMax = kappa
         reservoir.add(a)
       }
-    } else { incomplete++; detector.interrupt() }
+    } else { incomplete++; if (eventOpen) { detector.interrupt(); eventOpen = false } }
     if (road > maxRoad) maxRoad = road
     // Occupancy state held until the next sample: drive by accelerator, regen by brake with the accelerator released.
     const occOk = complete && (kind === 'drive' || (brake === brake && pedal <= releasedPct))

@@ -12,6 +12,7 @@ if (seeded !== 0) {
   await services.close()
   process.exit(seeded)
 }
-const code = await run(process.execPath, ['scripts/start.mjs'], { env })
+// Built above already: the server must not rebuild between seeding and starting.
+const code = await run(process.execPath, ['scripts/start.mjs'], { env: { ...env, MAPWRIGHT_SKIP_BUILD: '1' } })
 await services.close()
 process.exit(code)

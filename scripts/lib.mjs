@@ -43,7 +43,7 @@ export function buildIsStale() {
 }
 
 export async function buildIfStale() {
-  if (!buildIsStale()) return
+  if (process.env.MAPWRIGHT_SKIP_BUILD === '1' || !buildIsStale()) return
   console.log('Building the production app (first run or sources changed)…')
   const code = await run(bin('next'), ['build'])
   if (code !== 0) process.exit(code)

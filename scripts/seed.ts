@@ -2,11 +2,13 @@
 import { closeDb, getHandle } from '../db/client'
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '../db/seed'
 import { hashPassword } from '../app/_lib/password'
+import { seedWorkflow } from './seed-workflow'
 
 async function main() {
   const { db, kind } = await getHandle()
   const result = await seedDemo(db, hashPassword)
   console.log(`Demo data on ${kind}: ${result.usersAdded} users, ${result.programsAdded} vehicle programs and ${result.mapsAdded} maps added (existing rows kept).`)
+  if (process.env.S3_ENDPOINT && (await seedWorkflow(db))) console.log('Demo workflow: a released revision, one waiting for approval, one sent back, drive reports with logs.')
   console.log(`\nDemo accounts (password for all: ${DEMO_PASSWORD}):`)
   for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(21)} ${u.email}`)
   await closeDb()

@@ -1,4 +1,4 @@
-import 'server-only'
+// No 'server-only' marker: the demo seed runs the same analysis from a script.
 import { getLog, setLogProgress } from '@/db/queries/logs'
 import { getReport } from '@/db/queries/reports'
 import { getRevisionById, getRevision } from '@/db/queries/revisions'

@@ -1,0 +1,93 @@
+/**
+ * API under load: the production server on 127.0.0.1 (fresh demo database on PGlite), signed in as
+ * the demo calibration engineer, driven by autocannon with a request cap and a time cap per run:
+ * GET /api/maps/:id, GET /api/maps/:id/diff?a=1&b=2, and sequential POST /api/maps/:id/revisions
+ * with the parent number kept current (one connection).
+ */
+import autocannon from 'autocannon'
+import type { MapTable } from '@/maps'
+import { figure, isMain, runStandalone, type BenchResult, type Figure } from './report'
+import { signIn, startServer } from './server'
+
+const BENCH = 'api-load'
+const READ_CONNECTIONS = 10
+const READ_AMOUNT = 5000
+const SAVE_AMOUNT = 300
+const TIME_CAP_S = 20
+
+/** Runs autocannon, stopping it at TIME_CAP_S even when `amount` is not reached (amount overrides duration). */
+function cannon(opts: autocannon.Options): Promise<autocannon.Result> {
+  return new Promise((resolve, reject) => {
+    const inst = autocannon({ timeout: 10, ...opts }, (err, res) => { clearTimeout(cap); if (err) reject(err); else resolve(res) })
+    const cap = setTimeout(() => inst.stop(), TIME_CAP_S * 1000)
+  })
+}
+
+function figures(name: string, r: autocannon.Result, targets: { rps?: number; p99: number }): Figure[] {
+  const ok = r['2xx']
+  const rps = ok / Math.max(r.duration, 1e-3)
+  const note = `${ok} × 2xx in ${r.duration.toFixed(1)} s${r.non2xx ? `, ${r.non2xx} non-2xx` : ''}${r.errors ? `, ${r.errors} errors` : ''}`
+  return [
+    figure(BENCH, `${name}: requests/s`, rps, 'req/s', targets.rps ? { op: '>=', limit: targets.rps } : undefined, note),
+    figure(BENCH, `${name}: p50 latency`, r.latency.p50, 'ms'),
+    figure(BENCH, `${name}: p99 latency`, r.latency.p99, 'ms', { op: '<', limit: targets.p99 }),
+  ]
+}
+
+interface MapSummary { id: number; name: string; kind: string; latestNumber: number | null }
+
+export async function runApiLoad(): Promise<BenchResult> {
+  const server = await startServer()
+  try {
+    const { baseUrl } = server
+    const { cookie } = await signIn(baseUrl)
+    const headers = { cookie }
+    const list = (await (await fetch(`${baseUrl}/api/maps`, { headers })).json()) as { maps: MapSummary[] }
+    const map = list.maps.find((m) => m.kind === 'drive' && (m.latestNumber ?? 0) >= 2)
+    if (!map) throw new Error('no demo drive map with two revisions')
+    const got = (await (await fetch(`${baseUrl}/api/maps/${map.id}`, { headers })).json()) as { latest: { number: number; table: MapTable } }
+    const table = got.latest.table
+    const readUrl = `${baseUrl}/api/maps/${map.id}`
+    const diffUrl = `${baseUrl}/api/maps/${map.id}/diff?a=1&b=2`
+
+    // Warm-up: first requests compile and JIT the route code.
+    await cannon({ url: readUrl, headers, connections: 4, amount: 300 })
+    await cannon({ url: diffUrl, headers, connections: 4, amount: 300 })
+
+    const read = await cannon({ url: readUrl, headers, connections: READ_CONNECTIONS, amount: READ_AMOUNT })
+    const diff = await cannon({ url: diffUrl, headers, connections: READ_CONNECTIONS, amount: READ_AMOUNT })
+
+    // Saves: one connection, each save on top of the previous one; the body is built per request.
+    const ctx = { parent: got.latest.number, n: 0 }
+    const saveBody = () => {
+      ctx.n++
+      const values = table.values.map((row, r) => (r === table.values.length - 1 ? row.map((v, c) => (c === 0 ? Math.max(0, v - (ctx.n % 10)) : v)) : row))
+      return JSON.stringify({ parentNumber: ctx.parent, message: `Bench save ${ctx.n}`, notes: '', table: { ...table, values } })
+    }
+    const save = await cannon({
+      url: `${baseUrl}/api/maps/${map.id}/revisions`,
+      connections: 1,
+      amount: SAVE_AMOUNT,
+      requests: [{
+        method: 'POST',
+        setupRequest: (req) => ({ ...req, headers: { ...headers, 'content-type': 'application/json' }, body: saveBody() }),
+        onResponse: (status, body) => {
+          if (status === 201) ctx.parent = (JSON.parse(body) as { revision: { number: number } }).revision.number
+        },
+      }],
+    })
+    return {
+      bench: BENCH,
+      figures: [
+        ...figures(`GET /api/maps/:id (${READ_CONNECTIONS} conns)`, read, { rps: 500, p99: 50 }),
+        ...figures(`GET diff a=1 b=2 (${READ_CONNECTIONS} conns)`, diff, { rps: 500, p99: 50 }),
+        ...figures('POST revisions (sequential)', save, { p99: 100 }),
+      ],
+      notes: [`map ${map.id} "${map.name}", ${table.rowAxis.length} × ${table.colAxis.length} cells; server: next start on PGlite`],
+    }
+  } finally {
+    await server.stop()
+  }
+}
+
+if (isMain(import.meta.url)) void runStandalone(BENCH, runApiLoad)

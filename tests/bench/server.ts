@@ -1,0 +1,126 @@
+/**
+ * The production server for the API and editor benchmarks: builds if stale, then runs
+ * scripts/e2e-server.mjs (fresh demo database, fake S3, mail capture) on a free 127.0.0.1 port as a
+ * child process group, and signs in through the real next-auth credentials flow.
+ */
+import { spawn, type ChildProcess } from 'node:child_process'
+import fs from 'node:fs'
+import net from 'node:net'
+import path from 'node:path'
+import { ROOT } from './report'
+
+export const DEMO_EMAIL = 'calib@brackwater.example'
+export const DEMO_PASSWORD = 'mapwright-demo'
+
+export interface BenchServer { baseUrl: string; stop: () => Promise<void> }
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const s = net.createServer()
+    s.once('error', reject)
+    s.listen(0, '127.0.0.1', () => {
+      const a = s.address()
+      const port = typeof a === 'object' && a ? a.port : 0
+      s.close(() => resolve(port))
+    })
+  })
+}
+
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms))
+
+/** Pids of `next build` processes running in this tree (another session may be building). */
+function buildsInProgress(): number[] {
+  const out: number[] = []
+  for (const d of fs.readdirSync('/proc')) {
+    if (!/^\d+$/.test(d) || Number(d) === process.pid) continue
+    try {
+      const cmd = fs.readFileSync(`/proc/${d}/cmdline`, 'utf8')
+      if (!/next(-build| build)/.test(cmd.replace(/\0/g, ' '))) continue
+      if (fs.realpathSync(`/proc/${d}/cwd`) === fs.realpathSync(ROOT)) out.push(Number(d))
+    } catch { /* process gone or not ours to read */ }
+  }
+  return out
+}
+
+/** Runs buildIfStale from scripts/lib.mjs in a child, after any build already running here has ended. */
+async function buildIfStale(): Promise<void> {
+  for (let waited = 0; buildsInProgress().length > 0 && waited < 600_000; waited += 2000) await sleep(2000)
+  const code = await new Promise<number>((resolve, reject) => {
+    const c = spawn(process.execPath, ['-e', "import('./scripts/lib.mjs').then(m=>m.buildIfStale())"], { cwd: ROOT, stdio: ['ignore', 'inherit', 'inherit'] })
+    c.on('error', reject)
+    c.on('exit', (code) => resolve(code ?? 1))
+  })
+  if (code !== 0) throw new Error(`build failed (exit ${code})`)
+}
+
+function killGroup(child: ChildProcess): Promise<void> {
+  return new Promise((resolve) => {
+    if (child.exitCode !== null || child.signalCode !== null || !child.pid) return resolve()
+    const pid = child.pid
+    const done = setTimeout(() => { try { process.kill(-pid, 'SIGKILL') } catch { /* gone */ } resolve() }, 5000)
+    child.once('exit', () => { clearTimeout(done); resolve() })
+    try { process.kill(-pid, 'SIGTERM') } catch { clearTimeout(done); resolve() }
+  })
+}
+
+/** Starts the server and waits until it answers; the caller must call stop() (also on error). */
+export async function startServer(opts: { build?: boolean } = {}): Promise<BenchServer> {
+  if (opts.build !== false) await buildIfStale()
+  const port = await freePort()
+  const baseUrl = `http://127.0.0.1:${port}`
+  const log: string[] = []
+  const child = spawn(process.execPath, [path.join(ROOT, 'scripts/e2e-server.mjs'), String(port)], {
+    cwd: ROOT,
+    detached: true, // own process group: stop() ends the seed, next start and the stand-ins together
+    stdio: ['ignore', 'pipe', 'pipe'],
+  })
+  const keep = (b: Buffer) => { log.push(b.toString()); if (log.length > 200) log.shift() }
+  child.stdout?.on('data', keep)
+  child.stderr?.on('data', keep)
+  const cleanup = () => { if (child.pid) try { process.kill(-child.pid, 'SIGKILL') } catch { /* gone */ } }
+  process.once('exit', cleanup)
+  const stop = async () => { process.off('exit', cleanup); await killGroup(child) }
+  try {
+    const deadline = Date.now() + 180_000
+    for (;;) {
+      if (child.exitCode !== null) throw new Error(`server exited (${child.exitCode}):\n${log.join('')}`)
+      if (Date.now() > deadline) throw new Error(`server did not answer on ${baseUrl} within 180 s:\n${log.join('')}`)
+      try {
+        const r = await fetch(`${baseUrl}/api/auth/csrf`)
+        if (r.ok) break
+      } catch { /* not listening yet */ }
+      await sleep(500)
+    }
+    return { baseUrl, stop }
+  } catch (e) {
+    await stop()
+    throw e
+  }
+}
+
+/** `name=value` pairs from Set-Cookie headers, merged into a Cookie header. */
+function mergeCookies(jar: Map<string, string>, res: Response): void {
+  for (const c of res.headers.getSetCookie()) {
+    const [pair] = c.split(';')
+    const eq = pair.indexOf('=')
+    if (eq > 0) jar.set(pair.slice(0, eq).trim(), pair.slice(eq + 1).trim())
+  }
+}
+const cookieHeader = (jar: Map<string, string>) => [...jar].map(([k, v]) => `${k}=${v}`).join('; ')
+
+/** Signs in through next-auth's credentials flow; returns the Cookie header and the cookies as pairs. */
+export async function signIn(baseUrl: string, email = DEMO_EMAIL, password = DEMO_PASSWORD): Promise<{ cookie: string; cookies: { name: string; value: string }[] }> {
+  const jar = new Map<string, string>()
+  const csrfRes = await fetch(`${baseUrl}/api/auth/csrf`)
+  mergeCookies(jar, csrfRes)
+  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string }
+  const res = await fetch(`${baseUrl}/api/auth/callback/credentials`, {
+    method: 'POST',
+    redirect: 'manual',
+    headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: cookieHeader(jar) },
+    body: new URLSearchParams({ csrfToken, email, password, callbackUrl: `${baseUrl}/`, json: 'true' }).toString(),
+  })
+  mergeCookies(jar, res)
+  if (![...jar.keys()].some((k) => k.endsWith('next-auth.session-token'))) throw new Error(`sign-in failed (status ${res.status})`)
+  return { cookie: cookieHeader(jar), cookies: [...jar].map(([name, value]) => ({ name, value })) }
+}

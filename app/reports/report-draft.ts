@@ -9,26 +9,28 @@ export interface ReportDraft {
   savedAt?: string
 }
 
-const KEY = 'mapwright.report-draft.v1'
+const PREFIX = 'mapwright.report-draft.v1'
+/** One draft for a new report, and one per report being edited. */
+const keyOf = (reportId?: number) => (reportId ? `${PREFIX}.${reportId}` : PREFIX)
 
 /** The unsent report kept in the browser, so a dropped connection at the track loses nothing. */
-export function loadReportDraft(): ReportDraft | null {
+export function loadReportDraft(reportId?: number): ReportDraft | null {
   try {
-    const raw = window.localStorage.getItem(KEY)
+    const raw = window.localStorage.getItem(keyOf(reportId))
     return raw ? (JSON.parse(raw) as ReportDraft) : null
   } catch {
     return null
   }
 }
 
-export function saveReportDraft(d: ReportDraft): void {
+export function saveReportDraft(d: ReportDraft, reportId?: number): void {
   try {
-    window.localStorage.setItem(KEY, JSON.stringify({ ...d, savedAt: new Date().toISOString() }))
+    window.localStorage.setItem(keyOf(reportId), JSON.stringify({ ...d, savedAt: new Date().toISOString() }))
   } catch {
     /* storage full or disabled: the form still works, only without the safety net */
   }
 }
 
-export function clearReportDraft(): void {
-  window.localStorage.removeItem(KEY)
+export function clearReportDraft(reportId?: number): void {
+  window.localStorage.removeItem(keyOf(reportId))
 }

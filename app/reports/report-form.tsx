@@ -19,15 +19,22 @@ type ReportFormOut = z.output<typeof reportInputSchema>
 
 const today = () => new Date().toISOString().slice(0, 10)
 
-export function ReportForm(props: { maps: MapOption[]; loadCases: Record<number, string[]>; initialMapId?: number }) {
+export function ReportForm(props: {
+  maps: MapOption[]
+  loadCases: Record<number, string[]>
+  initialMapId?: number
+  /** Editing an existing report: its id and current values. */
+  edit?: { reportId: number; values: ReportFormIn; revisionNumber: number }
+}) {
+  const reportId = props.edit?.reportId
   const router = useRouter()
   const [mapId, setMapId] = useState<number | undefined>(props.initialMapId)
-  const [revisionNumber, setRevisionNumber] = useState<number | undefined>()
+  const [revisionNumber, setRevisionNumber] = useState<number | undefined>(props.edit?.revisionNumber)
   const [restored, setRestored] = useState<string | null>(null)
   const [serverError, setServerError] = useState<string | null>(null)
   const form = useForm<ReportFormIn, unknown, ReportFormOut>({
     resolver: zodResolver(reportInputSchema),
-    defaultValues: { drivenOn: today(), trailer: false, flags: [], comments: '', payloadKg: 0, loadCase: 'empty', surface: 'dry-asphalt' },
+    defaultValues: props.edit?.values ?? { drivenOn: today(), trailer: false, flags: [], comments: '', payloadKg: 0, loadCase: 'empty', surface: 'dry-asphalt' },
   })
   const { control, handleSubmit, setValue, resetField, reset, formState } = form
   const flags = useFieldArray({ control, name: 'flags' })
@@ -37,7 +44,7 @@ export function ReportForm(props: { maps: MapOption[]; loadCases: Record<number,
 
   // Restore an unsent draft once, then keep saving the form as the driver types.
   useEffect(() => {
-    const d = loadReportDraft()
+    const d = loadReportDraft(reportId)
     if (d) {
       const { mapId: m, revisionNumber: n, savedAt, values: saved } = d
       reset({ ...form.getValues(), ...saved })
@@ -48,13 +55,16 @@ export function ReportForm(props: { maps: MapOption[]; loadCases: Record<number,
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [])
   useEffect(() => {
-    if (formState.isDirty || mapId) saveReportDraft({ values, mapId, revisionNumber })
-  }, [values, mapId, revisionNumber, formState.isDirty])
+    if (formState.isDirty || mapId) saveReportDraft({ values, mapId, revisionNumber }, reportId)
+  }, [values, mapId, revisionNumber, formState.isDirty, reportId])
 
   const submit = useMutation({
-    mutationFn: (body: ReportFormOut) => api<{ report: { id: number } }>('/api/reports', { method: 'POST', json: body }),
+    mutationFn: (body: ReportFormOut) =>
+      reportId
+        ? api<{ report: { id: number } }>(`/api/reports/${reportId}`, { method: 'PUT', json: body })
+        : api<{ report: { id: number } }>('/api/reports', { method: 'POST', json: body }),
     onSuccess: ({ report }) => {
-      clearReportDraft()
+      clearReportDraft(reportId)
       router.push(`/reports/${report.id}?filed=1`)
     },
     onError: (e) => setServerError(e.message),
@@ -65,7 +75,7 @@ export function ReportForm(props: { maps: MapOption[]; loadCases: Record<number,
       {restored && (
         <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">
           Restored your unsent report from {restored.slice(0, 16).replace('T', ' ')} UTC.{' '}
-          <button type="button" className="underline" onClick={() => { clearReportDraft(); setRestored(null); reset() }}>Start over</button>
+          <button type="button" className="underline" onClick={() => { clearReportDraft(reportId); setRestored(null); reset() }}>Start over</button>
         </p>
       )}
       <section className="card space-y-3">
@@ -100,7 +110,7 @@ export function ReportForm(props: { maps: MapOption[]; loadCases: Record<number,
       {serverError && <p role="alert" className="error-text text-sm">{serverError}</p>}
       {Object.keys(formState.errors).length > 0 && <p role="alert" className="error-text text-sm">Some fields need attention; see the messages above.</p>}
       <button type="submit" className="btn-primary w-full justify-center sm:w-auto" disabled={submit.isPending}>
-        {submit.isPending ? 'Sending…' : 'File report'}
+        {submit.isPending ? 'Sending…' : reportId ? 'Save changes' : 'File report'}
       </button>
     </form>
   )

@@ -39,7 +39,8 @@ export default async function ComparePage(props: { searchParams: Promise<Search>
     <div className="space-y-4">
       {heading}
       <SafetyCaution />
-      <CompareView {...result.view} canEdit={EDITORS.includes(user.role)} />
+      {/* Keyed by the pair, so a link to another pair starts with fresh state. */}
+      <CompareView key={`${a?.mapId}:${a?.number}-${b?.mapId}:${b?.number}`} {...result.view} canEdit={EDITORS.includes(user.role)} />
     </div>
   )
 }

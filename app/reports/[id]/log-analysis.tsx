@@ -4,6 +4,7 @@ import { api } from '@/app/_components/api-client'
 import type { AnalysisResult } from '@/physics'
 import { LogTimePlot } from './log-time-plot'
 import { OccupancyGrid } from './occupancy-grid'
+import { PredictionTable, type Prediction } from './prediction-table'
 
 const fmt = (v: number | null | undefined, d = 2) => (v === null || v === undefined ? '—' : v.toFixed(d))
 
@@ -11,7 +12,7 @@ const fmt = (v: number | null | undefined, d = 2) => (v === null || v === undefi
 export function LogAnalysisView(props: { reportId: number; logId: number; mapKind: 'drive' | 'regen' }) {
   const q = useQuery({
     queryKey: ['log', props.logId],
-    queryFn: () => api<{ log: { analysis: AnalysisResult | null } }>(`/api/reports/${props.reportId}/logs/${props.logId}`),
+    queryFn: () => api<{ log: { analysis: AnalysisResult | null }; predictions: Prediction[] | null }>(`/api/reports/${props.reportId}/logs/${props.logId}`),
   })
   const a = q.data?.log.analysis
   if (!a) return <p className="text-sm text-slate-500">Loading analysis…</p>
@@ -52,6 +53,7 @@ export function LogAnalysisView(props: { reportId: number; logId: number; mapKin
           </table>
         </div>
       )}
+      {q.data?.predictions && <PredictionTable predictions={q.data.predictions} mapKind={props.mapKind} />}
       {a.occupancy && <OccupancyGrid occupancy={a.occupancy} events={a.events} mapKind={props.mapKind} />}
       <p className="text-xs text-slate-500">
         Slip thresholds: spin above {fmt(a.thresholds.spinSlip, 3)}, lock below −{fmt(a.thresholds.lockSlip, 3)} ({a.thresholds.source}); events shorter than {a.thresholds.minDurationS} s are not counted ({a.shortExcursions} short excursions).

@@ -8,6 +8,7 @@ import { RATING_KEYS, RATING_LABELS, SEVERITY_LABELS } from '@/app/_schemas/repo
 import { SafetyBadge, surfaceLabel } from '../report-table'
 import { SafetyPanel } from './safety-panel'
 import { LogsPanel } from './logs-panel'
+import { ReportDiscussion } from './report-discussion'
 
 export const metadata = { title: 'Drive report' }
 
@@ -29,6 +30,9 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
           {report.mapName} <Link href={`/maps/${report.mapId}/revisions/${report.revisionNumber}`} className="text-accent hover:underline">r{report.revisionNumber}</Link> — {report.drivenOn}
         </h1>
         <p className="text-sm text-slate-600">
+          {user.id === report.driverId && !report.leadReadAt && (
+            <Link href={`/reports/${report.id}/edit`} className="btn mr-2">Edit</Link>
+          )}
           {report.driverName} · unit {report.vehicleUnit} · {report.route} · checksum <span className="font-mono">{shortChecksum(report.revisionChecksum)}</span> <SafetyBadge safety={report.safety} />
         </p>
       </div>
@@ -54,6 +58,7 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
         </section>
       )}
       <SafetyPanel reportId={report.id} safety={report.safety} resolution={report.safetyResolution} canResolve={user.role === 'lead_engineer'} />
+      <ReportDiscussion reportId={report.id} canComment={user.role === 'lead_engineer' || user.role === 'calibration_engineer'} canMarkRead={user.role === 'lead_engineer'} readAt={report.leadReadAt?.toISOString() ?? null} />
       <LogsPanel reportId={report.id} initialLogs={logs.map((l) => ({ ...l, createdAt: l.createdAt.toISOString(), analysedAt: l.analysedAt?.toISOString() ?? null }))} canUpload={user.id === report.driverId} mapKind={report.mapKind} />
     </div>
   )

@@ -4,6 +4,10 @@ import { assertOwner, loadReport } from '@/app/_lib/report-access'
 import { intParam } from '@/app/_lib/request'
 import { startLogAnalysis } from '@/app/_lib/log-jobs'
 import { getLog } from '@/db/queries/logs'
+import { getRevisionById, getRevision } from '@/db/queries/revisions'
+import { getMap } from '@/db/queries/maps'
+import { predictEvents } from '@/app/_lib/log-prediction'
+import type { AnalysisResult } from '@/physics'
 
 async function loadLog(reportParam: string, logParam: string) {
   const report = await loadReport(reportParam)
@@ -12,10 +16,18 @@ async function loadLog(reportParam: string, logParam: string) {
   return { report, log }
 }
 
-// GET /api/reports/:id/logs/:logId — a log's status, parse progress and (when done) its analysis
+// GET /api/reports/:id/logs/:logId — a log's status, parse progress and (when done) its analysis, with the
+// physics prediction at each logged event for the report's revision, load case and surface
 export const GET = withRole<{ id: string; logId: string }>('signed-in', async (_req, { params }) => {
-  const { log } = await loadLog(params.id, params.logId)
-  return Response.json({ log })
+  const { report, log } = await loadLog(params.id, params.logId)
+  const analysis = log.analysis as AnalysisResult | null
+  let predictions = null
+  if (log.status === 'done' && analysis) {
+    const ref = await getRevisionById(report.revisionId)
+    const [rev, map] = ref ? await Promise.all([getRevision(ref.mapId, ref.number), getMap(ref.mapId)]) : [null, null]
+    if (rev && map) predictions = predictEvents(analysis.events, { table: rev.table, vehicle: map.programParams, loadCase: report.loadCase, surface: report.surface })
+  }
+  return Response.json({ log, predictions })
 })
 
 // POST /api/reports/:id/logs/:logId — the filing driver re-runs the analysis (e.g. after a failed parse)

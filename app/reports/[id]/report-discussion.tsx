@@ -1,0 +1,41 @@
+'use client'
+import { useRouter } from 'next/navigation'
+import { useState } from 'react'
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query'
+import { api } from '@/app/_components/api-client'
+import { formatTime } from '@/app/_components/format'
+
+interface CommentItem { id: number; body: string; createdAt: string; authorName: string }
+
+/** Engineers' comments on a report, and the lead's "read" mark that ends the driver's edits. */
+export function ReportDiscussion(props: { reportId: number; canComment: boolean; canMarkRead: boolean; readAt: string | null }) {
+  const router = useRouter()
+  const qc = useQueryClient()
+  const key = ['report-comments', props.reportId]
+  const list = useQuery({ queryKey: key, queryFn: () => api<{ comments: CommentItem[] }>(`/api/reports/${props.reportId}/comments`) })
+  const [body, setBody] = useState('')
+  const add = useMutation({
+    mutationFn: () => api(`/api/reports/${props.reportId}/comments`, { method: 'POST', json: { body } }),
+    onSuccess: () => {
+      setBody('')
+      return qc.invalidateQueries({ queryKey: key })
+    },
+  })
+  const read = useMutation({ mutationFn: () => api(`/api/reports/${props.reportId}/read`, { method: 'POST' }), onSuccess: () => router.refresh() })
+  return (
+    <section className="card space-y-2">
+      <h2 className="font-semibold">Discussion</h2>
+      <p className="text-xs text-slate-500">{props.readAt ? `Read by a lead engineer on ${formatTime(props.readAt)}; the driver can no longer edit it.` : 'Not yet read by a lead engineer.'}</p>
+      {props.canMarkRead && !props.readAt && <button type="button" className="btn" onClick={() => read.mutate()}>Mark as read</button>}
+      <ul className="space-y-1 text-sm">
+        {list.data?.comments.map((c) => <li key={c.id}><span className="text-slate-500">{c.authorName}, {formatTime(c.createdAt)}:</span> {c.body}</li>)}
+      </ul>
+      {props.canComment && (
+        <div className="flex gap-2">
+          <input aria-label="Comment on this report" className="field" value={body} onChange={(e) => setBody(e.target.value)} />
+          <button type="button" className="btn" disabled={!body.trim() || add.isPending} onClick={() => add.mutate()}>Comment</button>
+        </div>
+      )}
+    </section>
+  )
+}

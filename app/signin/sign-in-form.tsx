@@ -20,7 +20,7 @@ export function SignInForm() {
     })
     setBusy(false)
     if (!res || res.error) {
-      setError('Wrong email or password, or the account is disabled.')
+      setError(res?.error?.startsWith('Too many') ? res.error : 'Wrong email or password, or the account is disabled.')
       return
     }
     router.replace('/')

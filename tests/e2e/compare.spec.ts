@@ -8,6 +8,8 @@ async function mapId(page: Page, name: string): Promise<number> {
   return Number(href?.split('/')[2])
 }
 
+const PLOT_WAIT = 30_000
+
 type GraphDiv = HTMLElement & { _fullLayout?: { scene?: { camera?: { eye?: { x: number; y: number; z: number } } } } }
 const eyeOf = (page: Page, i: number) =>
   page.locator('[data-testid="compare-surfaces"] .js-plotly-plot').nth(i).evaluate((el) => (el as GraphDiv)._fullLayout?.scene?.camera?.eye ?? null)
@@ -23,8 +25,9 @@ test.describe('comparing two revisions', () => {
     await expect(page.getByRole('note')).toContainText('closed course')
 
     // Two surfaces and the difference (WebGL canvases), and two heat maps.
+    // The plot library is a large chunk fetched after the page loads; give it time on a cold server.
     const surfaces = page.locator('[data-testid="compare-surfaces"] .js-plotly-plot')
-    await expect(surfaces).toHaveCount(2)
+    await expect(surfaces).toHaveCount(2, { timeout: PLOT_WAIT })
     await expect(page.locator('.js-plotly-plot')).toHaveCount(5)
     await expect(page.locator('.js-plotly-plot .gl-container canvas').first()).toBeVisible()
     await expect(page.getByText('Difference B − A')).toBeVisible()
@@ -41,34 +44,36 @@ test.describe('comparing two revisions', () => {
     await expect(heatB.locator('.main-svg').first()).toBeVisible()
     await page.screenshot({ path: 'docs/compare.png', fullPage: true })
 
-    await page.getByLabel('Load case').selectOption('laden')
-    await expect(heatB).toHaveAttribute('data-spin-count', '0')
+    await page.getByRole('combobox', { name: 'Load case' }).selectOption('laden')
+    await expect(heatB).toHaveAttribute('data-spin-count', '0', { timeout: PLOT_WAIT })
     await expect(page.getByTestId('slip-heatmap-b-caption')).toHaveText(/No cell beyond the tyre peak/)
     await expect(page).toHaveURL(/loadCase=laden/)
-    await page.getByLabel('Surface').selectOption('ice')
-    await expect(heatB).not.toHaveAttribute('data-spin-count', '0')
+    await page.getByRole('combobox', { name: 'Surface' }).selectOption('ice')
+    await expect(heatB).not.toHaveAttribute('data-spin-count', '0', { timeout: PLOT_WAIT })
     await expect(page).toHaveURL(/surface=ice/)
 
     // Units: the change table follows the switch.
-    await page.getByLabel('Units').selectOption('imperial')
+    await page.getByRole('combobox', { name: 'Units' }).selectOption('imperial')
     await expect(page.getByTestId('change-table').locator('thead')).toContainText('lbf·ft')
-    await expect(rows.first()).toContainText('-885.1')
+    await expect(rows.first()).toContainText('-885.1', { timeout: PLOT_WAIT })
   })
 
   test('dragging one surface turns the other with it', async ({ page }) => {
+    // WebGL runs in software in headless Chromium, so every drag step redraws slowly.
+    test.setTimeout(120_000)
     await signIn(page, DEMO.lead)
     const site = await mapId(page, 'Site drive')
     await page.goto(`/maps/compare?a=${site}:1&b=${site}:3`)
     const first = page.locator('[data-testid="compare-surfaces"] .js-plotly-plot').first()
-    await expect(first.locator('.gl-container canvas')).toBeVisible()
+    await expect(first.locator('.gl-container canvas')).toBeVisible({ timeout: PLOT_WAIT })
     const before = await eyeOf(page, 1)
     const box = await first.boundingBox()
     if (!box) throw new Error('no plot box')
     await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2)
     await page.mouse.down()
-    await page.mouse.move(box.x + box.width / 2 + 160, box.y + box.height / 2 + 40, { steps: 12 })
+    await page.mouse.move(box.x + box.width / 2 + 160, box.y + box.height / 2 + 40, { steps: 4 })
     await page.mouse.up()
-    await expect.poll(async () => JSON.stringify(await eyeOf(page, 1))).not.toBe(JSON.stringify(before))
+    await expect.poll(async () => JSON.stringify(await eyeOf(page, 1)), { timeout: PLOT_WAIT }).not.toBe(JSON.stringify(before))
     const [a, b] = [await eyeOf(page, 0), await eyeOf(page, 1)]
     expect(b?.x).toBeCloseTo(a?.x ?? NaN, 6)
     expect(b?.y).toBeCloseTo(a?.y ?? NaN, 6)
@@ -92,11 +97,11 @@ test.describe('comparing two revisions', () => {
     await expect(page.getByTestId('proposal-table').locator('tbody tr').first()).toContainText('above the limit')
     const save = page.getByRole('button', { name: 'Save as new revision' })
     await expect(save).toBeDisabled()
-    await page.getByLabel('Why (required)').fill('Keep the solo tractor within grip on gravel')
+    await page.getByRole('textbox', { name: 'Why (required)' }).fill('Keep the solo tractor within grip on gravel')
     await save.click()
     await expect(page.getByRole('status')).toContainText('Saved as r3')
     await page.getByRole('link', { name: 'Compare r2 with r3' }).click()
     await expect(page).toHaveURL(new RegExp(`a=${road}%3A2|a=${road}:2`))
-    await expect(page.getByTestId('slip-heatmap-b')).toHaveAttribute('data-spin-count', '0')
+    await expect(page.getByTestId('slip-heatmap-b')).toHaveAttribute('data-spin-count', '0', { timeout: PLOT_WAIT })
   })
 })

@@ -10,18 +10,18 @@ test('a test driver runs a launch and a lift-off on the program physics page', a
   await expect(page.getByRole('note')).toContainText('closed course')
   await expect(page.getByTestId('traction-table').locator('tbody tr')).toHaveCount(10) // 5 surfaces × empty, laden
 
-  await page.getByLabel('Surface', { exact: true }).selectOption('wet-asphalt')
+  await page.getByRole('combobox', { name: 'Surface', exact: true }).selectOption('wet-asphalt')
   await page.getByRole('button', { name: 'Run launch' }).click()
   const summary = page.getByTestId('simulation-summary')
   await expect(summary).toContainText(/Time to 30 km\/h\s*\d+\.\d\d s/)
   await expect(summary).toContainText('Peak jerk')
-  await expect(page.getByTestId('simulation-plots').locator('.js-plotly-plot')).toHaveCount(6)
+  await expect(page.getByTestId('simulation-plots').locator('.js-plotly-plot')).toHaveCount(6, { timeout: 30_000 })
   await expect(page.getByRole('button', { name: 'Propose a traction-safe draft' })).toHaveCount(0) // drivers do not edit
 
-  await page.getByLabel('Map', { exact: true }).selectOption({ label: 'Site regen (regen)' })
-  await page.getByLabel('Surface', { exact: true }).selectOption('ice')
+  await page.getByRole('combobox', { name: 'Map', exact: true }).selectOption({ label: 'Site regen (regen)' })
+  await page.getByRole('combobox', { name: 'Surface', exact: true }).selectOption('ice')
   await expect(page).toHaveURL(/surface=ice/)
   await page.getByRole('button', { name: 'Run lift-off' }).click()
   await expect(summary).toContainText(/Drive axle locks\s*yes/)
-  await expect(page.getByTestId('slip-heatmap')).not.toHaveAttribute('data-spin-count', '0')
+  await expect(page.getByTestId('slip-heatmap')).not.toHaveAttribute('data-spin-count', '0', { timeout: 30_000 })
 })

@@ -28,13 +28,18 @@ export function ReportForm(props: {
 }) {
   const reportId = props.edit?.reportId
   const router = useRouter()
-  const [mapId, setMapId] = useState<number | undefined>(props.initialMapId)
-  const [revisionNumber, setRevisionNumber] = useState<number | undefined>(props.edit?.revisionNumber)
-  const [restored, setRestored] = useState<string | null>(null)
+  // Rendered in the browser only (see report-form-loader), so the unsent draft can seed the initial state.
+  const [draft] = useState(() => loadReportDraft(reportId))
+  const [mapId, setMapId] = useState<number | undefined>(draft?.mapId ?? props.initialMapId)
+  const [revisionNumber, setRevisionNumber] = useState<number | undefined>(draft?.revisionNumber ?? props.edit?.revisionNumber)
+  const [restored, setRestored] = useState<string | null>(draft?.savedAt ?? null)
   const [serverError, setServerError] = useState<string | null>(null)
   const form = useForm<ReportFormIn, unknown, ReportFormOut>({
     resolver: zodResolver(reportInputSchema),
-    defaultValues: props.edit?.values ?? { drivenOn: today(), trailer: false, flags: [], comments: '', payloadKg: 0, loadCase: 'empty', surface: 'dry-asphalt' },
+    defaultValues: {
+      ...(props.edit?.values ?? { drivenOn: today(), trailer: false, flags: [], comments: '', payloadKg: 0, loadCase: 'empty', surface: 'dry-asphalt' }),
+      ...(draft?.values as Partial<ReportFormIn> | undefined),
+    },
   })
   const { control, handleSubmit, setValue, resetField, reset, formState } = form
   const flags = useFieldArray({ control, name: 'flags' })
@@ -42,18 +47,7 @@ export function ReportForm(props: {
   const revisionId = values.revisionId
   const map = props.maps.find((m) => m.id === mapId)
 
-  // Restore an unsent draft once, then keep saving the form as the driver types.
-  useEffect(() => {
-    const d = loadReportDraft(reportId)
-    if (d) {
-      const { mapId: m, revisionNumber: n, savedAt, values: saved } = d
-      reset({ ...form.getValues(), ...saved })
-      if (m) setMapId(m)
-      if (n) setRevisionNumber(n)
-      setRestored(savedAt ?? null)
-    }
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [])
+  // Keep saving the form in the browser as the driver types.
   useEffect(() => {
     if (formState.isDirty || mapId) saveReportDraft({ values, mapId, revisionNumber }, reportId)
   }, [values, mapId, revisionNumber, formState.isDirty, reportId])

@@ -2,7 +2,7 @@ import { requirePageUser } from '@/app/_lib/page-access'
 import { listMaps } from '@/db/queries/maps'
 import { listPrograms } from '@/db/queries/programs'
 import { loadCasesFor } from '@/physics/vehicle'
-import { ReportForm } from '../report-form'
+import { ReportFormLoader as ReportForm } from '../report-form-loader'
 
 export const metadata = { title: 'File a drive report' }
 

@@ -5,7 +5,7 @@ import { listMaps } from '@/db/queries/maps'
 import { listPrograms } from '@/db/queries/programs'
 import { loadCasesFor } from '@/physics/vehicle'
 import { reportInputSchema } from '@/app/_schemas/report'
-import { ReportForm } from '../../report-form'
+import { ReportFormLoader as ReportForm } from '../../report-form-loader'
 
 export const metadata = { title: 'Edit drive report' }
 

@@ -42,9 +42,15 @@ function buildsInProgress(): number[] {
   return out
 }
 
+/** Waits (up to 10 min) until no `next build` runs in this tree and a build is present. */
+async function waitForQuietBuild(): Promise<void> {
+  const hasBuild = () => fs.existsSync(path.join(ROOT, '.next', 'BUILD_ID'))
+  for (let waited = 0; (buildsInProgress().length > 0 || (waited > 0 && !hasBuild())) && waited < 600_000; waited += 2000) await sleep(2000)
+}
+
 /** Runs buildIfStale from scripts/lib.mjs in a child, after any build already running here has ended. */
 async function buildIfStale(): Promise<void> {
-  for (let waited = 0; buildsInProgress().length > 0 && waited < 600_000; waited += 2000) await sleep(2000)
+  await waitForQuietBuild()
   const code = await new Promise<number>((resolve, reject) => {
     const c = spawn(process.execPath, ['-e', "import('./scripts/lib.mjs').then(m=>m.buildIfStale())"], { cwd: ROOT, stdio: ['ignore', 'inherit', 'inherit'] })
     c.on('error', reject)
@@ -63,9 +69,22 @@ function killGroup(child: ChildProcess): Promise<void> {
   })
 }
 
-/** Starts the server and waits until it answers; the caller must call stop() (also on error). */
+/**
+ * Starts the server and waits until it answers; the caller must call stop() (also on error). Other
+ * sessions rebuild this tree when sources change, so a start that loses its build is retried.
+ */
 export async function startServer(opts: { build?: boolean } = {}): Promise<BenchServer> {
-  if (opts.build !== false) await buildIfStale()
+  for (let attempt = 1; ; attempt++) {
+    if (opts.build !== false) await buildIfStale()
+    else await waitForQuietBuild()
+    try { return await startOnce() } catch (e) {
+      if (attempt >= 3) throw e
+      console.error(`server start failed (attempt ${attempt}), retrying: ${e instanceof Error ? e.message.split('\n')[0] : String(e)}`)
+    }
+  }
+}
+
+async function startOnce(): Promise<BenchServer> {
   const port = await freePort()
   const baseUrl = `http://127.0.0.1:${port}`
   const log: string[] = []
@@ -81,10 +100,10 @@ export async function startServer(opts: { build?: boolean } = {}): Promise<Bench
   process.once('exit', cleanup)
   const stop = async () => { process.off('exit', cleanup); await killGroup(child) }
   try {
-    const deadline = Date.now() + 180_000
+    const deadline = Date.now() + 240_000
     for (;;) {
       if (child.exitCode !== null) throw new Error(`server exited (${child.exitCode}):\n${log.join('')}`)
-      if (Date.now() > deadline) throw new Error(`server did not answer on ${baseUrl} within 180 s:\n${log.join('')}`)
+      if (Date.now() > deadline) throw new Error(`server did not answer on ${baseUrl} within 240 s:\n${log.join('')}`)
       try {
         const r = await fetch(`${baseUrl}/api/auth/csrf`)
         if (r.ok) break

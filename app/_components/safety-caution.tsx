@@ -1,7 +1,7 @@
-/** The plain caution every release, export and physics page carries. */
-export const SAFETY_CAUTION =
-  'The physics in Mapwright is an estimate. A torque map must be proven on a closed course before it is used on public roads. ' +
-  'Local regulations, the vehicle maker’s functional-safety process and licensed engineering practice come first.'
+import { SAFETY_CAUTION as CAUTION_LINES } from '@/maps'
+
+/** The plain caution every release, export and physics page carries: the same words as the exports. */
+export const SAFETY_CAUTION = CAUTION_LINES.slice(1).join(' ')
 
 export function SafetyCaution({ className = '' }: { className?: string }) {
   return (

@@ -59,14 +59,23 @@ export function errorResponse(e: unknown): Response {
   if (e instanceof MapFormatError) return jsonError(400, 'invalid_format', e.message, { line: e.line, column: e.column, path: e.path })
   if (e instanceof MapError) return jsonError(400, 'invalid_map', e.message, { rule: e.code })
   if (isUniqueViolation(e)) return jsonError(409, 'conflict', 'That already exists')
+  if (hasPgCode(e, '22003')) return jsonError(400, 'invalid_input', 'A number is larger than the database can store (ids and counts are below 2,147,483,648)')
   console.error('Unhandled error in route handler', e)
   return jsonError(500, 'internal', 'Something went wrong on the server; the change was not saved')
 }
 
 /** PostgreSQL unique_violation (23505), possibly wrapped by the driver or Drizzle. */
 export function isUniqueViolation(e: unknown): boolean {
+  return hasPgCode(e, '23505')
+}
+
+/**
+ * A PostgreSQL error code, possibly wrapped by the driver or Drizzle. 22003 (numeric_value_out_of_range)
+ * is a client's id or number beyond an integer column (e.g. /api/maps/99999999999): bad input, not a 500.
+ */
+function hasPgCode(e: unknown, code: string): boolean {
   for (let cur = e as { code?: string; cause?: unknown } | undefined, i = 0; cur && i < 4; i++) {
-    if (cur.code === '23505') return true
+    if (cur.code === code) return true
     cur = cur.cause as typeof cur
   }
   return false

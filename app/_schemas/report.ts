@@ -26,7 +26,7 @@ export const flagSchema = z.object({
 
 /** One schema for the report form and the API, so both refuse the same input with the same words. */
 export const reportInputSchema = z.object({
-  revisionId: z.number({ error: 'Choose the revision the vehicle was flashed with' }).int().positive(),
+  revisionId: z.number({ error: 'Choose the revision the vehicle was flashed with' }).int().positive().max(2_147_483_647, 'Choose the revision the vehicle was flashed with'),
   drivenOn: z.iso.date('Date must be a calendar date (YYYY-MM-DD)'),
   vehicleUnit: z.string().trim().min(1, 'Vehicle unit is required (e.g. its fleet number)').max(60),
   route: z.string().trim().min(1, 'Route or course is required').max(200),

@@ -17,17 +17,21 @@ import { UnitSwitch } from './unit-switch'
 import { UNITS, type UnitSystem } from './units'
 import { useMapDraft } from './use-map-draft'
 import { useUndoKeys } from './use-undo-keys'
+import { TractionShadingControls, useTractionShade, type ShadingChoice } from './traction-shading'
+import type { VehicleParams } from '@/physics/vehicle'
 
 export interface MapEditorProps {
   mapId: number
   limits: MapLimits | null
+  /** The program's vehicle, for the traction shading (null: no shading offered). */
+  vehicle?: VehicleParams | null
   base: { number: number; table: MapTable }
   canSave: boolean
 }
 
 const when = (iso: string) => new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })
 
-export default function MapEditor({ mapId, limits, base: pageBase, canSave }: MapEditorProps) {
+export default function MapEditor({ mapId, limits, vehicle = null, base: pageBase, canSave }: MapEditorProps) {
   const [pageBaseState] = useState(pageBase)
   const draft = useMapDraft(mapId, pageBaseState)
   const [system, setSystem] = useState<UnitSystem>('metric')
@@ -39,6 +43,8 @@ export default function MapEditor({ mapId, limits, base: pageBase, canSave }: Ma
     gridApi.current = a
   }, [])
   const { table, apply, undo, redo } = draft
+  const [shading, setShading] = useState<ShadingChoice | null>(null)
+  const traction = useTractionShade(table, vehicle, shading)
 
   useUndoKeys(undo, redo, useCallback(() => gridApi.current?.isEditing() ?? false, []))
 
@@ -72,11 +78,12 @@ export default function MapEditor({ mapId, limits, base: pageBase, canSave }: Ma
             Discard edits
           </button>
         )}
+        <TractionShadingControls vehicle={vehicle} choice={shading} onChange={setShading} spinCount={traction.spinCount} kind={table.kind} />
         <span className="ml-auto"><UnitSwitch value={system} onChange={setSystem} /></span>
       </div>
       <Toolbar table={table} range={range} units={units} limits={limits} onApply={apply} undo={undo} redo={redo} canUndo={draft.canUndo} canRedo={draft.canRedo} />
       {editError && <p role="alert" className="error-text text-sm">Edit refused — {editError}</p>}
-      <MapWorkspace table={table} units={units} limits={limits} range={range} onSelect={setRange} onEdit={onEdit} onGridApi={onGridApi} />
+      <MapWorkspace table={table} units={units} limits={limits} range={range} onSelect={setRange} onEdit={onEdit} onGridApi={onGridApi} cellShade={traction.shade} />
       <div className="grid gap-4 lg:grid-cols-2">
         {canSave && (
           <SavePanel mapId={mapId} table={table} base={draft.base} dirty={draft.dirty} message={draft.message} notes={draft.notes} setMessage={draft.setMessage} setNotes={draft.setNotes} units={units} onSaved={draft.finish} onRebase={draft.rebase} />

@@ -32,6 +32,12 @@ export function HistoryTable(props: { mapId: number; revisions: RevisionSummary[
                 <Link href={`/maps/${props.mapId}/revisions/${r.number}`} className="text-accent hover:underline">Open</Link>
                 {' · '}
                 <Link href={`/review/${r.id}`} className="text-accent hover:underline">Review</Link>
+                {r.number > 1 && (
+                  <>
+                    {' · '}
+                    <Link href={`/maps/compare?a=${props.mapId}:${r.number - 1}&b=${props.mapId}:${r.number}`} className="text-accent hover:underline">Changes</Link>
+                  </>
+                )}
                 {props.canEdit && (
                   <>
                     {' · '}

@@ -42,6 +42,11 @@ export default async function MapNotebookPage(props: {
           </p>
         </div>
         <div className="ml-auto flex gap-2">
+          {latest && latest.number > 1 && (
+            <Link href={`/maps/compare?a=${map.id}:${latest.number - 1}&b=${map.id}:${latest.number}`} className="btn">
+              Compare r{latest.number - 1} with r{latest.number}
+            </Link>
+          )}
           {latest && (
             <Link href={`/maps/${map.id}/revisions/${latest.number}`} className="btn">
               Open latest (r{latest.number})

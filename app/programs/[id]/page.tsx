@@ -1,3 +1,4 @@
+import Link from 'next/link'
 import { notFound } from 'next/navigation'
 import { requirePageUser } from '@/app/_lib/page-access'
 import { PROGRAM_EDITORS } from '@/app/_lib/roles'
@@ -20,7 +21,10 @@ export default async function ProgramPage({
   const saved = (await searchParams).saved === '1'
   return (
     <div className="space-y-4">
-      <h1 className="text-2xl font-bold">{program.name}</h1>
+      <div className="flex flex-wrap items-center gap-3">
+        <h1 className="text-2xl font-bold">{program.name}</h1>
+        <Link href={`/programs/${program.id}/physics`} className="btn ml-auto">Traction and launch physics</Link>
+      </div>
       {saved && <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">Saved.</p>}
       <ProgramForm
         key={program.updatedAt.toISOString()}

@@ -1,6 +1,8 @@
 import type { NextConfig } from 'next'
 
 const nextConfig: NextConfig = {
+  // A second build folder lets a test run build and serve while another build uses .next.
+  distDir: process.env.NEXT_DIST_DIR || '.next',
   // PGlite ships WASM and data files that must be loaded from node_modules at run time, not bundled.
   serverExternalPackages: ['@electric-sql/pglite', '@node-rs/argon2', 'pg'],
   poweredByHeader: false,

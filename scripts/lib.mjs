@@ -36,7 +36,7 @@ function newestMtime(p) {
 
 /** True when there is no production build or a source file is newer than it. */
 export function buildIsStale() {
-  const id = fs.statSync(path.join(root, '.next', 'BUILD_ID'), { throwIfNoEntry: false })
+  const id = fs.statSync(path.join(root, process.env.NEXT_DIST_DIR || '.next', 'BUILD_ID'), { throwIfNoEntry: false })
   if (!id) return true
   const sources = ['app', 'maps', 'physics', 'db', 'package.json', 'next.config.ts', 'postcss.config.mjs'].map((p) => path.join(root, p))
   return Math.max(...sources.map(newestMtime)) > id.mtimeMs

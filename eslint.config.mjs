@@ -4,7 +4,7 @@ import nextTs from 'eslint-config-next/typescript'
 const config = [
   ...nextVitals,
   ...nextTs,
-  { ignores: ['.next/**', 'node_modules/**', '.data/**', 'db/migrations/**', 'next-env.d.ts', 'test-results/**', 'playwright-report/**'] },
+  { ignores: ['.next/**', '.next-*/**', 'node_modules/**', '.data/**', 'db/migrations/**', 'next-env.d.ts', 'test-results/**', 'playwright-report/**'] },
 ]
 
 export default config

@@ -59,7 +59,7 @@ export function errorResponse(e: unknown): Response {
   if (e instanceof MapFormatError) return jsonError(400, 'invalid_format', e.message, { line: e.line, column: e.column, path: e.path })
   if (e instanceof MapError) return jsonError(400, 'invalid_map', e.message, { rule: e.code })
   if (isUniqueViolation(e)) return jsonError(409, 'conflict', 'That already exists')
-  if (hasPgCode(e, '22003')) return jsonError(400, 'invalid_input', 'A number is larger than the database can store (ids and counts are below 2,147,483,648)')
+  if (CLIENT_VALUE_CODES.some((c) => hasPgCode(e, c))) return jsonError(400, 'invalid_input', 'A value cannot be stored: ids are whole numbers below 2,147,483,648, and text may not hold NUL characters or broken Unicode')
   console.error('Unhandled error in route handler', e)
   return jsonError(500, 'internal', 'Something went wrong on the server; the change was not saved')
 }
@@ -70,9 +70,13 @@ export function isUniqueViolation(e: unknown): boolean {
 }
 
 /**
- * A PostgreSQL error code, possibly wrapped by the driver or Drizzle. 22003 (numeric_value_out_of_range)
- * is a client's id or number beyond an integer column (e.g. /api/maps/99999999999): bad input, not a 500.
+ * PostgreSQL codes for a client's value the database cannot store — bad input, not a 500: an id beyond
+ * an integer column (22003, e.g. /api/maps/99999999999; 22P02 for one Number() writes as 1e+28), a NUL
+ * character in text (22021) or in JSON (22P05), a lone surrogate in JSON (22P02).
  */
+const CLIENT_VALUE_CODES = ['22003', '22P02', '22021', '22P05']
+
+/** A PostgreSQL error code, possibly wrapped by the driver or Drizzle. */
 function hasPgCode(e: unknown, code: string): boolean {
   for (let cur = e as { code?: string; cause?: unknown } | undefined, i = 0; cur && i < 4; i++) {
     if (cur.code === code) return true

@@ -12,7 +12,8 @@ export const createUserSchema = z.object({
 
 export const updateUserSchema = z
   .object({
-    name: z.string().trim().min(1, 'Name is required').max(120),
+    // A lone UTF-16 surrogate cannot go into the audit row's JSON (the route writes the user, then the audit row).
+    name: z.string().trim().min(1, 'Name is required').max(120).refine((s) => !/\p{Cs}/u.test(s), 'Name must be valid Unicode text'),
     role: roleSchema,
     disabled: z.boolean(),
     password: z.string().min(10, 'Password must be at least 10 characters').max(200),

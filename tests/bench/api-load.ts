@@ -7,13 +7,13 @@
 import autocannon from 'autocannon'
 import type { MapTable } from '@/maps'
 import { figure, isMain, runStandalone, type BenchResult, type Figure } from './report'
-import { signIn, startServer } from './server'
+import { signIn, startServer, type BenchServer } from './server'
 
 const BENCH = 'api-load'
 const READ_CONNECTIONS = 10
 const READ_AMOUNT = 5000
 const SAVE_AMOUNT = 300
-const TIME_CAP_S = 20
+const TIME_CAP_S = 15
 
 /** Runs autocannon, stopping it at TIME_CAP_S even when `amount` is not reached (amount overrides duration). */
 function cannon(opts: autocannon.Options): Promise<autocannon.Result> {
@@ -36,8 +36,8 @@ function figures(name: string, r: autocannon.Result, targets: { rps?: number; p9
 
 interface MapSummary { id: number; name: string; kind: string; latestNumber: number | null }
 
-export async function runApiLoad(): Promise<BenchResult> {
-  const server = await startServer()
+export async function runApiLoad(shared?: BenchServer): Promise<BenchResult> {
+  const server = shared ?? (await startServer())
   try {
     const { baseUrl } = server
     const { cookie } = await signIn(baseUrl)
@@ -86,8 +86,8 @@ export async function runApiLoad(): Promise<BenchResult> {
       notes: [`map ${map.id} "${map.name}", ${table.rowAxis.length} × ${table.colAxis.length} cells; server: next start on PGlite`],
     }
   } finally {
-    await server.stop()
+    if (!shared) await server.stop()
   }
 }
 
-if (isMain(import.meta.url)) void runStandalone(BENCH, runApiLoad)
+if (isMain(import.meta.url)) void runStandalone(BENCH, () => runApiLoad())

@@ -99,7 +99,7 @@ test.describe('comparing two revisions', () => {
     await expect(save).toBeDisabled()
     await page.getByRole('textbox', { name: 'Why (required)' }).fill('Keep the solo tractor within grip on gravel')
     await save.click()
-    await expect(page.getByRole('status')).toContainText('Saved as r3')
+    await expect(page.getByRole('status')).toContainText('Saved as r3', { timeout: 20_000 })
     await page.getByRole('link', { name: 'Compare r2 with r3' }).click()
     await expect(page).toHaveURL(new RegExp(`a=${road}%3A2|a=${road}:2`))
     await expect(page.getByTestId('slip-heatmap-b')).toHaveAttribute('data-spin-count', '0', { timeout: PLOT_WAIT })

@@ -36,6 +36,8 @@ async function openPglite(): Promise<Handle> {
     await client.waitReady
     const db = drizzle({ client, schema })
     await migrate(db, { migrationsFolder })
+    // PGlite has no autovacuum, so its planner never learns table sizes; refresh the statistics once per open.
+    await client.exec('analyze')
     return {
       db: db as unknown as Db,
       kind: 'pglite',

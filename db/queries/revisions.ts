@@ -58,6 +58,18 @@ export type SaveResult =
  * concurrent saves queue up; a save whose parent is no longer the latest is refused (nothing is
  * written) and told the newer number. The unique (map, number) index is the last line of defence.
  */
+/** Every this many revisions of a map, the save refreshes the planner statistics of the revisions table. */
+export const STATS_EVERY = 100
+
+/**
+ * PGlite runs no autovacuum, so the planner's idea of the table size goes stale as history grows
+ * (PostgreSQL's autovacuum does the same on its own; running it there too is harmless).
+ */
+export async function refreshRevisionStatistics(): Promise<void> {
+  const db = await getDb()
+  await db.execute(sql`analyze map_revisions`)
+}
+
 export async function saveRevision(input: {
   mapId: number
   parentNumber: number
@@ -67,6 +79,12 @@ export async function saveRevision(input: {
   table: MapTable
   action?: string
 }): Promise<SaveResult> {
+  const result = await saveInTransaction(input)
+  if (result.ok && result.revision.number % STATS_EVERY === 0) await refreshRevisionStatistics()
+  return result
+}
+
+async function saveInTransaction(input: Parameters<typeof saveRevision>[0]): Promise<SaveResult> {
   const db = await getDb()
   return db.transaction(async (tx) => {
     const locked = await tx.select({ id: maps.id }).from(maps).where(eq(maps.id, input.mapId)).for('update')
@@ -96,22 +114,33 @@ export async function saveRevision(input: {
   })
 }
 
-/** Newest first, without the tables; `before` pages back from a revision number. */
+/**
+ * Newest first, without the tables; `before` pages back from a revision number. The page is cut
+ * from map_revisions alone (a backward scan of the (map_id, number) index) before the author
+ * join, so the first screen costs the same with ten revisions or ten thousand.
+ */
 export async function listRevisions(mapId: number, opts: { limit?: number; before?: number } = {}): Promise<RevisionSummary[]> {
   const db = await getDb()
+  const page = db
+    .select({ id: mapRevisions.id })
+    .from(mapRevisions)
+    .where(opts.before ? and(eq(mapRevisions.mapId, mapId), lt(mapRevisions.number, opts.before)) : eq(mapRevisions.mapId, mapId))
+    .orderBy(desc(mapRevisions.mapId), desc(mapRevisions.number))
+    .limit(Math.min(opts.limit ?? 50, 500))
+    .as('page')
   return db
     .select(summary)
-    .from(mapRevisions)
+    .from(page)
+    .innerJoin(mapRevisions, eq(mapRevisions.id, page.id))
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
-    .where(opts.before ? and(eq(mapRevisions.mapId, mapId), lt(mapRevisions.number, opts.before)) : eq(mapRevisions.mapId, mapId))
     .orderBy(desc(mapRevisions.number))
-    .limit(Math.min(opts.limit ?? 50, 500))
 }
 
+/** How many revisions a map has: numbers run 1…n without gaps (unique, each save takes latest + 1), so n is the count. */
 export async function countRevisions(mapId: number): Promise<number> {
   const db = await getDb()
-  const [row] = await db.select({ n: sql<number>`count(*)::int` }).from(mapRevisions).where(eq(mapRevisions.mapId, mapId))
-  return Number(row.n)
+  const [row] = await db.select({ n: sql<number | null>`max(${mapRevisions.number})` }).from(mapRevisions).where(eq(mapRevisions.mapId, mapId))
+  return Number(row.n ?? 0)
 }
 
 /** One revision with its table; `number` omitted means the latest. */
@@ -122,7 +151,7 @@ export async function getRevision(mapId: number, number?: number): Promise<Revis
     .from(mapRevisions)
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
     .where(number === undefined ? eq(mapRevisions.mapId, mapId) : and(eq(mapRevisions.mapId, mapId), eq(mapRevisions.number, number)))
-    .orderBy(desc(mapRevisions.number))
+    .orderBy(desc(mapRevisions.mapId), desc(mapRevisions.number))
     .limit(1)
   return rows[0] ?? null
 }

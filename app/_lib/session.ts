@@ -1,5 +1,5 @@
 import { decode } from 'next-auth/jwt'
-import { getUserById, type PublicUser } from '@/db/queries/users'
+import { getSessionUser, type PublicUser } from '@/db/queries/users'
 import { env } from './env'
 
 /** next-auth's session cookie names: plain over http, __Secure- over https. */
@@ -30,7 +30,7 @@ export async function userFromCookieHeader(cookieHeader: string | null): Promise
     const jwt = await decode({ token, secret: env().authSecret }).catch(() => null)
     const id = Number(jwt?.sub)
     if (!jwt || !Number.isInteger(id)) continue
-    const user = await getUserById(id)
+    const user = await getSessionUser(id)
     if (!user || user.disabled) return null
     return { id: user.id, email: user.email, name: user.name, role: user.role }
   }

@@ -32,6 +32,21 @@ export async function getUserById(id: number): Promise<PublicUser | null> {
   return rows[0] ?? null
 }
 
+// The session check re-reads a user at most once a second: a disabled account or a changed role
+// still takes effect on the next request, because changes made through updateUser clear the entry
+// at once (with several servers on one PostgreSQL, the others see it within the second).
+const SESSION_TTL_MS = 1000
+const sessionCache = new Map<number, { at: number; user: PublicUser | null }>()
+
+/** The user for a session check, read fresh at most once a second. */
+export async function getSessionUser(id: number): Promise<PublicUser | null> {
+  const hit = sessionCache.get(id)
+  if (hit && Date.now() - hit.at < SESSION_TTL_MS) return hit.user
+  const user = await getUserById(id)
+  sessionCache.set(id, { at: Date.now(), user })
+  return user
+}
+
 /** For sign-in only: the one query that reads the hash. */
 export async function getUserCredentials(email: string) {
   const db = await getDb()
@@ -66,6 +81,7 @@ export async function updateUser(
     .set({ ...patch, updatedAt: new Date() })
     .where(eq(users.id, id))
     .returning(publicColumns)
+  sessionCache.delete(id)
   return rows[0] ?? null
 }
 

@@ -1,7 +1,7 @@
 import { SAFETY_CAUTION as CAUTION_LINES } from '@/maps'
 
 /** The plain caution every release, export and physics page carries: the same words as the exports. */
-export const SAFETY_CAUTION = CAUTION_LINES.slice(1).join(' ')
+export const SAFETY_CAUTION = CAUTION_LINES.slice(1).join(' ').replace('; this file does not replace any of them', '')
 
 export function SafetyCaution({ className = '' }: { className?: string }) {
   return (

@@ -47,6 +47,8 @@ async function restorePglite() {
     console.log(`Restored ${file}\n  into ${dir} (${counts})`)
     if (fs.existsSync(aside)) console.log(`  the previous folder is kept at ${aside}; delete it when you no longer need it`)
   } catch (e) {
+    // Put the current folder back if it was already moved aside, then drop the half-made one.
+    if (!fs.existsSync(dir) && fs.existsSync(aside)) fs.renameSync(aside, dir)
     fs.rmSync(staging, { recursive: true, force: true })
     fail(`Restore failed; ${dir} is unchanged: ${e instanceof Error ? e.message : e}`)
   } finally {

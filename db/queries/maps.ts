@@ -1,7 +1,7 @@
-import { asc, eq, sql } from 'drizzle-orm'
+import { and, asc, eq, sql } from 'drizzle-orm'
 import type { MapTable } from '../../maps'
 import { getDb } from '../client'
-import { mapRevisions, maps, vehiclePrograms } from '../schema'
+import { mapRevisions, maps, users, vehiclePrograms } from '../schema'
 import { recordAudit } from './audit'
 import { insertRevision } from './revisions'
 
@@ -77,4 +77,47 @@ export async function createMap(
     await recordAudit({ actorId: authorId, action: 'map.create', entityType: 'map', entityId: map.id, details: { name: input.name, kind: input.kind } }, tx)
     return { mapId: map.id, revision }
   })
+}
+
+/**
+ * A map, its program and its latest revision in one round trip (the most frequent read). Every map
+ * has revision 1 from the moment it exists (createMap writes both in one transaction), so the
+ * joins are inner. Null when the map does not exist.
+ */
+export async function getMapWithLatest(id: number) {
+  const db = await getDb()
+  const rows = await db
+    .select({
+      map: {
+        id: maps.id,
+        name: maps.name,
+        kind: maps.kind,
+        description: maps.description,
+        programId: maps.programId,
+        programName: vehiclePrograms.name,
+        programParams: vehiclePrograms.params,
+        programReleaseConditions: vehiclePrograms.releaseConditions,
+        createdAt: maps.createdAt,
+      },
+      latest: {
+        id: mapRevisions.id,
+        mapId: mapRevisions.mapId,
+        number: mapRevisions.number,
+        parentId: mapRevisions.parentId,
+        authorId: mapRevisions.authorId,
+        authorName: users.name,
+        message: mapRevisions.message,
+        notes: mapRevisions.notes,
+        checksum: mapRevisions.checksum,
+        state: mapRevisions.state,
+        createdAt: mapRevisions.createdAt,
+        table: mapRevisions.table,
+      },
+    })
+    .from(maps)
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, sql`(select max(r.number) from map_revisions r where r.map_id = ${maps.id})`)))
+    .innerJoin(users, eq(users.id, mapRevisions.authorId))
+    .where(eq(maps.id, id))
+  return rows[0] ?? null
 }

@@ -14,7 +14,8 @@ export async function readJson<S extends z.ZodType>(req: Request, schema: S): Pr
 
 /** A positive integer route parameter, or a 404-worthy 400. */
 export function intParam(value: string | undefined, name: string): number {
-  const n = Number(value)
-  if (!Number.isInteger(n) || n <= 0) throw new ValidationError(`${name} must be a positive whole number`)
+  // Plain digits only: Number() would also take " 1", "1e3" and "0x10".
+  const n = /^[1-9][0-9]{0,9}$/.test(value ?? '') ? Number(value) : NaN
+  if (!Number.isInteger(n) || n > 2_147_483_647) throw new ValidationError(`${name} must be a positive whole number`)
   return n
 }

@@ -1,5 +1,6 @@
 import { asc, eq, sql } from 'drizzle-orm'
 import { getDb } from '../client'
+import { recordAudit, type AuditEntry } from './audit'
 import { users, type Role } from '../schema'
 
 /** The columns safe to return anywhere: never the password hash. */
@@ -71,16 +72,22 @@ export async function createUser(input: {
   return row
 }
 
+/** Change a user; with `audit`, the audit row is written in the same transaction (both or neither). */
 export async function updateUser(
   id: number,
   patch: Partial<{ name: string; role: Role; disabled: boolean; passwordHash: string }>,
+  audit?: AuditEntry,
 ): Promise<PublicUser | null> {
   const db = await getDb()
-  const rows = await db
-    .update(users)
-    .set({ ...patch, updatedAt: new Date() })
-    .where(eq(users.id, id))
-    .returning(publicColumns)
+  const rows = await db.transaction(async (tx) => {
+    const updated = await tx
+      .update(users)
+      .set({ ...patch, updatedAt: new Date() })
+      .where(eq(users.id, id))
+      .returning(publicColumns)
+    if (updated[0] && audit) await recordAudit(audit, tx)
+    return updated
+  })
   sessionCache.delete(id)
   return rows[0] ?? null
 }

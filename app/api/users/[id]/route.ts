@@ -4,7 +4,6 @@ import { intParam, readJson } from '@/app/_lib/request'
 import { hashPassword } from '@/app/_lib/password'
 import { updateUserSchema } from '@/app/_schemas/user'
 import { countActiveAdmins, getUserById, updateUser } from '@/db/queries/users'
-import { recordAudit } from '@/db/queries/audit'
 
 // PATCH /api/users/:id — change a user's name, role, password or disabled flag (admin)
 export const PATCH = withRole<{ id: string }>(['admin'], async (req, { user, params }) => {
@@ -16,13 +15,10 @@ export const PATCH = withRole<{ id: string }>(['admin'], async (req, { user, par
   // Keep at least one admin, or nobody could manage users again.
   if (losesAdmin && (await countActiveAdmins()) <= 1) throw new ConflictError('This is the last active admin; make another admin first')
   const { password, ...rest } = input
-  const updated = await updateUser(id, { ...rest, ...(password ? { passwordHash: await hashPassword(password) } : {}) })
-  await recordAudit({
-    actorId: user.id,
-    action: 'user.update',
-    entityType: 'user',
-    entityId: id,
-    details: { ...rest, passwordChanged: Boolean(password) },
-  })
+  const updated = await updateUser(
+    id,
+    { ...rest, ...(password ? { passwordHash: await hashPassword(password) } : {}) },
+    { actorId: user.id, action: 'user.update', entityType: 'user', entityId: id, details: { ...rest, passwordChanged: Boolean(password) } },
+  )
   return Response.json({ user: updated })
 })

@@ -3,7 +3,7 @@ import type { MapTable } from '../../maps'
 import { getDb } from '../client'
 import { mapRevisions, maps, users, vehiclePrograms } from '../schema'
 import { recordAudit } from './audit'
-import { insertRevision } from './revisions'
+import { insertRevision, revisionSummaryColumns } from './revisions'
 
 export interface MapSummary {
   id: number
@@ -19,19 +19,28 @@ export interface MapSummary {
 const latest = sql<number | null>`(select max(${mapRevisions.number}) from ${mapRevisions} where ${mapRevisions.mapId} = ${maps.id})`
 const latestAt = sql<Date | null>`(select max(${mapRevisions.createdAt}) from ${mapRevisions} where ${mapRevisions.mapId} = ${maps.id})`
 
+/** A map's own columns with its program's name. */
+const mapColumns = {
+  id: maps.id,
+  name: maps.name,
+  kind: maps.kind,
+  description: maps.description,
+  programId: maps.programId,
+  programName: vehiclePrograms.name,
+}
+
+/** Everything a page about one map needs of the map and its program. */
+const mapWithProgramColumns = {
+  ...mapColumns,
+  programParams: vehiclePrograms.params,
+  programReleaseConditions: vehiclePrograms.releaseConditions,
+  createdAt: maps.createdAt,
+}
+
 export async function listMaps(filter: { programId?: number } = {}): Promise<MapSummary[]> {
   const db = await getDb()
   const rows = await db
-    .select({
-      id: maps.id,
-      name: maps.name,
-      kind: maps.kind,
-      description: maps.description,
-      programId: maps.programId,
-      programName: vehiclePrograms.name,
-      latestNumber: latest,
-      latestAt,
-    })
+    .select({ ...mapColumns, latestNumber: latest, latestAt })
     .from(maps)
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
     .where(filter.programId ? eq(maps.programId, filter.programId) : undefined)
@@ -43,17 +52,7 @@ export async function listMaps(filter: { programId?: number } = {}): Promise<Map
 export async function getMap(id: number) {
   const db = await getDb()
   const rows = await db
-    .select({
-      id: maps.id,
-      name: maps.name,
-      kind: maps.kind,
-      description: maps.description,
-      programId: maps.programId,
-      programName: vehiclePrograms.name,
-      programParams: vehiclePrograms.params,
-      programReleaseConditions: vehiclePrograms.releaseConditions,
-      createdAt: maps.createdAt,
-    })
+    .select(mapWithProgramColumns)
     .from(maps)
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
     .where(eq(maps.id, id))
@@ -87,33 +86,7 @@ export async function createMap(
 export async function getMapWithLatest(id: number) {
   const db = await getDb()
   const rows = await db
-    .select({
-      map: {
-        id: maps.id,
-        name: maps.name,
-        kind: maps.kind,
-        description: maps.description,
-        programId: maps.programId,
-        programName: vehiclePrograms.name,
-        programParams: vehiclePrograms.params,
-        programReleaseConditions: vehiclePrograms.releaseConditions,
-        createdAt: maps.createdAt,
-      },
-      latest: {
-        id: mapRevisions.id,
-        mapId: mapRevisions.mapId,
-        number: mapRevisions.number,
-        parentId: mapRevisions.parentId,
-        authorId: mapRevisions.authorId,
-        authorName: users.name,
-        message: mapRevisions.message,
-        notes: mapRevisions.notes,
-        checksum: mapRevisions.checksum,
-        state: mapRevisions.state,
-        createdAt: mapRevisions.createdAt,
-        table: mapRevisions.table,
-      },
-    })
+    .select({ map: mapWithProgramColumns, latest: { ...revisionSummaryColumns, table: mapRevisions.table } })
     .from(maps)
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
     .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, sql`(select max(r.number) from map_revisions r where r.map_id = ${maps.id})`)))

@@ -6,8 +6,8 @@ import { recordAudit } from './audit'
 
 type Tx = Pick<Db, 'insert' | 'select'>
 
-/** Summary columns of a revision: everything but the table itself. */
-const summary = {
+/** Summary columns of a revision (with its author's name): everything but the table itself. */
+export const revisionSummaryColumns = {
   id: mapRevisions.id,
   mapId: mapRevisions.mapId,
   number: mapRevisions.number,
@@ -129,7 +129,7 @@ export async function listRevisions(mapId: number, opts: { limit?: number; befor
     .limit(Math.min(opts.limit ?? 50, 500))
     .as('page')
   return db
-    .select(summary)
+    .select(revisionSummaryColumns)
     .from(page)
     .innerJoin(mapRevisions, eq(mapRevisions.id, page.id))
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
@@ -147,7 +147,7 @@ export async function countRevisions(mapId: number): Promise<number> {
 export async function getRevision(mapId: number, number?: number): Promise<Revision | null> {
   const db = await getDb()
   const rows = await db
-    .select({ ...summary, table: mapRevisions.table })
+    .select({ ...revisionSummaryColumns, table: mapRevisions.table })
     .from(mapRevisions)
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
     .where(number === undefined ? eq(mapRevisions.mapId, mapId) : and(eq(mapRevisions.mapId, mapId), eq(mapRevisions.number, number)))

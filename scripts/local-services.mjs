@@ -44,6 +44,11 @@ export async function startMailCapture(outboxFile, port = 2525) {
     server.once('error', reject)
     server.listen(port, '127.0.0.1', resolve)
   })
+  // A client that drops its connection (a test worker ending mid-send) must not bring the server down.
+  server.removeAllListeners('error')
+  server.on('error', (e) => {
+    if (e.code !== 'ECONNRESET' && e.code !== 'EPIPE') console.error('mail capture:', e.message)
+  })
   const actual = server.server.address().port
   return { url: `smtp://127.0.0.1:${actual}`, close: () => new Promise((r) => server.close(r)) }
 }

@@ -57,6 +57,9 @@ async function openPostgres(url: string): Promise<Handle> {
   const { drizzle } = await import('drizzle-orm/node-postgres')
   const { migrate } = await import('drizzle-orm/node-postgres/migrator')
   const pool = new Pool({ connectionString: url, max: Number(process.env.PG_POOL_MAX ?? 10) })
+  // An idle connection the server closes (restart, failover, a dropped database) must not crash the
+  // process: the pool drops that client and opens a new one on the next query.
+  pool.on('error', (e) => console.error(`PostgreSQL connection lost: ${e.message}`))
   try {
     const db = drizzle({ client: pool, schema })
     await migrate(db, { migrationsFolder })

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next'
 import localFont from 'next/font/local'
 import type { ReactNode } from 'react'
-import { optionalPageUser } from './_lib/page-access'
+import { optionalPageUser } from './_lib/auth/page-access'
 import { Providers } from './_components/providers'
 import { SiteHeader } from './_components/site-header'
 import './globals.css'

@@ -8,8 +8,8 @@ import { driveReports, maps, mapRevisions, users } from '../db/schema'
 import { createReport } from '../db/queries/reports'
 import { recordRelease, transitionRevision } from '../db/queries/review'
 import { createLog } from '../db/queries/logs'
-import { analyse } from '../app/_lib/log-jobs'
-import { putObjectStream } from '../app/_lib/storage'
+import { analyse } from '../app/_lib/reports/log-jobs'
+import { putObjectStream } from '../app/_lib/storage/object-store'
 import { generateLog } from '../tests/support/log-generator'
 
 async function userId(db: Db, email: string): Promise<number> {

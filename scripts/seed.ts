@@ -1,7 +1,7 @@
 // Apply migrations and load the invented demo scenario; safe to run again (adds nothing twice).
 import { closeDb, getHandle } from '../db/client'
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '../db/seed'
-import { hashPassword } from '../app/_lib/password'
+import { hashPassword } from '../app/_lib/auth/password'
 import { seedWorkflow } from './seed-workflow'
 
 async function main() {

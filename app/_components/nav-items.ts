@@ -1,4 +1,4 @@
-import type { Role } from '@/app/_lib/roles'
+import type { Role } from '@/app/_lib/auth/roles'
 
 export interface NavItem {
   href: string

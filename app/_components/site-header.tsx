@@ -1,6 +1,6 @@
 import Link from 'next/link'
-import { roleLabel } from '@/app/_lib/roles'
-import type { SessionUser } from '@/app/_lib/session'
+import { roleLabel } from '@/app/_lib/auth/roles'
+import type { SessionUser } from '@/app/_lib/auth/session'
 import { navFor } from './nav-items'
 import { SignOutButton } from './sign-out-button'
 

@@ -5,7 +5,7 @@ import path from 'node:path'
 import { pipeline } from 'node:stream/promises'
 import { Readable } from 'node:stream'
 import { generateLogChunks } from '@/tests/support/log-generator'
-import type { IngestOptions } from '@/app/_lib/log-ingest'
+import type { IngestOptions } from '@/app/_lib/reports/log-ingest'
 
 export const LOG_SEED = 20_240_601
 export const LOG_DURATION_S = 2 * 3600

@@ -3,7 +3,7 @@
  * prints, as JSON on the last line, the peak growth of RSS and heap over the settled baseline.
  */
 import fs from 'node:fs'
-import { ingestLog } from '@/app/_lib/log-ingest'
+import { ingestLog } from '@/app/_lib/reports/log-ingest'
 import { INGEST_OPTIONS } from './log-file'
 
 export interface MemoryReport { rssGrowthMB: number; heapGrowthMB: number; rows: number; ms: number }

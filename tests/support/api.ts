@@ -1,9 +1,9 @@
 // Helpers for integration tests: real users in the test database, real session cookies, real Requests.
 import { encode } from 'next-auth/jwt'
-import { env } from '@/app/_lib/env'
+import { env } from '@/app/_lib/config/env'
 import { createUser, type PublicUser } from '@/db/queries/users'
 import type { Role } from '@/db/schema'
-import { hashPassword } from '@/app/_lib/password'
+import { hashPassword } from '@/app/_lib/auth/password'
 
 let seq = 0
 

@@ -1,7 +1,7 @@
 // Every route handler under app/api, found from the files themselves, with its declared access.
 import fs from 'node:fs'
 import path from 'node:path'
-import type { Access } from '@/app/_lib/access'
+import type { Access } from '@/app/_lib/http/access'
 
 export const METHODS = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'] as const
 export type Method = (typeof METHODS)[number]

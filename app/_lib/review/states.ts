@@ -2,7 +2,7 @@
  * The review workflow of a revision as a pure state machine: which action moves which state, and
  * who may take it. The server checks every transition here before it touches the database.
  */
-import type { Role } from '../roles'
+import type { Role } from '../auth/roles'
 
 export const STATES = ['draft', 'in_review', 'returned', 'approved', 'released', 'retired', 'withdrawn'] as const
 export type RevisionState = (typeof STATES)[number]

@@ -1,6 +1,6 @@
 import Papa from 'papaparse'
 import { z } from 'zod'
-import { withRole } from '@/app/_lib/access'
+import { withRole } from '@/app/_lib/http/access'
 import { listAudit } from '@/db/queries/audit'
 
 const filterSchema = z.object({

@@ -1,6 +1,6 @@
-import { withRole } from '@/app/_lib/access'
-import { PROGRAM_EDITORS } from '@/app/_lib/roles'
-import { readJson } from '@/app/_lib/request'
+import { withRole } from '@/app/_lib/http/access'
+import { PROGRAM_EDITORS } from '@/app/_lib/auth/roles'
+import { readJson } from '@/app/_lib/http/request'
 import { programInputSchema } from '@/app/_schemas/program'
 import { createProgram, listPrograms } from '@/db/queries/programs'
 

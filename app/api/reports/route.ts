@@ -1,9 +1,9 @@
-import { withRole } from '@/app/_lib/access'
-import { checkReportTarget } from '@/app/_lib/report-access'
-import { readJson } from '@/app/_lib/request'
+import { withRole } from '@/app/_lib/http/access'
+import { checkReportTarget } from '@/app/_lib/reports/access'
+import { readJson } from '@/app/_lib/http/request'
 import { reportInputSchema } from '@/app/_schemas/report'
 import { createReport, getReport, listReports } from '@/db/queries/reports'
-import { nudgeMail, safetyMailFor } from '@/app/_lib/report-mail'
+import { nudgeMail, safetyMailFor } from '@/app/_lib/reports/mail'
 
 // GET /api/reports?revisionId=&mapId=&mine=1&openSafety=1 — drive reports, newest first
 export const GET = withRole('signed-in', async (req, { user }) => {

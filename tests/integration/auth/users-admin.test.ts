@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import * as usersRoute from '@/app/api/users/route'
 import * as userRoute from '@/app/api/users/[id]/route'
-import { checkCredentials } from '@/app/_lib/credentials'
+import { checkCredentials } from '@/app/_lib/auth/credentials'
 import { getUserCredentials } from '@/db/queries/users'
 import { listAudit } from '@/db/queries/audit'
 import { call, makeUser, sessionCookie } from '@/tests/support/api'

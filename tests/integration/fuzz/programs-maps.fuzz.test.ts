@@ -12,7 +12,7 @@ import * as overlayRoute from '@/app/api/maps/[id]/revisions/[number]/overlay/ro
 import * as simulateRoute from '@/app/api/maps/[id]/revisions/[number]/simulate/route'
 import { programInputSchema } from '@/app/_schemas/program'
 import { createMapSchema, importCsvSchema, saveRevisionSchema } from '@/app/_schemas/map'
-import { proposeBodySchema } from '@/app/_lib/propose'
+import { proposeBodySchema } from '@/app/_lib/physics/propose'
 import { demoTipper } from '@/db/demo/programs'
 import { toCsv } from '@/maps'
 import { call } from '@/tests/support/api'

@@ -2,7 +2,7 @@
 import { Readable } from 'node:stream'
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { ingestLog, ingestLogText, type IngestOptions } from '@/app/_lib/log-ingest'
+import { ingestLog, ingestLogText, type IngestOptions } from '@/app/_lib/reports/log-ingest'
 import { LogFormatError } from '@/physics'
 import { generateLog, generateLogChunks } from '@/tests/support/log-generator'
 

@@ -1,9 +1,9 @@
 import { describe, expect, it, beforeEach } from 'vitest'
 import { encode } from 'next-auth/jwt'
 import * as usersRoute from '@/app/api/users/route'
-import { checkCredentials, SignInLockedError } from '@/app/_lib/credentials'
-import { env } from '@/app/_lib/env'
-import { LIMITS, resetLimiter } from '@/app/_lib/sign-in-limiter'
+import { checkCredentials, SignInLockedError } from '@/app/_lib/auth/credentials'
+import { env } from '@/app/_lib/config/env'
+import { LIMITS, resetLimiter } from '@/app/_lib/auth/sign-in-limiter'
 import { call, makeUser } from '@/tests/support/api'
 
 describe('sessions and sign-in', () => {

@@ -1,6 +1,6 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
-import { ingestLogText } from '@/app/_lib/log-ingest'
+import { ingestLogText } from '@/app/_lib/reports/log-ingest'
 import { LogFormatError, createLogAnalyser } from '@/physics'
 import { HEADER, sample } from './helpers'
 

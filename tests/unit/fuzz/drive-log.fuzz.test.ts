@@ -5,7 +5,7 @@
 // The two readers are documented to agree, so they must also agree on accept vs refuse.
 import fc from 'fast-check'
 import { afterAll, describe, expect, it } from 'vitest'
-import { ingestLog, ingestLogText, type LogIngestResult, type LogReadOptions } from '@/app/_lib/log-ingest'
+import { ingestLog, ingestLogText, type LogIngestResult, type LogReadOptions } from '@/app/_lib/reports/log-ingest'
 import { LogFormatError } from '@/physics/drive-log'
 import { SURFACE_IDS } from '@/physics'
 import { generateLog, LOG_GEN_COLUMNS } from '@/tests/support/log-generator'

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { availableActions, checkTransition, STATES, type ReviewAction, type RevisionState } from '@/app/_lib/review/states'
-import { ROLES, type Role } from '@/app/_lib/roles'
+import { ROLES, type Role } from '@/app/_lib/auth/roles'
 
 const AUTHOR = 1
 const OTHER = 2

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { secureCookies } from '@/app/_lib/auth-options'
+import { secureCookies } from '@/app/_lib/auth/auth-options'
 
 describe('session cookie flags', () => {
   it('are Secure outside development, except plain http on loopback', () => {

@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest'
-import { checkAttempt, LIMITS, recordFailure, resetLimiter } from '@/app/_lib/sign-in-limiter'
+import { checkAttempt, LIMITS, recordFailure, resetLimiter } from '@/app/_lib/auth/sign-in-limiter'
 
 describe('sign-in limiter', () => {
   beforeEach(resetLimiter)

@@ -1,7 +1,7 @@
 import { z } from 'zod'
-import { withRole } from '@/app/_lib/access'
-import { readJson } from '@/app/_lib/request'
-import { deliverPending } from '@/app/_lib/mail-sender'
+import { withRole } from '@/app/_lib/http/access'
+import { readJson } from '@/app/_lib/http/request'
+import { deliverPending } from '@/app/_lib/mail/sender'
 import { retryMail } from '@/db/queries/mail'
 
 // POST /api/admin/mail — retry a failed message now (admin)

@@ -1,6 +1,6 @@
 // GET|POST /api/auth/* — next-auth's own sign-in, sign-out, CSRF and session endpoints (public by nature)
 import NextAuth from 'next-auth'
-import { authOptions } from '@/app/_lib/auth-options'
+import { authOptions } from '@/app/_lib/auth/auth-options'
 
 type Ctx = { params: Promise<{ nextauth: string[] }> }
 

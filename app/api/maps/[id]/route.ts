@@ -1,6 +1,6 @@
-import { withRole } from '@/app/_lib/access'
-import { NotFoundError } from '@/app/_lib/errors'
-import { intParam } from '@/app/_lib/request'
+import { withRole } from '@/app/_lib/http/access'
+import { NotFoundError } from '@/app/_lib/http/errors'
+import { intParam } from '@/app/_lib/http/request'
 import { getMapWithLatest } from '@/db/queries/maps'
 import { limitsFromVehicle, validate } from '@/maps'
 

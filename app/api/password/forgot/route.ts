@@ -1,7 +1,7 @@
 import { z } from 'zod'
-import { publicRoute } from '@/app/_lib/access'
-import { readJson } from '@/app/_lib/request'
-import { sendOneTimeLink } from '@/app/_lib/one-time-links'
+import { publicRoute } from '@/app/_lib/http/access'
+import { readJson } from '@/app/_lib/http/request'
+import { sendOneTimeLink } from '@/app/_lib/auth/one-time-links'
 import { getUserCredentials } from '@/db/queries/users'
 
 const schema = z.object({ email: z.email('Email must be a valid address') })

@@ -1,8 +1,8 @@
 import { z } from 'zod'
-import { publicRoute } from '@/app/_lib/access'
-import { ValidationError } from '@/app/_lib/errors'
-import { readJson } from '@/app/_lib/request'
-import { usePasswordLink } from '@/app/_lib/one-time-links'
+import { publicRoute } from '@/app/_lib/http/access'
+import { ValidationError } from '@/app/_lib/http/errors'
+import { readJson } from '@/app/_lib/http/request'
+import { usePasswordLink } from '@/app/_lib/auth/one-time-links'
 
 const schema = z.object({
   token: z.string().min(20, 'The link is incomplete').max(200),

@@ -1,7 +1,7 @@
-import { withRole } from '@/app/_lib/access'
-import { PROGRAM_EDITORS } from '@/app/_lib/roles'
-import { NotFoundError } from '@/app/_lib/errors'
-import { intParam, readJson } from '@/app/_lib/request'
+import { withRole } from '@/app/_lib/http/access'
+import { PROGRAM_EDITORS } from '@/app/_lib/auth/roles'
+import { NotFoundError } from '@/app/_lib/http/errors'
+import { intParam, readJson } from '@/app/_lib/http/request'
 import { programInputSchema } from '@/app/_schemas/program'
 import { getProgram, updateProgram } from '@/db/queries/programs'
 

@@ -1,10 +1,10 @@
-import { withRole } from '@/app/_lib/access'
-import { assertOwner, checkReportTarget, loadReport } from '@/app/_lib/report-access'
-import { readJson } from '@/app/_lib/request'
-import { ConflictError } from '@/app/_lib/errors'
+import { withRole } from '@/app/_lib/http/access'
+import { assertOwner, checkReportTarget, loadReport } from '@/app/_lib/reports/access'
+import { readJson } from '@/app/_lib/http/request'
+import { ConflictError } from '@/app/_lib/http/errors'
 import { reportInputSchema } from '@/app/_schemas/report'
 import { getReport, updateReport } from '@/db/queries/reports'
-import { nudgeMail, safetyMailFor } from '@/app/_lib/report-mail'
+import { nudgeMail, safetyMailFor } from '@/app/_lib/reports/mail'
 import { listLogs } from '@/db/queries/logs'
 
 // GET /api/reports/:id — one drive report with its logs (status and progress, no analysis)

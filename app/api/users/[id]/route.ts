@@ -1,7 +1,7 @@
-import { withRole } from '@/app/_lib/access'
-import { ConflictError, NotFoundError } from '@/app/_lib/errors'
-import { intParam, readJson } from '@/app/_lib/request'
-import { hashPassword } from '@/app/_lib/password'
+import { withRole } from '@/app/_lib/http/access'
+import { ConflictError, NotFoundError } from '@/app/_lib/http/errors'
+import { intParam, readJson } from '@/app/_lib/http/request'
+import { hashPassword } from '@/app/_lib/auth/password'
 import { updateUserSchema } from '@/app/_schemas/user'
 import { countActiveAdmins, getUserById, updateUser } from '@/db/queries/users'
 

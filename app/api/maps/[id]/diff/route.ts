@@ -1,5 +1,5 @@
-import { withRole } from '@/app/_lib/access'
-import { loadMap, loadRevision } from '@/app/_lib/map-access'
+import { withRole } from '@/app/_lib/http/access'
+import { loadMap, loadRevision } from '@/app/_lib/maps/access'
 import { diff } from '@/maps'
 
 // GET /api/maps/:id/diff?a=N&b=M[&bMap=K] — cell-by-cell changes from revision a to revision b (b may be on another map)

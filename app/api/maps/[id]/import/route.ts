@@ -1,7 +1,7 @@
-import { withRole } from '@/app/_lib/access'
-import { EDITORS } from '@/app/_lib/roles'
-import { loadMap, saveOnMap } from '@/app/_lib/map-access'
-import { readJson } from '@/app/_lib/request'
+import { withRole } from '@/app/_lib/http/access'
+import { EDITORS } from '@/app/_lib/auth/roles'
+import { loadMap, saveOnMap } from '@/app/_lib/maps/access'
+import { readJson } from '@/app/_lib/http/request'
 import { importCsvSchema } from '@/app/_schemas/map'
 import { fromCsv, limitsFromVehicle, validate } from '@/maps'
 

@@ -1,8 +1,8 @@
-import { withRole } from '@/app/_lib/access'
-import { NotFoundError } from '@/app/_lib/errors'
-import { intParam } from '@/app/_lib/request'
-import { physics } from '@/app/_lib/physics-query'
-import { LOW_SPEED_KMH, tractionTable } from '@/app/_lib/traction'
+import { withRole } from '@/app/_lib/http/access'
+import { NotFoundError } from '@/app/_lib/http/errors'
+import { intParam } from '@/app/_lib/http/request'
+import { physics } from '@/app/_lib/physics/query'
+import { LOW_SPEED_KMH, tractionTable } from '@/app/_lib/physics/traction'
 import { getProgram } from '@/db/queries/programs'
 
 // GET /api/programs/:id/traction — drive and regen force limits of the drive axle per surface and load case, with the motor torque that reaches them

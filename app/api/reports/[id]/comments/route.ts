@@ -1,8 +1,8 @@
 import { z } from 'zod'
-import { withRole } from '@/app/_lib/access'
-import { EDITORS } from '@/app/_lib/roles'
-import { loadReport } from '@/app/_lib/report-access'
-import { readJson } from '@/app/_lib/request'
+import { withRole } from '@/app/_lib/http/access'
+import { EDITORS } from '@/app/_lib/auth/roles'
+import { loadReport } from '@/app/_lib/reports/access'
+import { readJson } from '@/app/_lib/http/request'
 import { addReportComment, listReportComments } from '@/db/queries/reports'
 import { recordAudit } from '@/db/queries/audit'
 

@@ -1,5 +1,5 @@
-import { withRole } from '@/app/_lib/access'
-import { loadReport } from '@/app/_lib/report-access'
+import { withRole } from '@/app/_lib/http/access'
+import { loadReport } from '@/app/_lib/reports/access'
 import { getReport, markReportRead } from '@/db/queries/reports'
 
 // POST /api/reports/:id/read — a lead engineer marks a report as read (the driver's edits end there)

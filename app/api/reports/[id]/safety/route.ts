@@ -1,7 +1,7 @@
-import { withRole } from '@/app/_lib/access'
-import { ConflictError } from '@/app/_lib/errors'
-import { loadReport } from '@/app/_lib/report-access'
-import { readJson } from '@/app/_lib/request'
+import { withRole } from '@/app/_lib/http/access'
+import { ConflictError } from '@/app/_lib/http/errors'
+import { loadReport } from '@/app/_lib/reports/access'
+import { readJson } from '@/app/_lib/http/request'
 import { resolveSafetySchema } from '@/app/_schemas/report'
 import { getReport, resolveSafety } from '@/db/queries/reports'
 

@@ -1,6 +1,6 @@
-import { withRole } from '@/app/_lib/access'
-import { EDITORS } from '@/app/_lib/roles'
-import { intParam, readJson } from '@/app/_lib/request'
+import { withRole } from '@/app/_lib/http/access'
+import { EDITORS } from '@/app/_lib/auth/roles'
+import { intParam, readJson } from '@/app/_lib/http/request'
 import { applyReviewAction, loadRevisionContext } from '@/app/_lib/review/service'
 import { reviewActionSchema } from '@/app/_schemas/review'
 

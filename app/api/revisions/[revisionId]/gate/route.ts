@@ -1,5 +1,5 @@
-import { withRole } from '@/app/_lib/access'
-import { intParam } from '@/app/_lib/request'
+import { withRole } from '@/app/_lib/http/access'
+import { intParam } from '@/app/_lib/http/request'
 import { gateFor, loadRevisionContext } from '@/app/_lib/review/service'
 
 // GET /api/revisions/:revisionId/gate — the release conditions, each met or not, with the evidence

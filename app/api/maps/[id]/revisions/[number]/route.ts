@@ -1,5 +1,5 @@
-import { withRole } from '@/app/_lib/access'
-import { loadMap, loadRevision } from '@/app/_lib/map-access'
+import { withRole } from '@/app/_lib/http/access'
+import { loadMap, loadRevision } from '@/app/_lib/maps/access'
 import { limitsFromVehicle, validate } from '@/maps'
 
 // GET /api/maps/:id/revisions/:number — one revision (or `latest`) with its table and findings

@@ -1,12 +1,12 @@
-import { withRole } from '@/app/_lib/access'
-import { NotFoundError } from '@/app/_lib/errors'
-import { assertOwner, loadReport } from '@/app/_lib/report-access'
-import { intParam } from '@/app/_lib/request'
-import { startLogAnalysis } from '@/app/_lib/log-jobs'
+import { withRole } from '@/app/_lib/http/access'
+import { NotFoundError } from '@/app/_lib/http/errors'
+import { assertOwner, loadReport } from '@/app/_lib/reports/access'
+import { intParam } from '@/app/_lib/http/request'
+import { startLogAnalysis } from '@/app/_lib/reports/log-jobs'
 import { getLog } from '@/db/queries/logs'
 import { getRevisionById, getRevision } from '@/db/queries/revisions'
 import { getMap } from '@/db/queries/maps'
-import { predictEvents } from '@/app/_lib/log-prediction'
+import { predictEvents } from '@/app/_lib/reports/log-prediction'
 import type { AnalysisResult } from '@/physics'
 
 async function loadLog(reportParam: string, logParam: string) {

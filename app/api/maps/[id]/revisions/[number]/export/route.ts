@@ -1,7 +1,7 @@
-import { withRole } from '@/app/_lib/access'
-import { ValidationError } from '@/app/_lib/errors'
-import { loadMap, loadRevision } from '@/app/_lib/map-access'
-import { exportRevision, EXPORT_FORMATS, type ExportFormat } from '@/app/_lib/export-revision'
+import { withRole } from '@/app/_lib/http/access'
+import { ValidationError } from '@/app/_lib/http/errors'
+import { loadMap, loadRevision } from '@/app/_lib/maps/access'
+import { exportRevision, EXPORT_FORMATS, type ExportFormat } from '@/app/_lib/maps/export-revision'
 
 // GET /api/maps/:id/revisions/:number/export?format=csv|json|c — download a revision
 export const GET = withRole<{ id: string; number: string }>('signed-in', async (req, { params }) => {

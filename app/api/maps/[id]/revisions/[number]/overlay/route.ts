@@ -1,7 +1,7 @@
-import { withRole } from '@/app/_lib/access'
-import { loadMap, loadRevision } from '@/app/_lib/map-access'
-import { overlayFor } from '@/app/_lib/overlay'
-import { overlayQuerySchema, queryObject } from '@/app/_lib/physics-query'
+import { withRole } from '@/app/_lib/http/access'
+import { loadMap, loadRevision } from '@/app/_lib/maps/access'
+import { overlayFor } from '@/app/_lib/physics/overlay'
+import { overlayQuerySchema, queryObject } from '@/app/_lib/physics/query'
 
 // GET /api/maps/:id/revisions/:number/overlay?loadCase=&surface=&gradePct= — traction-limit torque per speed and predicted slip, spin and grip use per cell
 export const GET = withRole<{ id: string; number: string }>('signed-in', async (req, { params }) => {

@@ -1,8 +1,8 @@
-import { withRole } from '@/app/_lib/access'
-import { loadMap, loadRevision } from '@/app/_lib/map-access'
-import { proposeBodySchema, proposeFor, type ProposalResponse } from '@/app/_lib/propose'
-import { readJson } from '@/app/_lib/request'
-import { EDITORS } from '@/app/_lib/roles'
+import { withRole } from '@/app/_lib/http/access'
+import { loadMap, loadRevision } from '@/app/_lib/maps/access'
+import { proposeBodySchema, proposeFor, type ProposalResponse } from '@/app/_lib/physics/propose'
+import { readJson } from '@/app/_lib/http/request'
+import { EDITORS } from '@/app/_lib/auth/roles'
 import { listRevisions } from '@/db/queries/revisions'
 
 // POST /api/maps/:id/revisions/:number/propose — a traction-safe draft of the revision (not saved): cells above the traction limit less a margin are lowered

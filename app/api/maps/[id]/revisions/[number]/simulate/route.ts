@@ -1,7 +1,7 @@
-import { withRole } from '@/app/_lib/access'
-import { loadMap, loadRevision } from '@/app/_lib/map-access'
-import { queryObject } from '@/app/_lib/physics-query'
-import { simulate, simulateQuerySchema } from '@/app/_lib/simulate'
+import { withRole } from '@/app/_lib/http/access'
+import { loadMap, loadRevision } from '@/app/_lib/maps/access'
+import { queryObject } from '@/app/_lib/physics/query'
+import { simulate, simulateQuerySchema } from '@/app/_lib/physics/simulate'
 
 // GET /api/maps/:id/revisions/:number/simulate?mode=launch|liftoff&surface=&loadCase=&pedalPct=&rampS=&initialSpeedKmh=&gradePct=&durationS= — time series and summary of a launch (drive map) or lift-off (regen map)
 export const GET = withRole<{ id: string; number: string }>('signed-in', async (req, { params }) => {

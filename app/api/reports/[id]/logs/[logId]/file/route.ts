@@ -1,9 +1,9 @@
 import { Readable } from 'node:stream'
-import { withRole } from '@/app/_lib/access'
-import { NotFoundError } from '@/app/_lib/errors'
-import { loadReport } from '@/app/_lib/report-access'
-import { intParam } from '@/app/_lib/request'
-import { getObjectStream } from '@/app/_lib/storage'
+import { withRole } from '@/app/_lib/http/access'
+import { NotFoundError } from '@/app/_lib/http/errors'
+import { loadReport } from '@/app/_lib/reports/access'
+import { intParam } from '@/app/_lib/http/request'
+import { getObjectStream } from '@/app/_lib/storage/object-store'
 import { getLog } from '@/db/queries/logs'
 
 // GET /api/reports/:id/logs/:logId/file — download the raw log (signed-in users only; streamed from storage)

@@ -1,0 +1,57 @@
+import Link from 'next/link'
+import { formatTime } from '@/app/_components/format'
+import { MarkdownNotes } from '@/app/_components/markdown-notes'
+import { isState, STATE_LABELS } from '@/app/_lib/review/states'
+import type { RevisionSummary } from '@/db/queries/revisions'
+import type { ReportRow } from '@/db/queries/reports'
+import { SafetyBadge, surfaceLabel } from '@/app/(app)/reports/report-table'
+
+interface EventItem { id: number; revisionId: number; fromState: string; toState: string; comment: string; at: Date; actorName: string }
+interface CommentItem { id: number; revisionId: number; row: number | null; col: number | null; body: string; createdAt: Date; authorName: string }
+
+const label = (s: string) => (isState(s) ? STATE_LABELS[s] : s)
+
+/** The map's story, newest first: each revision with its notes, state changes, review comments and drive reports. */
+export function NotebookEntries(props: { revisions: RevisionSummary[]; events: EventItem[]; comments: CommentItem[]; reports: ReportRow[] }) {
+  return (
+    <ol className="space-y-3">
+      {props.revisions.map((r) => {
+        const events = props.events.filter((e) => e.revisionId === r.id)
+        const comments = props.comments.filter((c) => c.revisionId === r.id)
+        const reports = props.reports.filter((x) => x.revisionId === r.id)
+        return (
+          <li key={r.id} className="card space-y-2" data-testid={`notebook-${r.number}`}>
+            <p className="text-xs text-slate-500">
+              r{r.number} · {r.authorName} · {formatTime(r.createdAt)} · {label(r.state)}
+            </p>
+            <p className="font-medium">{r.message}</p>
+            <MarkdownNotes text={r.notes} />
+            {events.length > 0 && (
+              <ul className="text-sm text-slate-700">
+                {events.map((e) => (
+                  <li key={e.id}><span className="text-slate-500">State</span> {formatTime(e.at)} {e.actorName}: {label(e.fromState)} → {label(e.toState)}{e.comment ? ` — “${e.comment}”` : ''}</li>
+                ))}
+              </ul>
+            )}
+            {comments.length > 0 && (
+              <ul className="text-sm text-slate-700">
+                {comments.map((c) => (
+                  <li key={c.id}><span className="text-slate-500">Comment</span> {c.authorName}: {c.body}</li>
+                ))}
+              </ul>
+            )}
+            {reports.length > 0 && (
+              <ul className="text-sm">
+                {reports.map((x) => (
+                  <li key={x.id}>
+                    <span className="text-slate-500">Report</span> <Link href={`/reports/${x.id}`} className="text-accent hover:underline">Drive report {x.drivenOn}</Link> by {x.driverName}, {surfaceLabel(x.surface)}, {x.loadCase} <SafetyBadge safety={x.safety} />
+                  </li>
+                ))}
+              </ul>
+            )}
+          </li>
+        )
+      })}
+    </ol>
+  )
+}

@@ -1,0 +1,82 @@
+import Link from 'next/link'
+import { notFound } from 'next/navigation'
+import { requirePageUser } from '@/app/_lib/auth/page-access'
+import { EDITORS } from '@/app/_lib/auth/roles'
+import { getMap } from '@/db/queries/maps'
+import { countRevisions, listRevisions } from '@/db/queries/revisions'
+import { listReviewComments, listRevisionEvents } from '@/db/queries/review'
+import { listReports } from '@/db/queries/reports'
+import { HistoryTable } from './history-table'
+import { NotebookEntries } from './notebook-entries'
+
+export const metadata = { title: 'Map notebook' }
+
+export default async function MapNotebookPage(props: {
+  params: Promise<{ id: string }>
+  searchParams: Promise<Record<string, string | string[] | undefined>>
+}) {
+  const user = await requirePageUser()
+  const id = Number((await props.params).id)
+  const map = Number.isInteger(id) && id > 0 ? await getMap(id) : null
+  if (!map) notFound()
+  const { saved } = await props.searchParams
+  const [revisions, total, events, comments, reports] = await Promise.all([
+    listRevisions(map.id, { limit: 50 }),
+    countRevisions(map.id),
+    listRevisionEvents({ mapId: map.id }),
+    listReviewComments({ mapId: map.id }),
+    listReports({ mapId: map.id }),
+  ])
+  const latest = revisions[0]
+  return (
+    <div className="space-y-6">
+      <div className="flex flex-wrap items-start gap-3">
+        <div>
+          <p className="text-sm text-slate-500">
+            <Link href="/maps" className="hover:underline">Maps</Link> · {map.programName}
+          </p>
+          <h1 className="text-2xl font-bold">{map.name}</h1>
+          <p className="text-sm text-slate-600">
+            {map.kind === 'drive' ? 'Drive map: accelerator pedal × road speed → torque request' : 'Regen map: brake pedal × road speed → regen torque (0 % row is lift-off)'}
+            {map.description ? ` — ${map.description}` : ''}
+          </p>
+        </div>
+        <div className="ml-auto flex gap-2">
+          {latest && latest.number > 1 && (
+            <Link href={`/maps/compare?a=${map.id}:${latest.number - 1}&b=${map.id}:${latest.number}`} className="btn">
+              Compare r{latest.number - 1} with r{latest.number}
+            </Link>
+          )}
+          {latest && (
+            <Link href={`/maps/${map.id}/revisions/${latest.number}`} className="btn">
+              Open latest (r{latest.number})
+            </Link>
+          )}
+          {user.role === 'test_driver' && (
+            <Link href={`/reports/new?map=${map.id}`} className="btn">
+              File a drive report
+            </Link>
+          )}
+          {EDITORS.includes(user.role) && (
+            <Link href={`/maps/${map.id}/edit`} className="btn-primary">
+              Edit
+            </Link>
+          )}
+        </div>
+      </div>
+      {typeof saved === 'string' && (
+        <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">
+          Saved revision {saved}.
+        </p>
+      )}
+      <section>
+        <h2 className="mb-2 text-lg font-semibold">History</h2>
+        <HistoryTable mapId={map.id} revisions={revisions} total={total} canEdit={EDITORS.includes(user.role)} />
+      </section>
+      <section>
+        <h2 className="mb-2 text-lg font-semibold">Notebook</h2>
+        <NotebookEntries revisions={revisions} events={events} comments={comments} reports={reports} />
+      </section>
+    </div>
+  )
+}

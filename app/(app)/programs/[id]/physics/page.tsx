@@ -1,0 +1,41 @@
+import Link from 'next/link'
+import { notFound } from 'next/navigation'
+import { SafetyCaution } from '@/app/_components/safety-caution'
+import { requirePageUser } from '@/app/_lib/auth/page-access'
+import { EDITORS } from '@/app/_lib/auth/roles'
+import { tractionTable } from '@/app/_lib/physics/traction'
+import { listMaps } from '@/db/queries/maps'
+import { getProgram } from '@/db/queries/programs'
+import { loadCasesFor } from '@/physics'
+import { PhysicsWorkbench } from './physics-workbench'
+
+export const metadata = { title: 'Program physics' }
+
+/** /programs/:id/physics[?map=&rev=&loadCase=&surface=&gradePct=&units=] — traction limits and launch / lift-off simulations. */
+export default async function ProgramPhysicsPage(props: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const user = await requirePageUser()
+  const id = Number((await props.params).id)
+  const program = Number.isInteger(id) && id > 0 ? await getProgram(id) : null
+  if (!program) notFound()
+  const maps = (await listMaps({ programId: program.id })).filter((m) => m.latestNumber !== null)
+  return (
+    <div className="space-y-4">
+      <div>
+        <p className="text-sm text-slate-500">
+          <Link href="/programs" className="hover:underline">Vehicle programs</Link> · <Link href={`/programs/${program.id}`} className="hover:underline">{program.name}</Link>
+        </p>
+        <h1 className="text-2xl font-bold">Physics of {program.name}</h1>
+        <p className="text-sm text-slate-600">Traction limits of the drive axle with load transfer, and launch and lift-off simulations on a map revision (see docs/physics.md).</p>
+      </div>
+      <SafetyCaution />
+      <PhysicsWorkbench
+        programId={program.id}
+        loadCases={loadCasesFor(program.params)}
+        maps={maps.map((m) => ({ id: m.id, name: m.name, kind: m.kind, latestNumber: m.latestNumber ?? 1 }))}
+        initialTraction={tractionTable(program.params)}
+        query={await props.searchParams}
+        canEdit={EDITORS.includes(user.role)}
+      />
+    </div>
+  )
+}

@@ -1,0 +1,60 @@
+'use client'
+/** Traction and regen limits of the drive axle per surface and load case, from the traction route. */
+import { useQuery } from '@tanstack/react-query'
+import { api } from '@/app/_components/api-client'
+import { LOAD_CASE_LABELS } from '@/app/_components/plots/overlay-controls'
+import { fmt0, fmt1, type PlotUnits } from '@/app/_components/plots/units'
+import type { TractionRow } from '@/app/_lib/physics/traction'
+
+export function TractionTable({ programId, initial, units: u }: { programId: number; initial: TractionRow[]; units: PlotUnits }) {
+  const q = useQuery({
+    queryKey: ['traction', programId],
+    queryFn: () => api<{ rows: TractionRow[] }>(`/api/programs/${programId}/traction`).then((r) => r.rows),
+    initialData: initial,
+    staleTime: Infinity,
+  })
+  const rows = q.data
+  return (
+    <section className="card space-y-2">
+      <h2 className="text-lg font-semibold">Traction limits</h2>
+      <p className="text-sm text-slate-600">
+        Largest force the drive axle can put on the road before the tyres pass their peak, with the load transfer of that force
+        (level road, lowest gear). “Motor can give” is the motor and battery limit at {fmt1(u.speedOut(5))} {u.speed}.
+      </p>
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm tabular-nums" data-testid="traction-table">
+          <thead className="text-left text-xs uppercase text-slate-500">
+            <tr>
+              <th className="py-1">Surface</th>
+              <th>Load case</th>
+              <th className="text-right">Drive limit (kN)</th>
+              <th className="text-right">Motor torque at limit ({u.torque})</th>
+              <th className="text-right">Motor can give ({u.torque})</th>
+              <th className="text-right">Regen limit (kN)</th>
+              <th className="text-right">Regen torque at limit ({u.torque})</th>
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((r) => {
+              const spins = r.lowSpeedEnvelopeNm > r.driveTorqueAtLimitNm
+              return (
+                <tr key={`${r.surface}-${r.loadCase}`} className="border-t border-line">
+                  <td className="py-1">{r.surfaceLabel} <span className="text-slate-500">μ {r.peakMu}</span></td>
+                  <td>{LOAD_CASE_LABELS[r.loadCase]}</td>
+                  <td className="text-right">{fmt1(r.driveLimitKN)}{r.driveLimitedBy === 'steer-axle-lift' ? ' (steer axle lifts)' : ''}</td>
+                  <td className={`text-right ${spins ? 'font-semibold text-danger' : ''}`} title={spins ? 'Full pedal at low speed can spin the drive axle' : undefined}>
+                    {fmt0(u.torqueOut(r.driveTorqueAtLimitNm))}
+                  </td>
+                  <td className="text-right">{fmt0(u.torqueOut(r.lowSpeedEnvelopeNm))}</td>
+                  <td className="text-right">{fmt1(r.regenLimitKN)}</td>
+                  <td className="text-right">{fmt0(u.torqueOut(r.regenTorqueAtLimitNm))}</td>
+                </tr>
+              )
+            })}
+          </tbody>
+        </table>
+      </div>
+      <p className="text-xs text-slate-500">Red: the motor can give more than the axle can transmit there, so a full-pedal launch would spin the wheels unless the map holds back.</p>
+    </section>
+  )
+}

@@ -1,0 +1,65 @@
+import Link from 'next/link'
+import { notFound } from 'next/navigation'
+import { requirePageUser } from '@/app/_lib/auth/page-access'
+import { shortChecksum } from '@/app/_components/format'
+import { getReport } from '@/db/queries/reports'
+import { listLogs } from '@/db/queries/logs'
+import { RATING_KEYS, RATING_LABELS, SEVERITY_LABELS } from '@/app/_schemas/report'
+import { SafetyBadge, surfaceLabel } from '../report-table'
+import { SafetyPanel } from './safety-panel'
+import { LogsPanel } from './logs-panel'
+import { ReportDiscussion } from './report-discussion'
+
+export const metadata = { title: 'Drive report' }
+
+export default async function ReportPage(props: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const user = await requirePageUser()
+  const id = Number((await props.params).id)
+  const report = Number.isInteger(id) && id > 0 ? await getReport(id) : null
+  if (!report) notFound()
+  const logs = await listLogs(report.id)
+  const filed = (await props.searchParams).filed === '1'
+  return (
+    <div className="space-y-4">
+      {filed && <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">Report filed. You can attach the data log below.</p>}
+      <div>
+        <p className="text-sm text-slate-500">
+          <Link href="/reports" className="hover:underline">Drive reports</Link> · {report.programName}
+        </p>
+        <h1 className="text-2xl font-bold">
+          {report.mapName} <Link href={`/maps/${report.mapId}/revisions/${report.revisionNumber}`} className="text-accent hover:underline">r{report.revisionNumber}</Link> — {report.drivenOn}
+        </h1>
+        <p className="text-sm text-slate-600">
+          {user.id === report.driverId && !report.leadReadAt && (
+            <Link href={`/reports/${report.id}/edit`} className="btn mr-2">Edit</Link>
+          )}
+          {report.driverName} · unit {report.vehicleUnit} · {report.route} · checksum <span className="font-mono">{shortChecksum(report.revisionChecksum)}</span> <SafetyBadge safety={report.safety} />
+        </p>
+      </div>
+      <section className="card grid gap-2 text-sm sm:grid-cols-3">
+        <p><span className="label">Surface</span>{surfaceLabel(report.surface)}</p>
+        <p><span className="label">Weather</span>{report.weather}, {report.ambientC} °C</p>
+        <p><span className="label">Load</span>{report.loadCase}, payload {report.payloadKg} kg{report.trailer ? ', trailer' : ''}</p>
+        {RATING_KEYS.map((k) => (
+          <p key={k}><span className="label">{RATING_LABELS[k]}</span>{report.ratings[k]} / 5</p>
+        ))}
+        {report.comments && <p className="whitespace-pre-wrap sm:col-span-3"><span className="label">How it felt</span>{report.comments}</p>}
+      </section>
+      {report.flags.length > 0 && (
+        <section className="card">
+          <h2 className="mb-2 font-semibold">Flagged points</h2>
+          <ul className="space-y-1 text-sm">
+            {report.flags.map((f, i) => (
+              <li key={i} className={f.severity === 4 ? 'font-semibold text-danger' : ''}>
+                {f.pedalPct} % pedal at {f.speedKmh} km/h — {f.what} ({SEVERITY_LABELS[f.severity]})
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
+      <SafetyPanel reportId={report.id} safety={report.safety} resolution={report.safetyResolution} canResolve={user.role === 'lead_engineer'} />
+      <ReportDiscussion reportId={report.id} canComment={user.role === 'lead_engineer' || user.role === 'calibration_engineer'} canMarkRead={user.role === 'lead_engineer'} readAt={report.leadReadAt?.toISOString() ?? null} />
+      <LogsPanel reportId={report.id} initialLogs={logs.map((l) => ({ ...l, createdAt: l.createdAt.toISOString(), analysedAt: l.analysedAt?.toISOString() ?? null }))} canUpload={user.id === report.driverId} mapKind={report.mapKind} />
+    </div>
+  )
+}

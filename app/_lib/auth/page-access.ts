@@ -1,0 +1,23 @@
+import 'server-only'
+import { cookies } from 'next/headers'
+import { redirect } from 'next/navigation'
+import type { Role } from '@/app/_lib/auth/roles'
+import { userFromCookieHeader, type SessionUser } from './session'
+
+/**
+ * For protected pages: the signed-in user, or a redirect to sign-in; a role outside `roles`
+ * goes to the not-allowed page. Pages that read this render dynamically, never at build time.
+ */
+export async function requirePageUser(roles?: readonly Role[]): Promise<SessionUser> {
+  const user = await optionalPageUser()
+  if (!user) redirect('/signin')
+  if (roles && !roles.includes(user.role)) redirect('/not-allowed')
+  return user
+}
+
+/** The signed-in user for a page, or null (for pages anyone may open). */
+export async function optionalPageUser(): Promise<SessionUser | null> {
+  const jar = await cookies()
+  const header = jar.getAll().map((c) => `${c.name}=${encodeURIComponent(c.value)}`).join('; ')
+  return userFromCookieHeader(header || null)
+}

@@ -1,0 +1,38 @@
+import { decode } from 'next-auth/jwt'
+import { getSessionUser, type PublicUser } from '@/db/queries/users'
+import { env } from '../config/env'
+
+/** next-auth's session cookie names: plain over http, __Secure- over https. */
+export const SESSION_COOKIES = ['__Secure-next-auth.session-token', 'next-auth.session-token'] as const
+
+/** How long a sign-in lasts without activity, seconds. */
+export const SESSION_MAX_AGE_S = 12 * 60 * 60
+
+export type SessionUser = Pick<PublicUser, 'id' | 'email' | 'name' | 'role'>
+
+function readCookie(header: string | null, name: string): string | undefined {
+  if (!header) return undefined
+  for (const part of header.split(';')) {
+    const i = part.indexOf('=')
+    if (i > 0 && part.slice(0, i).trim() === name) return decodeURIComponent(part.slice(i + 1).trim())
+  }
+  return undefined
+}
+
+/**
+ * The signed-in user behind a Cookie header, or null. The user row is read on every request, so a
+ * disabled account or a changed role takes effect at once, not when the token expires.
+ */
+export async function userFromCookieHeader(cookieHeader: string | null): Promise<SessionUser | null> {
+  for (const name of SESSION_COOKIES) {
+    const token = readCookie(cookieHeader, name)
+    if (!token) continue
+    const jwt = await decode({ token, secret: env().authSecret }).catch(() => null)
+    const id = Number(jwt?.sub)
+    if (!jwt || !Number.isInteger(id)) continue
+    const user = await getSessionUser(id)
+    if (!user || user.disabled) return null
+    return { id: user.id, email: user.email, name: user.name, role: user.role }
+  }
+  return null
+}

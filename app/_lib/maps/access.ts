@@ -1,0 +1,37 @@
+import 'server-only'
+import { getMap, type MapWithProgram } from '@/db/queries/maps'
+import { getRevision, saveRevision, type Revision } from '@/db/queries/revisions'
+import type { MapTable } from '@/maps'
+import { ConflictError, NotFoundError, ValidationError } from '../http/errors'
+import { intParam } from '../http/request'
+
+/** The map named by a route's `:id`, or a 404. */
+export async function loadMap(idParam: string | undefined): Promise<MapWithProgram> {
+  const id = intParam(idParam, 'Map id')
+  const map = await getMap(id)
+  if (!map) throw new NotFoundError(`Map ${id}`)
+  return map
+}
+
+/** A revision by number, or the latest for 'latest'; 404 when missing. */
+export async function loadRevision(mapId: number, numberParam: string | undefined): Promise<Revision> {
+  const number = numberParam === 'latest' ? undefined : intParam(numberParam, 'Revision number')
+  const rev = await getRevision(mapId, number)
+  if (!rev) throw new NotFoundError(number === undefined ? `A revision of map ${mapId}` : `Revision ${number} of map ${mapId}`)
+  return rev
+}
+
+/** Save on top of parentNumber; a stale parent is a 409 that names the newer revision. */
+export async function saveOnMap(
+  map: MapWithProgram,
+  input: { parentNumber: number; message: string; notes: string; table: MapTable; authorId: number; action?: string },
+) {
+  if (input.table.kind !== map.kind) throw new ValidationError(`table.kind: this is a ${map.kind} map; the table is a ${input.table.kind} table`)
+  const result = await saveRevision({ mapId: map.id, ...input })
+  if (result.ok) return result.revision
+  if (result.reason === 'no-map') throw new NotFoundError(`Map ${map.id}`)
+  throw new ConflictError(
+    `Revision ${result.latestNumber} was saved after the revision ${input.parentNumber} you started from. Your edits are kept; compare with revision ${result.latestNumber} and save again on top of it.`,
+    { latestNumber: result.latestNumber, parentNumber: input.parentNumber },
+  )
+}

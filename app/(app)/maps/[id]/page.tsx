@@ -1,5 +1,6 @@
 import Link from 'next/link'
 import { notFound } from 'next/navigation'
+import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { getMap } from '@/db/queries/maps'
@@ -16,8 +17,7 @@ export default async function MapNotebookPage(props: {
   searchParams: Promise<Record<string, string | string[] | undefined>>
 }) {
   const user = await requirePageUser()
-  const id = Number((await props.params).id)
-  const map = Number.isInteger(id) && id > 0 ? await getMap(id) : null
+  const map = await getMap(pageId((await props.params).id, 'Map id'))
   if (!map) notFound()
   const { saved } = await props.searchParams
   const [revisions, total, events, comments, reports] = await Promise.all([

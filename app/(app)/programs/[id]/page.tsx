@@ -1,5 +1,6 @@
 import Link from 'next/link'
 import { notFound } from 'next/navigation'
+import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { PROGRAM_EDITORS } from '@/app/_lib/auth/roles'
 import { getProgram } from '@/db/queries/programs'
@@ -15,8 +16,7 @@ export default async function ProgramPage({
   searchParams: Promise<Record<string, string | string[] | undefined>>
 }) {
   const user = await requirePageUser()
-  const id = Number((await params).id)
-  const program = Number.isInteger(id) && id > 0 ? await getProgram(id) : null
+  const program = await getProgram(pageId((await params).id, 'Program id'))
   if (!program) notFound()
   const saved = (await searchParams).saved === '1'
   return (

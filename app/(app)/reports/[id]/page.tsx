@@ -1,5 +1,6 @@
 import Link from 'next/link'
 import { notFound } from 'next/navigation'
+import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { shortChecksum } from '@/app/_components/format'
 import { getReport } from '@/db/queries/reports'
@@ -14,8 +15,7 @@ export const metadata = { title: 'Drive report' }
 
 export default async function ReportPage(props: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser()
-  const id = Number((await props.params).id)
-  const report = Number.isInteger(id) && id > 0 ? await getReport(id) : null
+  const report = await getReport(pageId((await props.params).id, 'Report id'))
   if (!report) notFound()
   const logs = await listLogs(report.id)
   const filed = (await props.searchParams).filed === '1'

@@ -1,3 +1,4 @@
+import { idOrNull } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { listMaps } from '@/db/queries/maps'
 import { listPrograms } from '@/db/queries/programs'
@@ -17,7 +18,7 @@ export default async function NewReportPage(props: { searchParams: Promise<Recor
       <ReportForm
         maps={maps.map((m) => ({ id: m.id, name: m.name, kind: m.kind, programId: m.programId, programName: m.programName, latestNumber: m.latestNumber }))}
         loadCases={loadCases}
-        initialMapId={typeof q.map === 'string' ? Number(q.map) : undefined}
+        initialMapId={idOrNull(q.map, 'Map id') ?? undefined}
       />
     </div>
   )

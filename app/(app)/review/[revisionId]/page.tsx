@@ -1,5 +1,6 @@
 import Link from 'next/link'
 import { notFound } from 'next/navigation'
+import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { formatTime, shortChecksum } from '@/app/_components/format'
 import { MarkdownNotes } from '@/app/_components/markdown-notes'
@@ -21,8 +22,8 @@ export const metadata = { title: 'Review' }
 
 export default async function ReviewPage(props: { params: Promise<{ revisionId: string }> }) {
   const user = await requirePageUser()
-  const id = Number((await props.params).revisionId)
-  const ctx = Number.isInteger(id) && id > 0 ? await loadRevisionContext(id).catch((e) => (e instanceof NotFoundError ? null : Promise.reject(e))) : null
+  const id = pageId((await props.params).revisionId, 'Revision id')
+  const ctx = await loadRevisionContext(id).catch((e) => (e instanceof NotFoundError ? null : Promise.reject(e)))
   if (!ctx) notFound()
   const { revision: r, map } = ctx
   const [gate, reports, comments, events, released] = await Promise.all([

@@ -1,4 +1,5 @@
 import { notFound } from 'next/navigation'
+import { idOrNull, pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { MapEditorLazy } from '@/app/_components/map-grid/lazy'
@@ -12,12 +13,13 @@ export const metadata = { title: 'Edit map' }
 // Editors only. `?from=N` starts the draft from revision N, otherwise from the latest.
 export default async function EditMapPage(props: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser(EDITORS)
-  const id = Number((await props.params).id)
-  const map = Number.isInteger(id) && id > 0 ? await getMap(id) : null
+  const map = await getMap(pageId((await props.params).id, 'Map id'))
   if (!map) notFound()
   const { from } = await props.searchParams
-  const fromNumber = typeof from === 'string' && /^\d+$/.test(from) ? Number(from) : undefined
-  const revision = await getRevision(map.id, fromNumber)
+  // `?from=` names a revision: absent means the latest, anything else must be a revision number.
+  const fromNumber = idOrNull(from, 'Revision number')
+  if (from !== undefined && fromNumber === null) notFound()
+  const revision = await getRevision(map.id, fromNumber ?? undefined)
   if (!revision) notFound()
   return (
     <div className="space-y-4">

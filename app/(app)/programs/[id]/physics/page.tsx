@@ -1,6 +1,7 @@
 import Link from 'next/link'
 import { notFound } from 'next/navigation'
 import { SafetyCaution } from '@/app/_components/safety-caution'
+import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { tractionTable } from '@/app/_lib/physics/traction'
@@ -14,8 +15,7 @@ export const metadata = { title: 'Program physics' }
 /** /programs/:id/physics[?map=&rev=&loadCase=&surface=&gradePct=&units=] — traction limits and launch / lift-off simulations. */
 export default async function ProgramPhysicsPage(props: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser()
-  const id = Number((await props.params).id)
-  const program = Number.isInteger(id) && id > 0 ? await getProgram(id) : null
+  const program = await getProgram(pageId((await props.params).id, 'Program id'))
   if (!program) notFound()
   const maps = (await listMaps({ programId: program.id })).filter((m) => m.latestNumber !== null)
   return (

@@ -1,4 +1,5 @@
 import { notFound, redirect } from 'next/navigation'
+import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { getReport } from '@/db/queries/reports'
 import { listMaps } from '@/db/queries/maps'
@@ -11,8 +12,7 @@ export const metadata = { title: 'Edit drive report' }
 
 export default async function EditReportPage(props: { params: Promise<{ id: string }> }) {
   const user = await requirePageUser(['test_driver'])
-  const id = Number((await props.params).id)
-  const r = Number.isInteger(id) && id > 0 ? await getReport(id) : null
+  const r = await getReport(pageId((await props.params).id, 'Report id'))
   if (!r) notFound()
   // Logged in is not authorised: only the filing driver, and only until a lead has read it.
   if (r.driverId !== user.id || r.leadReadAt) redirect(`/reports/${r.id}`)

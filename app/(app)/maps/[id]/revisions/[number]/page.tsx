@@ -1,5 +1,6 @@
 import Link from 'next/link'
 import { notFound } from 'next/navigation'
+import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { RevisionViewerLazy } from '@/app/_components/map-grid/lazy'
@@ -14,10 +15,10 @@ export const metadata = { title: 'Map revision' }
 export default async function RevisionPage(props: { params: Promise<{ id: string; number: string }> }) {
   const user = await requirePageUser()
   const params = await props.params
-  const id = Number(params.id)
-  const map = Number.isInteger(id) && id > 0 ? await getMap(id) : null
-  if (!map || !/^\d+$/.test(params.number)) notFound()
-  const revision = await getRevision(map.id, Number(params.number))
+  const [id, number] = [pageId(params.id, 'Map id'), pageId(params.number, 'Revision number')]
+  const map = await getMap(id)
+  if (!map) notFound()
+  const revision = await getRevision(map.id, number)
   if (!revision) notFound()
   const canEdit = EDITORS.includes(user.role)
   return (

@@ -1,12 +1,12 @@
 import type { Metadata } from 'next'
 import { redirect } from 'next/navigation'
-import { optionalPageUser } from '@/app/_lib/auth/page-access'
+import { getPageUser } from '@/app/_lib/auth/page-access'
 import { SignInForm } from './sign-in-form'
 
 export const metadata: Metadata = { title: 'Sign in' }
 
 export default async function SignInPage() {
-  if (await optionalPageUser()) redirect('/')
+  if (await getPageUser()) redirect('/')
   return (
     <div className="mx-auto mt-12 max-w-sm">
       <h1 className="mb-1 text-2xl font-bold">Sign in</h1>

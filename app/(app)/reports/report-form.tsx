@@ -12,7 +12,8 @@ import { FlagGrid } from './flag-grid'
 import { FlagList } from './flag-list'
 import { ConditionsFields } from './conditions-fields'
 import { RatingsFields } from './ratings-fields'
-import { clearReportDraft, loadReportDraft, saveReportDraft } from './report-draft'
+import { useLocalDraft } from '@/app/_components/use-local-draft'
+import { reportDraftKey, reportDraftSchema } from './report-draft'
 
 export type ReportFormIn = z.input<typeof reportInputSchema>
 type ReportFormOut = z.output<typeof reportInputSchema>
@@ -29,7 +30,7 @@ export function ReportForm(props: {
   const reportId = props.edit?.reportId
   const router = useRouter()
   // Rendered in the browser only (see report-form-loader), so the unsent draft can seed the initial state.
-  const [draft] = useState(() => loadReportDraft(reportId))
+  const { restored: draft, save: saveDraft, clear: clearDraft } = useLocalDraft(reportDraftKey(reportId), reportDraftSchema)
   const [mapId, setMapId] = useState<number | undefined>(draft?.mapId ?? props.initialMapId)
   const [revisionNumber, setRevisionNumber] = useState<number | undefined>(draft?.revisionNumber ?? props.edit?.revisionNumber)
   const [restored, setRestored] = useState<string | null>(draft?.savedAt ?? null)
@@ -38,7 +39,7 @@ export function ReportForm(props: {
     resolver: zodResolver(reportInputSchema),
     defaultValues: {
       ...(props.edit?.values ?? { drivenOn: today(), trailer: false, flags: [], comments: '', payloadKg: 0, loadCase: 'empty', surface: 'dry-asphalt' }),
-      ...(draft?.values as Partial<ReportFormIn> | undefined),
+      ...draft?.values,
     },
   })
   const { control, handleSubmit, setValue, resetField, reset, formState } = form
@@ -49,8 +50,8 @@ export function ReportForm(props: {
 
   // Keep saving the form in the browser as the driver types.
   useEffect(() => {
-    if (formState.isDirty || mapId) saveReportDraft({ values, mapId, revisionNumber }, reportId)
-  }, [values, mapId, revisionNumber, formState.isDirty, reportId])
+    if (formState.isDirty || mapId) saveDraft({ values, mapId, revisionNumber, savedAt: new Date().toISOString() })
+  }, [values, mapId, revisionNumber, formState.isDirty, saveDraft])
 
   const submit = useMutation({
     mutationFn: (body: ReportFormOut) =>
@@ -58,7 +59,7 @@ export function ReportForm(props: {
         ? api<{ report: { id: number } }>(`/api/reports/${reportId}`, { method: 'PUT', json: body })
         : api<{ report: { id: number } }>('/api/reports', { method: 'POST', json: body }),
     onSuccess: ({ report }) => {
-      clearReportDraft(reportId)
+      clearDraft()
       router.push(`/reports/${report.id}?filed=1`)
     },
     onError: (e) => setServerError(e.message),
@@ -69,7 +70,7 @@ export function ReportForm(props: {
       {restored && (
         <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">
           Restored your unsent report from {restored.slice(0, 16).replace('T', ' ')} UTC.{' '}
-          <button type="button" className="underline" onClick={() => { clearReportDraft(reportId); setRestored(null); reset() }}>Start over</button>
+          <button type="button" className="underline" onClick={() => { clearDraft(); setRestored(null); reset() }}>Start over</button>
         </p>
       )}
       <section className="card space-y-3">

@@ -5,7 +5,8 @@
  */
 import { useCallback, useEffect, useState } from 'react'
 import type { MapTable } from '@/maps'
-import { clearDraft, loadDraft, saveDraft } from './draft-storage'
+import { useLocalDraft } from '../use-local-draft'
+import { mapDraftKey, mapDraftSchema } from './draft-storage'
 import { sameTable } from './same-table'
 import { useHistory } from './use-history'
 
@@ -15,7 +16,7 @@ export interface Base {
 }
 
 export function useMapDraft(mapId: number, pageBase: Base) {
-  const [restored] = useState(() => loadDraft(mapId))
+  const { restored, save, clear } = useLocalDraft(mapDraftKey(mapId), mapDraftSchema)
   const [base, setBase] = useState<Base>(() => (restored ? { number: restored.baseNumber, table: restored.baseTable } : pageBase))
   const history = useHistory(restored?.table ?? pageBase.table, restored ? [restored.baseTable] : undefined)
   const [message, setMessage] = useState(restored?.message ?? '')
@@ -24,25 +25,25 @@ export function useMapDraft(mapId: number, pageBase: Base) {
   const dirty = !sameTable(history.table, base.table)
 
   useEffect(() => {
-    if (!dirty && !message && !notes) return clearDraft(mapId)
-    saveDraft(mapId, { baseNumber: base.number, baseTable: base.table, table: history.table, message, notes, savedAt: new Date().toISOString() })
-  }, [mapId, base, history.table, message, notes, dirty])
+    if (!dirty && !message && !notes) return clear()
+    save({ baseNumber: base.number, baseTable: base.table, table: history.table, message, notes, savedAt: new Date().toISOString() })
+  }, [save, clear, base, history.table, message, notes, dirty])
 
   const { reset } = history
   const discard = useCallback(() => {
-    clearDraft(mapId)
+    clear()
     setBase(pageBase)
     reset(pageBase.table)
     setMessage('')
     setNotes('')
     setRestoredAt(null)
-  }, [mapId, pageBase, reset])
+  }, [clear, pageBase, reset])
 
   /** Put the edits on top of a newer revision: the edited table stays exactly as it is. */
   const rebase = useCallback((next: Base) => setBase(next), [])
 
   /** After a save the draft is done with. */
-  const finish = useCallback(() => clearDraft(mapId), [mapId])
+  const finish = clear
 
   return { ...history, base, dirty, message, setMessage, notes, setNotes, restoredAt, dismissRestored: () => setRestoredAt(null), discard, rebase, finish }
 }

@@ -1,6 +1,9 @@
 /**
- * Speed-dependent torque bounds, from P = T·ω with ω the motor shaft speed in rad/s.
+ * Speed-dependent torque bounds of a map, from P = T·ω with ω the motor shaft speed in rad/s:
+ * the torque/power curves of physics/envelope.ts evaluated on MapLimits (lowest-gear shaft
+ * speed, road-speed cut-off of the top gear).
  */
+import { batteryTorqueAtShaft, peakTorqueAtShaft } from '../physics/envelope'
 import { MapInputError } from './errors'
 import type { MapLimits } from './limits'
 
@@ -28,9 +31,7 @@ export function shaftSpeedRadS(limits: MapLimits, speedKmh: number): number {
 export function motorEnvelopeAt(limits: MapLimits, speedKmh: number): number {
   const v = checkSpeed(speedKmh)
   if (v > limits.maxRoadSpeedKmh) return 0
-  const omega = v * limits.shaftRadPerKmh
-  if (omega <= 0) return limits.motorPeakTorqueNm
-  return Math.min(limits.motorPeakTorqueNm, limits.motorPeakPowerW / omega)
+  return peakTorqueAtShaft(limits, v * limits.shaftRadPerKmh)
 }
 
 /**
@@ -41,8 +42,7 @@ export function motorEnvelopeAt(limits: MapLimits, speedKmh: number): number {
  * @example chargeLimitTorqueAt(limits, 30) // 200000 / 300 ≈ 666.7 for a 200 kW charge limit
  */
 export function chargeLimitTorqueAt(limits: MapLimits, speedKmh: number): number {
-  const omega = shaftSpeedRadS(limits, speedKmh)
-  return omega > 0 ? limits.batteryChargePowerW / omega : Infinity
+  return batteryTorqueAtShaft(limits, shaftSpeedRadS(limits, speedKmh), 'regen')
 }
 
 /**
@@ -52,6 +52,5 @@ export function chargeLimitTorqueAt(limits: MapLimits, speedKmh: number): number
  * @example dischargeLimitTorqueAt(limits, 30) // 250000 / 300 ≈ 833.3 for a 250 kW discharge limit
  */
 export function dischargeLimitTorqueAt(limits: MapLimits, speedKmh: number): number {
-  const omega = shaftSpeedRadS(limits, speedKmh)
-  return omega > 0 ? limits.batteryDischargePowerW / omega : Infinity
+  return batteryTorqueAtShaft(limits, shaftSpeedRadS(limits, speedKmh), 'drive')
 }

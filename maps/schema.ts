@@ -4,7 +4,7 @@
  * in validate, because a map that breaks them must still be storable to be fixed.
  */
 import { z } from 'zod'
-import { MAX_BREAKPOINTS, MIN_BREAKPOINTS, type MapTable } from './table'
+import { MAP_KINDS, MAX_BREAKPOINTS, MIN_BREAKPOINTS, type MapTable } from './table'
 
 // zod 4 numbers already refuse NaN and ±Infinity; the message says what a reader needs.
 const finite = z.number({ error: 'must be a finite number' })
@@ -26,7 +26,7 @@ function increasing(values: number[], key: 'rowAxis' | 'colAxis', name: string, 
  */
 export const mapTableSchema = z
   .object({
-    kind: z.enum(['drive', 'regen'], { error: "kind must be 'drive' or 'regen'" }),
+    kind: z.enum(MAP_KINDS, { error: "kind must be 'drive' or 'regen'" }),
     rowAxis: axis('pedal'),
     colAxis: axis('speed'),
     values: z.array(z.array(finite)).max(MAX_BREAKPOINTS),

@@ -1,23 +1,11 @@
 /**
- * The table model shared by the editor, the validator, the formats and the API.
- *
- * A map is a 2-D grid of torque requests: rows are pedal position (%), columns road speed
- * (km/h). A drive map holds motoring torque; a regen map holds braking torque (≥ 0) by brake
- * pedal position, where the 0 % row is the lift-off regen applied with both pedals released.
+ * Table helpers shared by the editor, the validator, the formats and the API. The table type
+ * itself is defined once in physics/table.ts (the lower layer) and re-exported here.
  */
+import type { MapKind, MapTable } from '../physics/table'
 import { MapInputError } from './errors'
 
-export type MapKind = 'drive' | 'regen'
-
-export interface MapTable {
-  kind: MapKind
-  /** Pedal position breakpoints, %, strictly increasing (regen: brake pedal; 0 % = lift-off). */
-  rowAxis: number[]
-  /** Road speed breakpoints, km/h, strictly increasing. */
-  colAxis: number[]
-  /** values[row][col]: torque request at the motor shaft, N·m (regen: braking torque, ≥ 0). */
-  values: number[][]
-}
+export { MAP_KINDS, type MapKind, type MapTable } from '../physics/table'
 
 /** Axis sizes accepted everywhere (schema, CSV, breakpoint edits): small enough for firmware. */
 export const MIN_BREAKPOINTS = 2

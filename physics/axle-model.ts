@@ -5,6 +5,7 @@
  * where Wr0, Wf0 are the level-road static loads and He an effective transfer height.
  * A rigid truck has He = h; a tractor-semitrailer's He comes from the free-body derivation in trailer.ts.
  */
+import type { MapKind } from './table'
 import { PhysicsInputError } from './errors'
 
 /** Linear axle-load model. All loads in N for a level road; multiply by cosθ on a grade. */
@@ -33,7 +34,7 @@ export function driveAxleLoadN(m: AxleLoadModel, wheelForceN: number, cosGrade =
  * the drive case capped where the steer axle would lift (Wf = 0).
  * @example driveAxleLimitN(model, 0.8, 1, 'drive')
  */
-export function driveAxleLimitN(m: AxleLoadModel, mu: number, cosGrade: number, mode: 'drive' | 'regen'): number {
+export function driveAxleLimitN(m: AxleLoadModel, mu: number, cosGrade: number, mode: MapKind): number {
   if (!(mu > 0 && Number.isFinite(mu))) throw new PhysicsInputError('mu', `must be a finite number > 0 (got ${String(mu)})`)
   const k = (mu * m.transferHeightM) / m.wheelbaseM
   const w = mu * m.staticDriveAxleLoadN * cosGrade

@@ -11,7 +11,8 @@ import { SURFACES, type Surface, type SurfaceId } from './surfaces'
 import { gradeCos } from './traction'
 import { checkCoeffs, peakForceRatio, slipSolverFor } from './tyre'
 import { kmhToMps } from './units'
-import type { LoadCase, VehicleParams } from './vehicle'
+import type { LoadCase } from './load-cases'
+import type { VehicleParams } from './vehicle'
 
 /** Inputs that stay fixed across the cells of a map. */
 export interface CellContext {

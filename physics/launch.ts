@@ -1,12 +1,13 @@
 /** Standing (or rolling) launch on a drive map: pedal trace → map torque → envelope → tyre → vehicle. */
 import { checkPedalTrace, pedalAt, type PedalTrace } from './pedal'
 import { runSimulation, type SimOptions, type SimSample } from './sim-core'
-import { checkMap, lookup, type TorqueMap } from './table-lookup'
+import type { MapTable } from './table'
+import { checkMap, lookup } from './table-lookup'
 import { PhysicsInputError, requireNonNegative } from './errors'
 
 /** Launch inputs. `map.kind` must be `'drive'`; map values are motor-shaft torque, N·m. */
 export interface LaunchOptions extends SimOptions {
-  map: TorqueMap
+  map: MapTable
   pedal: PedalTrace
   /** Initial road speed, km/h (default 0). */
   initialSpeedKmh?: number

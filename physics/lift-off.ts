@@ -1,11 +1,12 @@
 /** Lift-off (accelerator released) regen on the drive axle: the regen map's 0 % row brakes the drive wheels. */
 import { runSimulation, type SimOptions, type SimSample } from './sim-core'
-import { checkMap, lookup, type TorqueMap } from './table-lookup'
+import type { MapTable } from './table'
+import { checkMap, lookup } from './table-lookup'
 import { PhysicsInputError, requirePositive } from './errors'
 
 /** Lift-off inputs. `map.kind` must be `'regen'`; values are braking torque magnitudes at the motor shaft (≥ 0 = regen). */
 export interface LiftOffOptions extends SimOptions {
-  map: TorqueMap
+  map: MapTable
   /** Speed when the pedal is released, km/h. */
   initialSpeedKmh: number
   /** Stop the simulation below this speed, km/h (default 2). */

@@ -12,7 +12,8 @@ import type { AxleLoadModel } from './axle-model'
 import { checkBody, type RigidBody } from './traction'
 import { combinationModel, type SemitrailerBody } from './trailer'
 import { validateVehicle } from './validate'
-import type { LoadCase, VehicleParams } from './vehicle'
+import { hasTrailer, type LoadCase } from './load-cases'
+import type { VehicleParams } from './vehicle'
 
 /** What a load case puts on the axles. */
 export interface LoadCaseBodies {
@@ -57,8 +58,7 @@ export function axleLoadsFor(vehicle: VehicleParams, loadCase: LoadCase): LoadCa
     cgHeightM: laden ? vehicle.ladenCgHeightM : vehicle.emptyCgHeightM,
   }
   if (loadCase === 'empty' || loadCase === 'laden') return { loadCase, tractor, trailer: null, model: rigidModel(tractor) }
-  if (loadCase !== 'trailer-empty' && loadCase !== 'trailer-laden')
-    throw new PhysicsInputError('loadCase', `unknown load case "${String(loadCase)}"`)
+  if (!hasTrailer(loadCase)) throw new PhysicsInputError('loadCase', `unknown load case "${String(loadCase)}"`)
   const t = vehicle.trailer
   if (!t) throw new PhysicsInputError('loadCase', `"${loadCase}" needs a trailer, but the program has none`)
   const tl = loadCase === 'trailer-laden'

@@ -11,7 +11,7 @@
  * friction brakes (see docs/map-formats.md, rule pedal-monotonic).
  */
 import { PhysicsInputError, requireFinite } from './errors'
-import type { TorqueMap } from './table-lookup'
+import type { MapTable } from './table'
 
 /** One changed cell of a proposal. */
 export interface ProposedChange {
@@ -24,7 +24,7 @@ export interface ProposedChange {
 }
 
 export interface Proposal {
-  table: TorqueMap
+  table: MapTable
   /** The ceiling per speed column, N·m: limit × (1 − margin/100), rounded down to a whole N·m. */
   ceilingByCol: number[]
   changes: ProposedChange[]
@@ -35,7 +35,7 @@ export interface Proposal {
  * for speed column c; `marginPct` in [0, 100). Does not mutate its inputs.
  * @example proposeTractionSafe(map, [1500, 1500, 1500], 10).changes.length
  */
-export function proposeTractionSafe(map: TorqueMap, limitByCol: readonly number[], marginPct: number): Proposal {
+export function proposeTractionSafe(map: MapTable, limitByCol: readonly number[], marginPct: number): Proposal {
   requireFinite('marginPct', marginPct)
   if (marginPct < 0 || marginPct >= 100) throw new PhysicsInputError('marginPct', 'must be at least 0 and below 100')
   if (limitByCol.length !== map.colAxis.length) throw new PhysicsInputError('limitByCol', `needs ${map.colAxis.length} values, one per speed breakpoint`)

@@ -7,12 +7,12 @@
  */
 import { resolveSurface, type CellContext } from './cell-slip'
 import { slipGrid, tractionLimitTorqueBySpeed, type TorqueLimitPoint } from './slip-grid'
-import type { TorqueMap } from './table-lookup'
+import type { MapKind, MapTable } from './table'
 import { peakSlip } from './tyre'
 
 /** Everything a plot of one map on one surface and load case needs (row = pedal, column = speed). */
 export interface MapOverlay {
-  kind: 'drive' | 'regen'
+  kind: MapKind
   /** Per speed breakpoint: traction (or lock-up) torque limit, envelope limit and the smaller of the two, N·m magnitudes. */
   tractionLimitBySpeed: TorqueLimitPoint[]
   /** Predicted slip ratio per cell, null when beyond the peak (no steady slip exists there). */
@@ -31,7 +31,7 @@ export interface MapOverlay {
  * Builds the overlay of a map. Throws PhysicsInputError for a bad vehicle, load case or map.
  * @example mapOverlay({ vehicle: truck, loadCase: 'empty', surface: 'ice', map: driveMap }).spinCount
  */
-export function mapOverlay(args: CellContext & { map: TorqueMap }): MapOverlay {
+export function mapOverlay(args: CellContext & { map: MapTable }): MapOverlay {
   const { map, ...ctx } = args
   const cells = slipGrid({ ...ctx, ...map })
   const spin = cells.map((row) => row.map((c) => c.spin || c.lock))

@@ -17,7 +17,8 @@ import { axleLoadsFor } from './load-case'
 import type { Surface, SurfaceId } from './surfaces'
 import { gradeCos } from './traction'
 import { magicFormula, magicFormulaSlope, peakSlip } from './tyre'
-import type { LoadCase, VehicleParams } from './vehicle'
+import type { LoadCase } from './load-cases'
+import type { VehicleParams } from './vehicle'
 
 /** Options common to both simulations. Times in s. */
 export interface SimOptions {

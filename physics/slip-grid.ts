@@ -2,7 +2,8 @@
 import { prepareCellSlip, type CellContext, type CellSlipResult } from './cell-slip'
 import { deliverableAtShaft } from './envelope'
 import { overallRatio } from './driveline'
-import { checkMap, type TorqueMap } from './table-lookup'
+import type { MapKind, MapTable } from './table'
+import { checkMap } from './table-lookup'
 import { kmhToMps } from './units'
 
 /**
@@ -10,7 +11,7 @@ import { kmhToMps } from './units'
  * magnitudes (≥ 0 = regen) and are evaluated as motor torque −value.
  * @example slipGrid({ vehicle: truck, loadCase: 'laden', surface: 'packed-snow', gradeRad: 0, ...driveMap })[3][0].slip
  */
-export function slipGrid(args: CellContext & TorqueMap): CellSlipResult[][] {
+export function slipGrid(args: CellContext & MapTable): CellSlipResult[][] {
   checkMap(args, '')
   const at = prepareCellSlip(args)
   const sign = args.kind === 'regen' ? -1 : 1
@@ -33,7 +34,7 @@ export interface TorqueLimitPoint {
  * for `kind: 'regen'` these are braking torques, matching the regen map convention).
  * @example tractionLimitTorqueBySpeed({ vehicle: truck, loadCase: 'laden', surface: 'ice', colAxis: [0, 20, 40], kind: 'drive' })
  */
-export function tractionLimitTorqueBySpeed(args: CellContext & { colAxis: number[]; kind: 'drive' | 'regen' }): TorqueLimitPoint[] {
+export function tractionLimitTorqueBySpeed(args: CellContext & { colAxis: number[]; kind: MapKind }): TorqueLimitPoint[] {
   checkMap({ rowAxis: [0], colAxis: args.colAxis, values: [args.colAxis.map(() => 0)] }, '')
   const at = prepareCellSlip({ ...args, applyEnvelope: false })
   const G = overallRatio(args.vehicle, args.gearIndex ?? 0)

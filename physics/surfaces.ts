@@ -1,8 +1,9 @@
 /** Road surfaces: Magic Formula coefficient sets for pure longitudinal slip. */
 import type { MagicFormulaCoeffs } from './tyre'
 
-/** Surface identifiers. */
-export type SurfaceId = 'dry-asphalt' | 'wet-asphalt' | 'gravel' | 'packed-snow' | 'ice'
+/** Surface ids in display order, e.g. for `z.enum(SURFACE_IDS)`. @example SURFACE_IDS[0] // 'dry-asphalt' */
+export const SURFACE_IDS = Object.freeze(['dry-asphalt', 'wet-asphalt', 'gravel', 'packed-snow', 'ice'] as const)
+export type SurfaceId = (typeof SURFACE_IDS)[number]
 
 /** One surface: Magic Formula coefficients, the peak friction coefficient μ and where the numbers come from. */
 export interface Surface {
@@ -43,5 +44,7 @@ export const SURFACES: Readonly<Record<SurfaceId, Surface>> = Object.freeze({
 
 for (const s of Object.values(SURFACES)) { Object.freeze(s.coeffs); Object.freeze(s) }
 
-/** Surface ids in display order. @example SURFACE_IDS[0] // 'dry-asphalt' */
-export const SURFACE_IDS: readonly SurfaceId[] = Object.freeze(['dry-asphalt', 'wet-asphalt', 'gravel', 'packed-snow', 'ice'])
+/** The label of a stored surface id, or the id itself when it is unknown (old rows). @example surfaceLabel('ice') // 'Ice' */
+export function surfaceLabel(id: string): string {
+  return (SURFACE_IDS as readonly string[]).includes(id) ? SURFACES[id as SurfaceId].label : id
+}

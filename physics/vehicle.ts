@@ -130,10 +130,5 @@ export const vehicleParamsSchema = z
       ctx.addIssue({ code: 'custom', path: ['trailer', 'fifthWheelToFrontAxleM'], message: 'The fifth wheel must sit near the drive axle (within 1.5 m behind it)' })
   })
 
-/** Load cases the physics evaluates; "with trailer" cases exist only when the program has a trailer. */
-export type LoadCase = 'empty' | 'laden' | 'trailer-empty' | 'trailer-laden'
-
-/** The load cases a program offers. */
-export function loadCasesFor(v: Pick<VehicleParams, 'trailer'>): LoadCase[] {
-  return v.trailer ? ['empty', 'laden', 'trailer-empty', 'trailer-laden'] : ['empty', 'laden']
-}
+/** Load cases live in ./load-cases; re-exported for importers of the vehicle contract. */
+export type { LoadCase } from './load-cases'

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { SURFACE_IDS } from '@/physics'
+import { LOAD_CASE_IDS, SURFACE_IDS } from '@/physics'
 
 export const RATING_KEYS = ['launch', 'tipIn', 'steadyPedal', 'liftOffRegen', 'brakeBlending'] as const
 export const RATING_LABELS: Record<(typeof RATING_KEYS)[number], string> = {
@@ -33,7 +33,7 @@ export const reportInputSchema = z.object({
   surface: z.enum(SURFACE_IDS, { error: 'Choose a road surface' }),
   weather: z.string().trim().min(1, 'Weather is required').max(120),
   ambientC: z.number({ error: 'Ambient temperature must be a number (°C)' }).min(-50, 'Ambient temperature must be at least −50 °C').max(60, 'Ambient temperature must be at most 60 °C'),
-  loadCase: z.enum(['empty', 'laden', 'trailer-empty', 'trailer-laden'], { error: 'Choose a load case' }),
+  loadCase: z.enum(LOAD_CASE_IDS, { error: 'Choose a load case' }),
   payloadKg: z.number({ error: 'Payload must be a number (kg)' }).min(0, 'Payload must not be negative').max(60_000, 'Payload must be at most 60,000 kg'),
   trailer: z.boolean(),
   ratings: z.object({

@@ -4,6 +4,7 @@
  * weights the map lookup uses, clamped at the edges), so the grid says how long each cell value
  * actually shaped the torque. Weights sum to 1, so the grid sums to the assigned time.
  */
+import type { MapKind } from '../table'
 import type { MapOccupancy } from './types'
 
 /**
@@ -38,7 +39,7 @@ export interface OccupancyGrid {
 }
 
 /** Axes must be ascending (checked by the analyser). @example createOccupancy('drive', [0, 100], [0, 50]).add(50, 25, 1) */
-export function createOccupancy(kind: 'drive' | 'regen', rowAxis: readonly number[], colAxis: readonly number[]): OccupancyGrid {
+export function createOccupancy(kind: MapKind, rowAxis: readonly number[], colAxis: readonly number[]): OccupancyGrid {
   const rows = rowAxis.slice()
   const cols = colAxis.slice()
   const nc = cols.length

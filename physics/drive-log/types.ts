@@ -1,4 +1,5 @@
 /** Plain data types shared by the drive-log decoder, analyser and ingest. */
+import type { MapKind } from '../table'
 import type { Surface, SurfaceId } from '../surfaces'
 import type { LogColumnRef } from './errors'
 
@@ -40,7 +41,7 @@ export interface LogAnalyserOptions {
   /** Map axes for the occupancy grid: rows pedal %, columns road speed km/h (ascending). */
   map?: { rowAxis: readonly number[]; colAxis: readonly number[] }
   /** 'drive' indexes rows by accelerator pedal; 'regen' by brake pedal, counting only accelerator-released time. */
-  kind?: 'drive' | 'regen'
+  kind?: MapKind
   /** Surface whose Magic Formula peak slip is the default spin/lock threshold. */
   surface?: Surface | SurfaceId
   thresholds?: SlipThresholds
@@ -77,7 +78,7 @@ export interface SlipEvent {
 
 /** Seconds spent at each map breakpoint (bilinear share), plus time not attributable to any cell. */
 export interface MapOccupancy {
-  kind: 'drive' | 'regen'
+  kind: MapKind
   rowAxis: number[]
   colAxis: number[]
   /** seconds[row][col], s. */

@@ -1,18 +1,11 @@
 'use client'
 import type { UseFormReturn } from 'react-hook-form'
-import { SURFACES, SURFACE_IDS } from '@/physics'
+import { loadCaseLabel, SURFACES, SURFACE_IDS } from '@/physics'
 import type { ReportFormIn } from './report-form'
 import type { z } from 'zod'
 import type { reportInputSchema } from '@/app/_schemas/report'
 
 type Form = UseFormReturn<ReportFormIn, unknown, z.output<typeof reportInputSchema>>
-
-const LOAD_CASE_LABELS: Record<string, string> = {
-  empty: 'Empty',
-  laden: 'Laden (gross)',
-  'trailer-empty': 'With trailer, empty',
-  'trailer-laden': 'With trailer, laden',
-}
 
 /** Date, vehicle, route and conditions: the context a reader needs to weigh the report. */
 export function ConditionsFields({ form, loadCases }: { form: Form; loadCases: string[] }) {
@@ -59,7 +52,7 @@ export function ConditionsFields({ form, loadCases }: { form: Form; loadCases: s
         <label htmlFor="loadCase" className="label">Load case</label>
         <select id="loadCase" className="field" {...register('loadCase')}>
           {loadCases.map((c) => (
-            <option key={c} value={c}>{LOAD_CASE_LABELS[c] ?? c}</option>
+            <option key={c} value={c}>{loadCaseLabel(c)}</option>
           ))}
         </select>
       </div>

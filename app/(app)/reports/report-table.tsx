@@ -1,15 +1,13 @@
 import Link from 'next/link'
 import type { ReportRow } from '@/db/queries/reports'
-import { SURFACES, type SurfaceId } from '@/physics'
+import { surfaceLabel } from '@/physics'
+
+export { surfaceLabel }
 
 export function SafetyBadge({ safety }: { safety: string }) {
   if (safety === 'open') return <span className="rounded bg-danger px-1.5 py-0.5 text-xs font-semibold text-white">safety concern open</span>
   if (safety === 'resolved') return <span className="rounded bg-slate-200 px-1.5 py-0.5 text-xs">safety concern resolved</span>
   return null
-}
-
-export function surfaceLabel(id: string): string {
-  return id in SURFACES ? SURFACES[id as SurfaceId].label : id
 }
 
 export function ReportTable({ reports }: { reports: ReportRow[] }) {

@@ -8,7 +8,8 @@ import { useMemo } from 'react'
 import type { MapTable } from '@/maps'
 import { SURFACES, SURFACE_IDS, type SurfaceId } from '@/physics'
 import { mapOverlay } from '@/physics/overlay'
-import { loadCasesFor, type LoadCase, type VehicleParams } from '@/physics/vehicle'
+import { loadCasesFor, type LoadCase } from '@/physics/load-cases'
+import type { VehicleParams } from '@/physics/vehicle'
 import { shadeFromOverlay } from '@/app/_components/plots/utilisation-shade'
 
 export interface ShadingChoice {

@@ -1,14 +1,7 @@
 'use client'
 /** The selects that choose the physics overlay (load case, surface, grade) and the display units. */
-import { SURFACE_IDS, SURFACES, type LoadCase, type SurfaceId } from '@/physics'
+import { LOAD_CASE_LABELS, SURFACE_IDS, SURFACES, type LoadCase, type SurfaceId } from '@/physics'
 import type { UnitSystem } from './units'
-
-export const LOAD_CASE_LABELS: Record<LoadCase, string> = {
-  empty: 'Empty (kerb mass)',
-  laden: 'Laden (gross mass)',
-  'trailer-empty': 'With empty semitrailer',
-  'trailer-laden': 'With laden semitrailer',
-}
 
 export interface OverlayChoice {
   loadCase: LoadCase

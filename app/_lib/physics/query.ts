@@ -4,13 +4,11 @@
  * shared error mapper does not know the physics module, and a bad input is the caller's fault).
  */
 import { z } from 'zod'
-import { loadCasesFor, PhysicsInputError, SURFACE_IDS, type LoadCase, type SurfaceId, type VehicleParams } from '@/physics'
+import { LOAD_CASE_IDS, loadCasesFor, PhysicsInputError, SURFACE_IDS, type LoadCase, type SurfaceId, type VehicleParams } from '@/physics'
 import { ValidationError } from '../http/errors'
 
-const LOAD_CASES = ['empty', 'laden', 'trailer-empty', 'trailer-laden'] as const
-
-export const loadCaseField = z.enum(LOAD_CASES, { error: `loadCase must be one of ${LOAD_CASES.join(', ')}` })
-export const surfaceField = z.enum(SURFACE_IDS as [SurfaceId, ...SurfaceId[]], { error: `surface must be one of ${SURFACE_IDS.join(', ')}` })
+export const loadCaseField = z.enum(LOAD_CASE_IDS, { error: `loadCase must be one of ${LOAD_CASE_IDS.join(', ')}` })
+export const surfaceField = z.enum(SURFACE_IDS, { error: `surface must be one of ${SURFACE_IDS.join(', ')}` })
 /** Road grade in %, uphill > 0; ±30 % covers any site road a truck should drive. */
 export const gradePctField = z.coerce.number({ error: 'gradePct must be a number (%)' }).min(-30, 'gradePct must be at least −30 %').max(30, 'gradePct must be at most 30 %')
 

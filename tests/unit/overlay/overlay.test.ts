@@ -1,7 +1,7 @@
 // The physics overlay checked against values computed by hand in the test from the published formulas.
 import { describe, expect, it } from 'vitest'
 import { mapOverlay } from '@/physics/overlay'
-import type { TorqueMap, VehicleParams } from '@/physics'
+import type { MapTable, VehicleParams } from '@/physics'
 import { rigid6x4 } from '@/tests/unit/physics/fixtures'
 
 // Standard gravity, exact by definition (3rd CGPM 1901; NIST SP 330).
@@ -32,7 +32,7 @@ const mf = (k: number, c: { B: number; C: number; D: number; E: number }) => {
   return c.D * Math.sin(c.C * Math.atan(x - c.E * (x - Math.atan(x))))
 }
 
-function driveMap(torques: number[]): TorqueMap {
+function driveMap(torques: number[]): MapTable {
   const colAxis = [0, 5, 10, 20]
   return { kind: 'drive', rowAxis: torques.map((_, i) => i * (100 / (torques.length - 1))), colAxis, values: torques.map((t) => colAxis.map(() => t)) }
 }
@@ -51,7 +51,7 @@ describe('mapOverlay: traction-limit torque per speed', () => {
   })
 
   it('gives the regen (lock-up) limit for a regen map, as a braking magnitude', () => {
-    const map: TorqueMap = { kind: 'regen', rowAxis: [0, 100], colAxis: [10, 40], values: [[100, 100], [200, 200]] }
+    const map: MapTable = { kind: 'regen', rowAxis: [0, 100], colAxis: [10, 40], values: [[100, 100], [200, 200]] }
     const o = mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'ice', map })
     expect(o.tractionLimitBySpeed[0].tractionLimitNm).toBeCloseTo(regenTorque(regenLimitN(0.1)), 6)
   })

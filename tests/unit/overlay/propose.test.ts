@@ -1,9 +1,9 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { proposeTractionSafe } from '@/physics/overlay-propose'
-import { PhysicsInputError, type TorqueMap } from '@/physics'
+import { PhysicsInputError, type MapTable } from '@/physics'
 
-const drive = (values: number[][]): TorqueMap => ({ kind: 'drive', rowAxis: values.map((_, i) => i * 10), colAxis: values[0].map((_, j) => j * 10), values })
+const drive = (values: number[][]): MapTable => ({ kind: 'drive', rowAxis: values.map((_, i) => i * 10), colAxis: values[0].map((_, j) => j * 10), values })
 
 describe('proposeTractionSafe', () => {
   it('lowers cells above the ceiling to limit × (1 − margin), leaves the others alone', () => {
@@ -25,7 +25,7 @@ describe('proposeTractionSafe', () => {
   })
 
   it('only caps a regen map (a fall with brake pedal may be deliberate)', () => {
-    const map: TorqueMap = { kind: 'regen', rowAxis: [0, 50, 100], colAxis: [10], values: [[900], [400], [2000]] }
+    const map: MapTable = { kind: 'regen', rowAxis: [0, 50, 100], colAxis: [10], values: [[900], [400], [2000]] }
     expect(proposeTractionSafe(map, [1000], 0).table.values).toEqual([[900], [400], [1000]])
   })
 

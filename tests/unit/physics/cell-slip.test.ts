@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { cellSlip, loadCasesFor, peakSlip, prepareCellSlip, slipGrid, SURFACES, SURFACE_IDS, tractionLimitTorqueBySpeed, type TorqueMap } from '@/physics'
+import { cellSlip, loadCasesFor, peakSlip, prepareCellSlip, slipGrid, SURFACES, SURFACE_IDS, tractionLimitTorqueBySpeed, type MapTable } from '@/physics'
 import { linearDriveMap, regenMap, tractor } from './fixtures'
 
 const g = 9.80665
@@ -72,7 +72,7 @@ describe('slipGrid and tractionLimitTorqueBySpeed', () => {
   })
   it('is fast: 32×32 cells × 5 surfaces × 4 load cases well under 2 s', () => {
     const axis = Array.from({ length: 32 }, (_, i) => i * 3.2)
-    const map: TorqueMap = { kind: 'drive', rowAxis: axis, colAxis: axis, values: axis.map((p) => axis.map(() => 30 * p)) }
+    const map: MapTable = { kind: 'drive', rowAxis: axis, colAxis: axis, values: axis.map((p) => axis.map(() => 30 * p)) }
     const t0 = performance.now()
     let cells = 0
     for (const id of SURFACE_IDS) for (const lc of loadCasesFor(tractor)) cells += slipGrid({ vehicle: tractor, loadCase: lc, surface: id, ...map }).flat().length

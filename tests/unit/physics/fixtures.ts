@@ -1,6 +1,6 @@
 /** Invented, generic test vehicles (no real product): a 4×2 e-tractor with a semitrailer and a 6×4 rigid truck. */
 import type { VehicleParams } from '@/physics'
-import type { TorqueMap } from '@/physics'
+import type { MapTable } from '@/physics'
 
 export const tractor: VehicleParams = {
   axleLayout: '4x2',
@@ -41,14 +41,14 @@ export const tractor: VehicleParams = {
 export const rigid6x4: VehicleParams = { ...tractor, axleLayout: '6x4', wheelbaseM: 5.2, emptyCgToFrontAxleM: 2.4, ladenCgToFrontAxleM: 3.4, trailer: null }
 
 /** A flat drive map: torque ∝ pedal, `peakNm` at 100 %. */
-export function linearDriveMap(peakNm: number): TorqueMap {
+export function linearDriveMap(peakNm: number): MapTable {
   const rowAxis = [0, 25, 50, 75, 100]
   const colAxis = [0, 10, 20, 40, 60, 90]
   return { kind: 'drive', rowAxis, colAxis, values: rowAxis.map((p) => colAxis.map(() => (peakNm * p) / 100)) }
 }
 
 /** A regen map whose 0 % row brakes with `liftOffNm` above 10 km/h, fading to 0 at standstill. */
-export function regenMap(liftOffNm: number): TorqueMap {
+export function regenMap(liftOffNm: number): MapTable {
   const rowAxis = [0, 50, 100]
   const colAxis = [0, 5, 10, 40, 90]
   const fade = [0, 0.5, 1, 1, 1]

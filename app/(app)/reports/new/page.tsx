@@ -2,7 +2,7 @@ import { idOrNull } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { listMaps } from '@/db/queries/maps'
 import { listPrograms } from '@/db/queries/programs'
-import { loadCasesFor } from '@/physics/vehicle'
+import { loadCasesFor } from '@/physics/load-cases'
 import { ReportFormLoader as ReportForm } from '../report-form-loader'
 
 export const metadata = { title: 'File a drive report' }

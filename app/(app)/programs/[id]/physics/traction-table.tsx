@@ -2,7 +2,7 @@
 /** Traction and regen limits of the drive axle per surface and load case, from the traction route. */
 import { useQuery } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
-import { LOAD_CASE_LABELS } from '@/app/_components/plots/overlay-controls'
+import { LOAD_CASE_LABELS } from '@/physics/load-cases'
 import { fmt0, fmt1, type PlotUnits } from '@/app/_components/plots/units'
 import type { TractionRow } from '@/app/_lib/physics/traction'
 

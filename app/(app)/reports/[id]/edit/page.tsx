@@ -4,7 +4,7 @@ import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { getReport } from '@/db/queries/reports'
 import { listMaps } from '@/db/queries/maps'
 import { listPrograms } from '@/db/queries/programs'
-import { loadCasesFor } from '@/physics/vehicle'
+import { loadCasesFor } from '@/physics/load-cases'
 import { reportInputSchema } from '@/app/_schemas/report'
 import { ReportFormLoader as ReportForm } from '../../report-form-loader'
 

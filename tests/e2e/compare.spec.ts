@@ -1,12 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { DEMO, signIn } from './helpers'
-
-/** A demo map's id, read from the map list (ids depend on the seed order). */
-async function mapId(page: Page, name: string): Promise<number> {
-  await page.goto('/maps')
-  const href = await page.getByRole('link', { name, exact: true }).first().getAttribute('href')
-  return Number(href?.split('/')[2])
-}
+import { DEMO, mapIdByName, signIn } from './helpers'
 
 const PLOT_WAIT = 30_000
 
@@ -19,7 +12,7 @@ test.describe('comparing two revisions', () => {
 
   test('shows both surfaces, the difference and the changes, and the slip heat map follows the load case', async ({ page }) => {
     await signIn(page, DEMO.calib)
-    const site = await mapId(page, 'Site drive')
+    const site = await mapIdByName(page, 'Site drive')
     await page.goto(`/maps/compare?a=${site}:2&b=${site}:3&loadCase=empty&surface=gravel`)
     await expect(page.getByRole('heading', { name: 'Compare two revisions' })).toBeVisible()
     await expect(page.getByRole('note')).toContainText('closed course')
@@ -62,7 +55,7 @@ test.describe('comparing two revisions', () => {
     // WebGL runs in software in headless Chromium, so every drag step redraws slowly.
     test.setTimeout(120_000)
     await signIn(page, DEMO.lead)
-    const site = await mapId(page, 'Site drive')
+    const site = await mapIdByName(page, 'Site drive')
     await page.goto(`/maps/compare?a=${site}:1&b=${site}:3`)
     const first = page.locator('[data-testid="compare-surfaces"] .js-plotly-plot').first()
     await expect(first.locator('.gl-container canvas')).toBeVisible({ timeout: PLOT_WAIT })
@@ -81,8 +74,8 @@ test.describe('comparing two revisions', () => {
 
   test('refuses to compare a drive map with a regen map, with the reason', async ({ page }) => {
     await signIn(page, DEMO.driver)
-    const drive = await mapId(page, 'Site drive')
-    const regen = await mapId(page, 'Site regen')
+    const drive = await mapIdByName(page, 'Site drive')
+    const regen = await mapIdByName(page, 'Site regen')
     await page.goto(`/maps/compare?a=${drive}:1&b=${regen}:1`)
     await expect(page.getByRole('alert').filter({ hasText: 'is a drive map' })).toContainText('is a drive map and “Site regen” is a regen map')
     await expect(page.locator('.js-plotly-plot')).toHaveCount(0)
@@ -90,7 +83,7 @@ test.describe('comparing two revisions', () => {
 
   test('an engineer proposes a traction-safe draft and saves it as a new revision', async ({ page }) => {
     await signIn(page, DEMO.calib)
-    const road = await mapId(page, 'Road drive')
+    const road = await mapIdByName(page, 'Road drive')
     await page.goto(`/maps/compare?a=${road}:1&b=${road}:2&loadCase=empty&surface=gravel`)
     await page.getByRole('button', { name: 'Propose a traction-safe draft' }).click()
     await expect(page.getByTestId('proposal-summary')).toContainText('cells lowered')

@@ -1,4 +1,5 @@
-import { expect, type Page } from '@playwright/test'
+// Everything the e2e specs share: demo accounts, signing in, finding demo maps, driving the grid editor.
+import { expect, type Browser, type Page } from '@playwright/test'
 
 export const DEMO_PASSWORD = 'mapwright-demo'
 
@@ -18,10 +19,28 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await expect(page.getByRole('heading', { name: /^Welcome,/ })).toBeVisible({ timeout: 20_000 })
 }
 
-/** A grid cell of the map editor by grid coordinates (row 0 = speed breakpoints, column 0 = pedal breakpoints). */
+/** A page in a browser context of its own (its own cookies), signed in as `email`: a second person at work. */
+export async function signedInPage(browser: Browser, email: string): Promise<Page> {
+  const page = await (await browser.newContext()).newPage()
+  await signIn(page, email)
+  return page
+}
+
+/**
+ * A grid cell of the map editor by grid coordinates (row 0 = speed breakpoints, column 0 = pedal
+ * breakpoints). The breakpoint row and column stay in view while scrolling, so they are drawn in
+ * the grid's frozen overlays rather than the main table.
+ */
 export function gridCell(page: Page, row: number, col: number) {
   const layer = row === 0 && col === 0 ? 'ht_clone_top_inline_start_corner' : row === 0 ? 'ht_clone_top' : col === 0 ? 'ht_clone_inline_start' : 'ht_master'
   return page.locator(`.${layer} [data-cell="${row}-${col}"]`)
+}
+
+/** A demo map's id from the maps list without opening it (ids depend on the seed order). */
+export async function mapIdByName(page: Page, name: string): Promise<number> {
+  await page.goto('/maps')
+  const href = await page.getByRole('link', { name, exact: true }).first().getAttribute('href')
+  return Number(href?.split('/')[2])
 }
 
 /** Open a map's notebook from the maps list; returns its id. */
@@ -32,16 +51,47 @@ export async function openMapByName(page: Page, name: string): Promise<number> {
   return Number(new URL(page.url()).pathname.split('/')[2])
 }
 
+/** Open the grid editor of a demo map; returns the map id and the revision the draft starts from. */
+export async function openEditor(page: Page, name: string): Promise<{ id: number; base: number }> {
+  const id = await openMapByName(page, name)
+  await page.goto(`/maps/${id}/edit`)
+  await expect(gridCell(page, 1, 1)).toBeVisible()
+  const base = Number(await page.getByTestId('base-revision').textContent())
+  return { id, base }
+}
+
+/** Select a cell, type a value and confirm it, as a calibrator does. */
+export async function typeInto(page: Page, row: number, col: number, value: string) {
+  await gridCell(page, row, col).click()
+  await page.keyboard.type(value)
+  await page.keyboard.press('Enter')
+}
+
+/** Paste tab-separated text at the selected cell through a real paste event. */
+export async function paste(page: Page, text: string) {
+  await page.evaluate((t) => {
+    const dt = new DataTransfer()
+    dt.setData('text/plain', t)
+    const target = document.activeElement ?? document.body
+    target.dispatchEvent(new ClipboardEvent('paste', { clipboardData: dt, bubbles: true, cancelable: true }))
+  }, text)
+}
+
 /** In the editor: change one cell and save a revision with a message; returns the new revision number. */
 export async function editAndSave(page: Page, mapId: number, row: number, col: number, value: string, message: string): Promise<number> {
   await page.goto(`/maps/${mapId}/edit`)
   await expect(gridCell(page, row, col)).toBeVisible()
   const base = Number(await page.getByTestId('base-revision').textContent())
-  await gridCell(page, row, col).click()
-  await page.keyboard.type(value)
-  await page.keyboard.press('Enter')
+  await typeInto(page, row, col, value)
   await page.getByLabel('Message (why)').fill(message)
   await page.getByRole('button', { name: 'Save revision' }).click()
   await expect(page).toHaveURL(new RegExp(`/maps/${mapId}\\?saved=${base + 1}$`))
   return base + 1
+}
+
+/** The review page of revision `n` of a map, through the notebook's history table. */
+export async function openReview(page: Page, mapId: number, n: number) {
+  await page.goto(`/maps/${mapId}`)
+  await page.getByTestId(`history-row-${n}`).getByRole('link', { name: 'Review' }).click()
+  await expect(page.getByRole('heading', { level: 1 })).toContainText(`r${n}`)
 }

@@ -1,48 +1,5 @@
-import { expect, test, type Page } from '@playwright/test'
-import { DEMO, signIn } from './helpers'
-
-/** Open a demo map's notebook from the map list and return its id. */
-async function openMap(page: Page, name: string): Promise<number> {
-  await page.goto('/maps')
-  await page.getByRole('link', { name, exact: true }).first().click()
-  await expect(page).toHaveURL(/\/maps\/\d+$/)
-  return Number(new URL(page.url()).pathname.split('/')[2])
-}
-
-/**
- * A grid cell by grid coordinates (row 0 = speed breakpoints, column 0 = pedal breakpoints). The
- * breakpoint row and column stay in view while scrolling, so they are drawn in the grid's frozen
- * overlays rather than the main table.
- */
-function cell(page: Page, row: number, col: number) {
-  const layer = row === 0 && col === 0 ? 'ht_clone_top_inline_start_corner' : row === 0 ? 'ht_clone_top' : col === 0 ? 'ht_clone_inline_start' : 'ht_master'
-  return page.locator(`.${layer} [data-cell="${row}-${col}"]`)
-}
-
-async function openEditor(page: Page, name: string) {
-  const id = await openMap(page, name)
-  await page.goto(`/maps/${id}/edit`)
-  await expect(cell(page, 1, 1)).toBeVisible()
-  const base = Number(await page.getByTestId('base-revision').textContent())
-  return { id, base }
-}
-
-/** Select a cell, type a value and confirm it, as a calibrator does. */
-async function typeInto(page: Page, row: number, col: number, value: string) {
-  await cell(page, row, col).click()
-  await page.keyboard.type(value)
-  await page.keyboard.press('Enter')
-}
-
-/** Paste tab-separated text at the selected cell through a real paste event. */
-async function paste(page: Page, text: string) {
-  await page.evaluate((t) => {
-    const dt = new DataTransfer()
-    dt.setData('text/plain', t)
-    const target = document.activeElement ?? document.body
-    target.dispatchEvent(new ClipboardEvent('paste', { clipboardData: dt, bubbles: true, cancelable: true }))
-  }, text)
-}
+import { expect, test } from '@playwright/test'
+import { DEMO, gridCell, openEditor, openMapByName, paste, signIn, typeInto } from './helpers'
 
 test.describe('map grid editor', () => {
   test('a calibration engineer edits a cell, saves with a message and sees the revision in the history', async ({ page }) => {
@@ -50,7 +7,7 @@ test.describe('map grid editor', () => {
     const { id, base } = await openEditor(page, 'Site drive')
     const value = String(600 + base) // differs from the stored value whatever ran before
     await typeInto(page, 12, 13, value)
-    await expect(cell(page, 12, 13)).toHaveText(value)
+    await expect(gridCell(page, 12, 13)).toHaveText(value)
     await expect(page.getByTestId('draft-state')).toHaveText(`Unsaved edits on top of revision ${base}`)
     await page.getByRole('button', { name: 'Save revision' }).click()
     await expect(page.getByText('A message saying why is required')).toBeVisible()
@@ -64,20 +21,20 @@ test.describe('map grid editor', () => {
   test('pasting a block (with a pedal breakpoint) changes those cells, and Ctrl+Z undoes the paste', async ({ page }) => {
     await signIn(page, DEMO.calib)
     await openEditor(page, 'Road drive')
-    const before = [await cell(page, 4, 0).textContent(), await cell(page, 4, 1).textContent(), await cell(page, 5, 2).textContent()]
-    await cell(page, 4, 0).click()
+    const before = [await gridCell(page, 4, 0).textContent(), await gridCell(page, 4, 1).textContent(), await gridCell(page, 5, 2).textContent()]
+    await gridCell(page, 4, 0).click()
     await paste(page, '25\t311\t322\n31\t333\t344')
-    await expect(cell(page, 4, 0)).toHaveText('25')
-    await expect(cell(page, 4, 1)).toHaveText('311')
-    await expect(cell(page, 5, 0)).toHaveText('31')
-    await expect(cell(page, 5, 2)).toHaveText('344')
+    await expect(gridCell(page, 4, 0)).toHaveText('25')
+    await expect(gridCell(page, 4, 1)).toHaveText('311')
+    await expect(gridCell(page, 5, 0)).toHaveText('31')
+    await expect(gridCell(page, 5, 2)).toHaveText('344')
     await page.locator('body').click({ position: { x: 5, y: 5 } })
     await page.keyboard.press('Control+z')
-    await expect(cell(page, 4, 0)).toHaveText(before[0] ?? '')
-    await expect(cell(page, 4, 1)).toHaveText(before[1] ?? '')
-    await expect(cell(page, 5, 2)).toHaveText(before[2] ?? '')
+    await expect(gridCell(page, 4, 0)).toHaveText(before[0] ?? '')
+    await expect(gridCell(page, 4, 1)).toHaveText(before[1] ?? '')
+    await expect(gridCell(page, 5, 2)).toHaveText(before[2] ?? '')
     await page.keyboard.press('Control+Shift+z')
-    await expect(cell(page, 4, 1)).toHaveText('311')
+    await expect(gridCell(page, 4, 1)).toHaveText('311')
   })
 
   test('a value above the motor envelope is marked and listed as a finding', async ({ page }) => {
@@ -86,28 +43,28 @@ test.describe('map grid editor', () => {
     await typeInto(page, 6, 4, '9999')
     const finding = page.getByTestId('findings-list').getByText(/9,999 N·m exceeds the motor envelope/)
     await expect(finding).toBeVisible()
-    await expect(cell(page, 6, 4)).toHaveClass(/mw-error/)
-    await expect(cell(page, 6, 4)).toHaveAttribute('title', /exceeds the motor envelope/)
+    await expect(gridCell(page, 6, 4)).toHaveClass(/mw-error/)
+    await expect(gridCell(page, 6, 4)).toHaveAttribute('title', /exceeds the motor envelope/)
     // The same finding in imperial units, converted for display only.
     await page.getByText('lbf·ft, mph').click()
     await expect(page.getByTestId('findings-list').getByText(/7,374\.\d lbf·ft exceeds the motor envelope/)).toBeVisible()
-    await expect(cell(page, 6, 4)).toHaveText('7374.9')
+    await expect(gridCell(page, 6, 4)).toHaveText('7374.9')
   })
 
   test('unsaved edits survive a reload and can be discarded', async ({ page }) => {
     await signIn(page, DEMO.calib)
     await openEditor(page, 'Road regen')
-    const original = await cell(page, 3, 5).textContent()
+    const original = await gridCell(page, 3, 5).textContent()
     await typeInto(page, 3, 5, '321')
-    await expect(cell(page, 3, 5)).toHaveText('321')
+    await expect(gridCell(page, 3, 5)).toHaveText('321')
     await page.reload()
     await expect(page.getByText(/Restored unsaved edits from/)).toBeVisible()
-    await expect(cell(page, 3, 5)).toHaveText('321')
+    await expect(gridCell(page, 3, 5)).toHaveText('321')
     page.once('dialog', (d) => void d.accept())
     await page.getByRole('button', { name: 'Discard edits' }).click()
-    await expect(cell(page, 3, 5)).toHaveText(original ?? '')
+    await expect(gridCell(page, 3, 5)).toHaveText(original ?? '')
     await page.reload()
-    await expect(cell(page, 1, 1)).toBeVisible()
+    await expect(gridCell(page, 1, 1)).toBeVisible()
     await expect(page.getByText(/Restored unsaved edits from/)).toHaveCount(0)
   })
 
@@ -132,7 +89,7 @@ test.describe('map grid editor', () => {
     const conflict = page.getByRole('alert', { name: 'Save conflict' })
     await expect(conflict).toContainText(`Revision ${base + 1} was saved after`)
     await expect(conflict).toContainText('changes 1 of')
-    await expect(cell(page, 2, 6)).toHaveText(value)
+    await expect(gridCell(page, 2, 6)).toHaveText(value)
     await page.getByRole('button', { name: `Rebase my edits on revision ${base + 1}` }).click()
     await page.getByRole('button', { name: 'Save revision' }).click()
     await expect(page).toHaveURL(new RegExp(`/maps/${id}\\?saved=${base + 2}$`))
@@ -140,19 +97,19 @@ test.describe('map grid editor', () => {
 
   test('a test driver sees a revision read-only, and the API refuses a save', async ({ page }) => {
     await signIn(page, DEMO.driver)
-    const id = await openMap(page, 'Site drive')
+    const id = await openMapByName(page, 'Site drive')
     await expect(page.getByRole('link', { name: 'Edit', exact: true })).toHaveCount(0)
     await page.getByTestId('history-row-1').getByRole('link', { name: 'Open' }).click()
     await expect(page).toHaveURL(new RegExp(`/maps/${id}/revisions/1$`))
-    await expect(cell(page, 1, 1)).toBeVisible()
+    await expect(gridCell(page, 1, 1)).toBeVisible()
     await expect(page.getByRole('link', { name: 'Start a new draft from this revision' })).toHaveCount(0)
     await expect(page.getByRole('button', { name: 'Save revision' })).toHaveCount(0)
     await expect(page.getByRole('toolbar', { name: 'Map operations' })).toHaveCount(0)
     await expect(page.getByRole('link', { name: 'CSV' })).toBeVisible()
     // Typing into the read-only grid changes nothing.
-    const before = await cell(page, 2, 2).textContent()
+    const before = await gridCell(page, 2, 2).textContent()
     await typeInto(page, 2, 2, '777')
-    await expect(cell(page, 2, 2)).toHaveText(before ?? '')
+    await expect(gridCell(page, 2, 2)).toHaveText(before ?? '')
     const res = await page.request.post(`/api/maps/${id}/revisions`, {
       data: { parentNumber: 1, message: 'not allowed', notes: '', table: { kind: 'drive', rowAxis: [0, 100], colAxis: [0, 10], values: [[0, 0], [1, 1]] } },
     })

@@ -1,30 +1,17 @@
-import { expect, test, type Browser, type Page } from '@playwright/test'
+import { expect, test } from '@playwright/test'
 import { strFromU8, unzipSync } from 'fflate'
-import { DEMO, editAndSave, openMapByName, signIn } from './helpers'
-
-async function as(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage()
-  await signIn(page, email)
-  return page
-}
-
-/** The review page of revision `n` of a map, through the notebook's history table. */
-async function openReview(page: Page, mapId: number, n: number) {
-  await page.goto(`/maps/${mapId}`)
-  await page.getByTestId(`history-row-${n}`).getByRole('link', { name: 'Review' }).click()
-  await expect(page.getByRole('heading', { level: 1 })).toContainText(`r${n}`)
-}
+import { DEMO, editAndSave, openMapByName, openReview, signedInPage } from './helpers'
 
 test('through three roles: submit, send back, resubmit, drive report, approve, release, package', async ({ browser }) => {
   test.setTimeout(180_000)
-  const engineer = await as(browser, DEMO.calib)
+  const engineer = await signedInPage(browser, DEMO.calib)
   const mapId = await openMapByName(engineer, 'Road regen')
   const first = await editAndSave(engineer, mapId, 2, 6, '700', 'More lift-off regen at 15 km/h')
   await openReview(engineer, mapId, first)
   await engineer.getByRole('button', { name: 'Submit for review' }).click()
   await expect(engineer.getByTestId('revision-state')).toHaveText('Waiting for review')
 
-  const lead = await as(browser, DEMO.lead)
+  const lead = await signedInPage(browser, DEMO.lead)
   await lead.goto('/review')
   await lead.getByRole('link', { name: new RegExp(`Road regen r${first}$`) }).click()
   await lead.getByRole('button', { name: 'Send back' }).click()
@@ -38,7 +25,7 @@ test('through three roles: submit, send back, resubmit, drive report, approve, r
   await engineer.getByRole('button', { name: 'Submit for review' }).click()
   await expect(engineer.getByTestId('revision-state')).toHaveText('Waiting for review')
 
-  const driver = await as(browser, DEMO.driver)
+  const driver = await signedInPage(browser, DEMO.driver)
   await driver.goto(`/reports/new?map=${mapId}`)
   const option = driver.locator('#revision option', { hasText: new RegExp(`^r${second} `) })
   await expect(option).toHaveCount(1)

@@ -5,7 +5,6 @@
 import { C_SCALE, headerCrcs, toFixedTable } from './c-fixed-point'
 import { cIdentifier, commentText } from './c-identifier'
 import { SAFETY_CAUTION } from './caution'
-import { checksum as contentChecksum } from './checksum'
 import { MapInputError } from './errors'
 import type { MapTable } from './table'
 import { validate } from './validate'
@@ -18,8 +17,11 @@ export interface CHeaderMeta {
   /** Human names, written in the comment block only. */
   mapName: string
   vehicleProgram: string
-  /** Content checksum (see checksum.ts); computed when absent, and must match when given. */
-  checksum?: string
+  /**
+   * Content checksum, 64 hex digits: SHA-256 of canonicalJson(table). Hashing runs on the server
+   * (db/checksum.ts, whose verifiedChecksum also checks a stored checksum against the content).
+   */
+  checksum: string
   /** When the header was made; omitted by default so the same map gives the same file. */
   generatedAt?: string | Date
 }
@@ -38,8 +40,8 @@ function rows(nums: number[], per: number, indent: string): string {
  * round(physical × 10), halves away from zero. Defines <NAME>_ROWS, _COLS, _SCALE, _REVISION,
  * _IS_REGEN, _VALUES_CRC32 and _TABLE_CRC32; arrays <name>_pedal_axis, _speed_axis, _values.
  * Throws MapInputError for a map with validate errors (structure, pedal order, negative regen),
- * a revision that is not a whole number, a checksum mismatch, or a value that cannot be stored.
- * @example toCHeader(t, { name: 'drive main', revision: 3, mapName: 'Drive main', vehicleProgram: '6x4 tractor' })
+ * a revision that is not a whole number, a checksum that is not 64 hex digits, or a value that cannot be stored.
+ * @example toCHeader(t, { name: 'drive main', revision: 3, mapName: 'Drive main', vehicleProgram: '6x4 tractor', checksum: checksum(t) })
  *          // contains "static const int32_t drive_main_values[DRIVE_MAIN_ROWS][DRIVE_MAIN_COLS]"
  */
 export function toCHeader(table: MapTable, meta: CHeaderMeta): string {
@@ -49,9 +51,9 @@ export function toCHeader(table: MapTable, meta: CHeaderMeta): string {
   const errors = validate(table).filter((f) => f.severity === 'error')
   if (errors.length > 0)
     throw new MapInputError('invalid-table', `the map has ${errors.length} error(s) and cannot be exported; first: ${errors[0].message}`)
-  const sum = contentChecksum(table)
-  if (meta.checksum !== undefined && meta.checksum.toLowerCase() !== sum)
-    throw new MapInputError('checksum-mismatch', `the given checksum ${commentText(meta.checksum, 80)} does not match the table content (${sum})`)
+  const sum = meta.checksum.toLowerCase()
+  if (!/^[0-9a-f]{64}$/.test(sum))
+    throw new MapInputError('bad-checksum', `the checksum must be 64 hex digits (SHA-256), got ${commentText(meta.checksum, 80)}`)
   const id = cIdentifier(meta.name)
   const ID = id.toUpperCase()
   const fixed = toFixedTable(table)

@@ -1,9 +1,9 @@
 /**
- * A stable fingerprint of a map's content, so two revisions, a file and a flashed header can
- * be matched without comparing tables cell by cell.
+ * The canonical text of a map's content, from which the server computes the revision checksum
+ * (db/checksum.ts, SHA-256), so two revisions, a file and a flashed header can be matched
+ * without comparing tables cell by cell.
  */
 import { MapInputError } from './errors'
-import { sha256Hex } from './sha256'
 import type { MapTable } from './table'
 
 /**
@@ -20,12 +20,4 @@ export function canonicalJson(table: MapTable): string {
   }
   const list = (a: readonly number[]) => '[' + a.map(num).join(',') + ']'
   return `{"kind":${JSON.stringify(table.kind)},"rowAxis":${list(table.rowAxis)},"colAxis":${list(table.colAxis)},"values":[${table.values.map(list).join(',')}]}`
-}
-
-/**
- * SHA-256 (hex) of the UTF-8 bytes of canonicalJson(table).
- * @example checksum(t) === sha256Hex(canonicalJson(t)) // true
- */
-export function checksum(table: MapTable): string {
-  return sha256Hex(canonicalJson(table))
 }

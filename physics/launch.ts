@@ -2,8 +2,9 @@
 import { checkPedalTrace, pedalAt, type PedalTrace } from './pedal'
 import { runSimulation, type SimOptions, type SimSample } from './sim-core'
 import type { MapTable } from './table'
-import { checkMap, lookup } from './table-lookup'
-import { PhysicsInputError, requireNonNegative } from './errors'
+import { lookup } from './table-lookup'
+import { requireNonNegative } from './errors'
+import { commonSummary, startOfRun } from './map-run'
 
 /** Launch inputs. `map.kind` must be `'drive'`; map values are motor-shaft torque, N·m. */
 export interface LaunchOptions extends SimOptions {
@@ -36,22 +37,18 @@ export interface LaunchResult { samples: SimSample[]; summary: LaunchSummary }
  *   pedal: { kind: 'step', pedalPct: 100 }, durationS: 30 }).summary.timeTo50KmhS
  */
 export function simulateLaunch(o: LaunchOptions): LaunchResult {
-  if (o.map.kind !== 'drive') throw new PhysicsInputError('map.kind', 'a launch needs a drive map')
-  checkMap(o.map)
+  const v0 = startOfRun(o.map, 'drive', 'launch', o.initialSpeedKmh ?? 0, requireNonNegative)
   checkPedalTrace(o.pedal)
-  const v0 = requireNonNegative('initialSpeedKmh', o.initialSpeedKmh ?? 0) / 3.6
   const run = runSimulation(o, (t) => pedalAt(o.pedal, t), (p, kmh) => lookup(o.map, p, kmh), v0, [30, 50])
   return {
     samples: run.samples,
     summary: {
+      ...commonSummary(run),
       timeTo30KmhS: run.crossings[0],
       timeTo50KmhS: run.crossings[1],
-      finalSpeedKmh: run.samples[run.samples.length - 1].speedKmh,
       peakSlip: run.peakSlip,
-      tyrePeakSlip: run.tyrePeakSlip,
       timeBeyondPeakSlipS: run.timeBeyondPeakDriveS,
       peakAccelMps2: run.samples.reduce((m, s) => Math.max(m, s.accelMps2), 0),
-      peakJerkMps3: run.peakJerkMps3,
     },
   }
 }

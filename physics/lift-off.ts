@@ -1,8 +1,9 @@
 /** Lift-off (accelerator released) regen on the drive axle: the regen map's 0 % row brakes the drive wheels. */
 import { runSimulation, type SimOptions, type SimSample } from './sim-core'
 import type { MapTable } from './table'
-import { checkMap, lookup } from './table-lookup'
-import { PhysicsInputError, requirePositive } from './errors'
+import { lookup } from './table-lookup'
+import { requirePositive } from './errors'
+import { commonSummary, startOfRun } from './map-run'
 
 /** Lift-off inputs. `map.kind` must be `'regen'`; values are braking torque magnitudes at the motor shaft (≥ 0 = regen). */
 export interface LiftOffOptions extends SimOptions {
@@ -37,22 +38,18 @@ export interface LiftOffResult { samples: SimSample[]; summary: LiftOffSummary }
  *   initialSpeedKmh: 60, durationS: 10 }).summary.locks
  */
 export function simulateLiftOff(o: LiftOffOptions): LiftOffResult {
-  if (o.map.kind !== 'regen') throw new PhysicsInputError('map.kind', 'a lift-off needs a regen map')
-  checkMap(o.map)
-  const v0 = requirePositive('initialSpeedKmh', o.initialSpeedKmh) / 3.6
+  const v0 = startOfRun(o.map, 'regen', 'lift-off', o.initialSpeedKmh, requirePositive)
   const run = runSimulation(o, () => 0, (p, kmh) => -lookup(o.map, p, kmh), v0, [], o.stopSpeedKmh ?? 2)
   const locks = run.timeBeyondPeakBrakeS > 0
   return {
     samples: run.samples,
     summary: {
+      ...commonSummary(run),
       peakDecelMps2: run.samples.reduce((m, s) => Math.max(m, -s.accelMps2), 0),
       minSlip: run.minSlip,
-      tyrePeakSlip: run.tyrePeakSlip,
       locks,
       lockTimeS: run.firstLockS,
       timeBeyondPeakSlipS: run.timeBeyondPeakBrakeS,
-      finalSpeedKmh: run.samples[run.samples.length - 1].speedKmh,
-      peakJerkMps3: run.peakJerkMps3,
     },
   }
 }

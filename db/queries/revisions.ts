@@ -1,5 +1,6 @@
 import { and, desc, eq, lt, sql } from 'drizzle-orm'
-import { checksum, type MapTable } from '../../maps'
+import type { MapTable } from '../../maps'
+import { checksum } from '../checksum'
 import { getDb, type Db } from '../client'
 import { mapRevisions, maps, users } from '../schema'
 import { recordAudit } from './audit'

@@ -5,18 +5,7 @@
  * about √(p(1−p)/capacity) (≈ 0.0008 for p = 0.99 and 16 384 values).
  */
 import { quantileSorted } from 'simple-statistics'
-
-/** Deterministic 32-bit PRNG (mulberry32) returning [0, 1). */
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
+import { mulberry32 } from '../random'
 
 /** A reservoir of at most `capacity` values. */
 export interface Reservoir {

@@ -4,7 +4,7 @@
  * of a 24 × 24 table, on an in-memory PGlite; the three cases are measured round-robin in one run.
  */
 import { demoTractor } from '@/db/demo/programs'
-import { checksum } from '@/maps'
+import { checksum } from '@/db/checksum'
 import { figure, isMain, median, now, runStandalone, type BenchResult, type Figure } from './report'
 import { seededDriveMap } from './seeded'
 

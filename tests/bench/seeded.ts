@@ -1,18 +1,7 @@
-/** Seeded data shared by the benchmarks: a fixed-seed random source and a 32 × 32 / 24 × 24 drive map. */
+/** Seeded data shared by the benchmarks: a 32 × 32 / 24 × 24 drive map (random source: physics/random.ts). */
 import { limitsFromVehicle, motorEnvelopeAt, type MapTable } from '@/maps'
 import type { VehicleParams } from '@/physics'
-
-/** mulberry32: small, fast, and the same sequence on every machine. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
+import { mulberry32 } from '@/physics/random'
 
 /** Evenly spaced ascending axis from `lo` to `hi`, rounded to 0.1. */
 function axis(n: number, lo: number, hi: number): number[] {
@@ -24,7 +13,7 @@ function axis(n: number, lo: number, hi: number): number[] {
  * motor envelope, with a little seeded jitter (kept under the envelope and non-decreasing in pedal).
  */
 export function seededDriveMap(vehicle: VehicleParams, size: number, seed: number): MapTable {
-  const rnd = seededRandom(seed)
+  const rnd = mulberry32(seed)
   const limits = limitsFromVehicle(vehicle)
   const rowAxis = axis(size, 0, 100)
   const colAxis = axis(size, 0, 90)

@@ -6,7 +6,8 @@
 import { demoTractor } from '@/db/demo/programs'
 import { loadCasesFor, magicFormula, slipForForceRatio, slipGrid, SURFACE_IDS, SURFACES, type SolveStats } from '@/physics'
 import { figure, isMain, median, now, runStandalone, type BenchResult } from './report'
-import { seededDriveMap, seededRandom } from './seeded'
+import { mulberry32 } from '@/physics/random'
+import { seededDriveMap } from './seeded'
 
 const BENCH = 'slip-sweep'
 const SIZE = 32
@@ -36,7 +37,7 @@ export async function runSlipSweep(): Promise<BenchResult> {
         for (const c of row) if (c.driveAxleLoadN > 0) slipForForceRatio(c.wheelForceN / c.driveAxleLoadN, SURFACES[surface].coeffs, stats)
 
   // Magic Formula inputs: seeded slips across the rising branch and beyond, over all surfaces.
-  const rnd = seededRandom(7)
+  const rnd = mulberry32(7)
   const slips = Float64Array.from({ length: 4096 }, () => rnd() * 0.4)
   const coeffs = SURFACE_IDS.map((s) => SURFACES[s].coeffs)
   let sink = 0

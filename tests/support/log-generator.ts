@@ -5,6 +5,7 @@
  * some hard stops lock the wheels briefly. The first launch always spins and the first stop always locks,
  * so even a short log has one of each. Same options → byte-identical output.
  */
+import { mulberry32 } from '@/physics/random'
 
 /** Options; times s, rate Hz. */
 export interface LogGenOptions {
@@ -28,17 +29,6 @@ export const LOG_GEN_COLUMNS = [
 const R = 0.5 // wheel radius, m
 const G = 20 // overall ratio
 const FLOOR = 0.5 // slip floor, m/s (the physics slipRatio standstill rule)
-
-function mulberry32(seed: number): () => number {
-  let a = seed >>> 0
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0
-    let t = a
-    t = Math.imul(t ^ (t >>> 15), t | 1)
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61)
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296
-  }
-}
 
 type Phase = 'stand' | 'launch' | 'cruise' | 'liftoff' | 'brake'
 

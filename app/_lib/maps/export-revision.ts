@@ -1,5 +1,6 @@
 import type { MapWithProgram } from '@/db/queries/maps'
 import type { Revision } from '@/db/queries/revisions'
+import { verifiedChecksum } from '@/db/checksum'
 import { toCHeader, toCsv, toJson } from '@/maps'
 
 export const EXPORT_FORMATS = ['csv', 'json', 'c'] as const
@@ -20,7 +21,7 @@ export function exportRevision(map: MapWithProgram, rev: Revision, format: Expor
           revision: rev.number,
           mapName: map.name,
           vehicleProgram: map.programName,
-          checksum: rev.checksum,
+          checksum: verifiedChecksum(rev.table, rev.checksum),
         }),
         contentType: 'text/x-c; charset=utf-8',
         filename: `${base}.h`,

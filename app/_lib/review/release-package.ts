@@ -1,4 +1,5 @@
 import { strToU8, zipSync } from 'fflate'
+import { verifiedChecksum } from '@/db/checksum'
 import { toCHeader, toCsv, toJson } from '@/maps'
 import { SAFETY_CAUTION } from '@/app/_components/safety-caution'
 import type { RevisionContext } from './service'
@@ -26,7 +27,7 @@ export function releasePackage(ctx: RevisionContext, release: { approverName: st
     caution: SAFETY_CAUTION,
   }
   const files = {
-    [`${base}.h`]: strToU8(toCHeader(r.table, { name: `${map.name}_${map.kind}`, revision: r.number, mapName: map.name, vehicleProgram: map.programName, checksum: r.checksum })),
+    [`${base}.h`]: strToU8(toCHeader(r.table, { name: `${map.name}_${map.kind}`, revision: r.number, mapName: map.name, vehicleProgram: map.programName, checksum: verifiedChecksum(r.table, r.checksum) })),
     [`${base}.csv`]: strToU8(toCsv(r.table)),
     [`${base}.json`]: strToU8(toJson(r.table)),
     'manifest.json': strToU8(JSON.stringify(manifest, null, 2) + '\n'),

@@ -3,7 +3,8 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { afterAll, describe, expect, it } from 'vitest'
-import { checksum, cIdentifier, commentText, crc32, int32LeBytes, MapInputError, SAFETY_CAUTION, toCHeader, type CHeaderMeta, type MapTable } from '../../../maps'
+import { checksum, verifiedChecksum } from '@/db/checksum'
+import { cIdentifier, commentText, crc32, int32LeBytes, MapInputError, SAFETY_CAUTION, toCHeader, type CHeaderMeta, type MapTable } from '../../../maps'
 import { insideTable, small } from './fixtures'
 
 const table: MapTable = {
@@ -17,7 +18,7 @@ const table: MapTable = {
     [1800, 1700, 1400, 1000, 500],
   ],
 }
-const meta: CHeaderMeta = { name: 'drive main', revision: 7, mapName: 'Drive main', vehicleProgram: '6×4 tractor, 40 t' }
+const meta: CHeaderMeta = { name: 'drive main', revision: 7, mapName: 'Drive main', vehicleProgram: '6×4 tractor, 40 t', checksum: checksum(table) }
 
 /** Numbers inside `static const int32_t <array>[...] = { ... };`. */
 function arrayNumbers(header: string, array: string): number[] {
@@ -67,7 +68,7 @@ describe('toCHeader', () => {
   })
 
   it('gives the CRCs stated for the worked example in docs/map-formats.md', () => {
-    const doc = toCHeader(small(), { name: 'drive_example', revision: 1, mapName: 'Drive example', vehicleProgram: 'Example 4x2' })
+    const doc = toCHeader(small(), { name: 'drive_example', revision: 1, mapName: 'Drive example', vehicleProgram: 'Example 4x2', checksum: checksum(small()) })
     expect(define(doc, 'DRIVE_EXAMPLE_VALUES_CRC32')).toBe('0xA6ACF816u')
     expect(define(doc, 'DRIVE_EXAMPLE_TABLE_CRC32')).toBe('0x9C724DB3u')
     expect(checksum(small())).toBe('15c436cc04b9f54db17ee41dc6fa98e079dc1f171f95e154137d3643281fd736')
@@ -113,7 +114,7 @@ int main(void) {
   })
 
   it('sanitises names and comment text so any input still compiles', () => {
-    const odd = toCHeader(insideTable('regen'), { name: '3rd map */ #define x', revision: 0, mapName: 'Lift-off */ int x; /* ??/', vehicleProgram: 'Prüfstand\nline two' })
+    const odd = toCHeader(insideTable('regen'), { name: '3rd map */ #define x', revision: 0, mapName: 'Lift-off */ int x; /* ??/', vehicleProgram: 'Prüfstand\nline two', checksum: checksum(insideTable('regen')) })
     expect(define(odd, 'MAP_3RD_MAP_DEFINE_X_IS_REGEN')).toBe('1')
     expect(odd).not.toContain('*/ int')
     const r = spawnSync('gcc', ['-fsyntax-only', '-Wall', '-Werror', '-Wno-unused-variable', '-x', 'c', '-'], { input: odd, encoding: 'utf8' })
@@ -126,8 +127,9 @@ int main(void) {
     expect(() => toCHeader(bad, meta)).toThrow(expect.objectContaining({ code: 'invalid-table' }))
     expect(() => toCHeader(table, { ...meta, revision: 1.5 })).toThrow(MapInputError)
     expect(() => toCHeader(table, { ...meta, revision: -1 })).toThrow(/revision/)
-    expect(() => toCHeader(table, { ...meta, checksum: '00' })).toThrow(expect.objectContaining({ code: 'checksum-mismatch' }))
-    expect(toCHeader(table, { ...meta, checksum: checksum(table).toUpperCase() })).toBe(h)
+    expect(() => toCHeader(table, { ...meta, checksum: '00' })).toThrow(expect.objectContaining({ code: 'bad-checksum' }))
+    expect(() => verifiedChecksum(table, checksum(small()))).toThrow(expect.objectContaining({ code: 'checksum-mismatch' }))
+    expect(toCHeader(table, { ...meta, checksum: verifiedChecksum(table, checksum(table).toUpperCase()) })).toBe(h)
     expect(() => toCHeader({ ...table, colAxis: [0, 10.01, 10.04, 40, 80] }, meta)).toThrow(expect.objectContaining({ code: 'axis-resolution' }))
     expect(() => toCHeader({ ...table, values: table.values.map((r) => r.map((v) => v * 1e9)) }, meta)).toThrow(expect.objectContaining({ code: 'out-of-range' }))
   })

@@ -1,11 +1,12 @@
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { formatTime } from '@/app/_components/format'
 import { listAudit } from '@/db/queries/audit'
+import { AUDIT_READERS } from './readers'
 
 export const metadata = { title: 'Audit trail' }
 
 export default async function AuditPage(props: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  await requirePageUser(['admin', 'lead_engineer'])
+  await requirePageUser(AUDIT_READERS)
   const q = await props.searchParams
   const str = (k: string) => (typeof q[k] === 'string' && q[k] ? (q[k] as string) : undefined)
   const filter = { entityType: str('entityType'), action: str('action'), since: str('since') ? new Date(str('since')!) : undefined, until: str('until') ? new Date(str('until')!) : undefined, limit: 500 }

@@ -1,4 +1,4 @@
-import { relations, sql } from 'drizzle-orm'
+import { sql, type SQL } from 'drizzle-orm'
 import {
   bigint,
   boolean,
@@ -12,25 +12,41 @@ import {
   text,
   timestamp,
   uniqueIndex,
+  type PgColumn,
 } from 'drizzle-orm/pg-core'
-import type { VehicleParams } from '../physics/vehicle'
+// Relative imports: drizzle-kit loads this file without the `@/` alias.
+import type { MapKind, MapTable } from '../maps/table'
+import type { AnalysisResult } from '../physics/drive-log/types'
+import { SURFACE_IDS, type SurfaceId } from '../physics/surfaces'
+import { LOAD_CASE_IDS } from '../physics/load-cases'
+import type { LoadCase, VehicleParams } from '../physics/vehicle'
+import { LINK_KINDS, type LinkKind } from '../domain/one-time-links'
+import { LOG_STATUSES, type LogStatus } from '../domain/log-statuses'
+import { MAIL_STATUSES, type MailStatus } from '../domain/mail-statuses'
+import { SAFETY_STATES, type FlagSeverity, type SafetyState } from '../domain/report-safety'
+import { REVIEW_ACTIONS, type ReviewAction } from '../domain/review-actions'
+import { REVISION_STATES, type RevisionState } from '../domain/revision-states'
+import { ROLES, type Role } from '../domain/roles'
 
-import { ROLES, type Role } from './roles'
-
-export { ROLES, type Role }
-
-/** What a revision's stored table holds (the `maps/` MapTable shape). */
-export interface StoredTable {
-  kind: 'drive' | 'regen'
-  rowAxis: number[]
-  colAxis: number[]
-  values: number[][]
+/**
+ * `column in ('a', 'b', …)` for a CHECK constraint, built from the domain constants so the database
+ * refuses what the code does not know. Inlined as literals: a CHECK cannot take bind parameters.
+ */
+function oneOf(column: PgColumn, ids: readonly string[]): SQL {
+  return sql`${column} in (${sql.raw(ids.map((id) => `'${id.replace(/'/g, "''")}'`).join(', '))})`
 }
 
+/** What the release gate checks: surfaces and load cases, and the traction margin in %. */
 export interface ReleaseConditions {
-  surfaces: string[]
-  loadCases: string[]
+  surfaces: SurfaceId[]
+  loadCases: LoadCase[]
   marginPct: number
+}
+
+/** A gate exception the lead released anyway, with the reason given. */
+export interface Acknowledgement {
+  key: string
+  reason: string
 }
 
 export const users = pgTable(
@@ -47,7 +63,7 @@ export const users = pgTable(
   },
   (t) => [
     uniqueIndex('users_email_lower_idx').on(sql`lower(${t.email})`),
-    check('users_role_check', sql`${t.role} in ('admin', 'lead_engineer', 'calibration_engineer', 'test_driver')`),
+    check('users_role_check', oneOf(t.role, ROLES)),
   ],
 )
 
@@ -58,7 +74,6 @@ export const vehiclePrograms = pgTable(
     name: text('name').notNull(),
     description: text('description').notNull().default(''),
     params: jsonb('params').$type<VehicleParams>().notNull(),
-    /** What the release gate checks: surfaces and load cases, and the traction margin in %. */
     releaseConditions: jsonb('release_conditions')
       .$type<ReleaseConditions>()
       .notNull()
@@ -78,7 +93,7 @@ export const maps = pgTable(
       .notNull()
       .references(() => vehiclePrograms.id),
     name: text('name').notNull(),
-    kind: text('kind').$type<'drive' | 'regen'>().notNull(),
+    kind: text('kind').$type<MapKind>().notNull(),
     description: text('description').notNull().default(''),
     createdBy: integer('created_by').references(() => users.id),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
@@ -104,14 +119,15 @@ export const mapRevisions = pgTable(
       .references(() => users.id),
     message: text('message').notNull(),
     notes: text('notes').notNull().default(''),
-    table: jsonb('table').$type<StoredTable>().notNull(),
+    table: jsonb('table').$type<MapTable>().notNull(),
     checksum: text('checksum').notNull(),
-    state: text('state').notNull().default('draft'),
+    state: text('state').$type<RevisionState>().notNull().default('draft'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
     uniqueIndex('map_revisions_map_number_idx').on(t.mapId, t.number),
     index('map_revisions_map_created_idx').on(t.mapId, t.createdAt),
+    check('map_revisions_state_check', oneOf(t.state, REVISION_STATES)),
   ],
 )
 
@@ -145,7 +161,7 @@ export interface ReportFlag {
   pedalPct: number
   speedKmh: number
   what: string
-  severity: 1 | 2 | 3 | 4
+  severity: FlagSeverity
 }
 
 export const driveReports = pgTable(
@@ -161,17 +177,17 @@ export const driveReports = pgTable(
     drivenOn: date('driven_on').notNull(),
     vehicleUnit: text('vehicle_unit').notNull(),
     route: text('route').notNull(),
-    surface: text('surface').notNull(),
+    surface: text('surface').$type<SurfaceId>().notNull(),
     weather: text('weather').notNull(),
     ambientC: real('ambient_c').notNull(),
-    loadCase: text('load_case').notNull(),
+    loadCase: text('load_case').$type<LoadCase>().notNull(),
     payloadKg: real('payload_kg').notNull(),
     trailer: boolean('trailer').notNull(),
     ratings: jsonb('ratings').$type<ReportRatings>().notNull(),
     comments: text('comments').notNull().default(''),
     flags: jsonb('flags').$type<ReportFlag[]>().notNull().default([]),
     /** none | open | resolved: a severity-4 flag opens it; only a lead engineer closes it, with a comment. */
-    safety: text('safety').$type<'none' | 'open' | 'resolved'>().notNull().default('none'),
+    safety: text('safety').$type<SafetyState>().notNull().default('none'),
     safetyResolvedBy: integer('safety_resolved_by').references(() => users.id),
     safetyResolvedAt: timestamp('safety_resolved_at', { withTimezone: true }),
     safetyResolution: text('safety_resolution'),
@@ -184,7 +200,9 @@ export const driveReports = pgTable(
   (t) => [
     index('drive_reports_revision_idx').on(t.revisionId),
     index('drive_reports_driver_idx').on(t.driverId),
-    check('drive_reports_safety_check', sql`${t.safety} in ('none', 'open', 'resolved')`),
+    check('drive_reports_safety_check', oneOf(t.safety, SAFETY_STATES)),
+    check('drive_reports_surface_check', oneOf(t.surface, SURFACE_IDS)),
+    check('drive_reports_load_case_check', oneOf(t.loadCase, LOAD_CASE_IDS)),
   ],
 )
 
@@ -200,15 +218,20 @@ export const driveLogs = pgTable(
     fileName: text('file_name').notNull(),
     sizeBytes: bigint('size_bytes', { mode: 'number' }).notNull(),
     /** uploaded → analysing → done | failed */
-    status: text('status').notNull().default('uploaded'),
+    status: text('status').$type<LogStatus>().notNull().default('uploaded'),
     progressBytes: bigint('progress_bytes', { mode: 'number' }).notNull().default(0),
     errorMessage: text('error_message'),
     mapping: jsonb('mapping').$type<Record<string, string>>().notNull().default({}),
-    analysis: jsonb('analysis').$type<Record<string, unknown>>(),
+    /** The analyser's result, stored as JSON (non-finite numbers come back as null). */
+    analysis: jsonb('analysis').$type<AnalysisResult>(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     analysedAt: timestamp('analysed_at', { withTimezone: true }),
   },
-  (t) => [uniqueIndex('drive_logs_object_key_idx').on(t.objectKey), index('drive_logs_report_idx').on(t.reportId)],
+  (t) => [
+    uniqueIndex('drive_logs_object_key_idx').on(t.objectKey),
+    index('drive_logs_report_idx').on(t.reportId),
+    check('drive_logs_status_check', oneOf(t.status, LOG_STATUSES)),
+  ],
 )
 
 export const reportComments = pgTable(
@@ -238,13 +261,18 @@ export const revisionEvents = pgTable(
     actorId: integer('actor_id')
       .notNull()
       .references(() => users.id),
-    action: text('action').notNull(),
-    fromState: text('from_state').notNull(),
-    toState: text('to_state').notNull(),
+    action: text('action').$type<ReviewAction>().notNull(),
+    fromState: text('from_state').$type<RevisionState>().notNull(),
+    toState: text('to_state').$type<RevisionState>().notNull(),
     comment: text('comment').notNull().default(''),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('revision_events_revision_idx').on(t.revisionId)],
+  (t) => [
+    index('revision_events_revision_idx').on(t.revisionId),
+    check('revision_events_action_check', oneOf(t.action, REVIEW_ACTIONS)),
+    check('revision_events_from_state_check', oneOf(t.fromState, REVISION_STATES)),
+    check('revision_events_to_state_check', oneOf(t.toState, REVISION_STATES)),
+  ],
 )
 
 /** Review comments on a revision, optionally pinned to one cell. */
@@ -282,7 +310,7 @@ export const releases = pgTable(
       .references(() => users.id),
     releasedAt: timestamp('released_at', { withTimezone: true }).notNull().defaultNow(),
     /** Gate exceptions the lead acknowledged, each with a reason. */
-    acknowledgements: jsonb('acknowledgements').$type<{ key: string; reason: string }[]>().notNull().default([]),
+    acknowledgements: jsonb('acknowledgements').$type<Acknowledgement[]>().notNull().default([]),
     /** Set when a later release took its place. */
     retiredAt: timestamp('retired_at', { withTimezone: true }),
     withdrawnAt: timestamp('withdrawn_at', { withTimezone: true }),
@@ -303,14 +331,14 @@ export const mailOutbox = pgTable(
     to: jsonb('to').$type<string[]>().notNull(),
     subject: text('subject').notNull(),
     text: text('text').notNull(),
-    status: text('status').$type<'pending' | 'sent' | 'failed'>().notNull().default('pending'),
+    status: text('status').$type<MailStatus>().notNull().default('pending'),
     attempts: integer('attempts').notNull().default(0),
     lastError: text('last_error'),
     nextAttemptAt: timestamp('next_attempt_at', { withTimezone: true }).notNull().defaultNow(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     sentAt: timestamp('sent_at', { withTimezone: true }),
   },
-  (t) => [index('mail_outbox_status_idx').on(t.status, t.nextAttemptAt)],
+  (t) => [index('mail_outbox_status_idx').on(t.status, t.nextAttemptAt), check('mail_outbox_status_check', oneOf(t.status, MAIL_STATUSES))],
 )
 
 /** One-time links (invite, password reset): only a hash of the token is stored. */
@@ -321,22 +349,11 @@ export const authTokens = pgTable(
     userId: integer('user_id')
       .notNull()
       .references(() => users.id),
-    kind: text('kind').$type<'invite' | 'reset'>().notNull(),
+    kind: text('kind').$type<LinkKind>().notNull(),
     tokenHash: text('token_hash').notNull(),
     expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
     usedAt: timestamp('used_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex('auth_tokens_hash_idx').on(t.tokenHash)],
+  (t) => [uniqueIndex('auth_tokens_hash_idx').on(t.tokenHash), check('auth_tokens_kind_check', oneOf(t.kind, LINK_KINDS))],
 )
-
-export const usersRelations = relations(users, ({ many }) => ({ revisions: many(mapRevisions) }))
-export const programsRelations = relations(vehiclePrograms, ({ many }) => ({ maps: many(maps) }))
-export const mapsRelations = relations(maps, ({ one, many }) => ({
-  program: one(vehiclePrograms, { fields: [maps.programId], references: [vehiclePrograms.id] }),
-  revisions: many(mapRevisions),
-}))
-export const revisionsRelations = relations(mapRevisions, ({ one }) => ({
-  map: one(maps, { fields: [mapRevisions.mapId], references: [maps.id] }),
-  author: one(users, { fields: [mapRevisions.authorId], references: [users.id] }),
-}))

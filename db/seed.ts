@@ -1,6 +1,7 @@
 import { and, eq, sql } from 'drizzle-orm'
 import type { Db } from './client'
-import { maps, users, vehiclePrograms, type Role } from './schema'
+import type { Role } from '../domain/roles'
+import { maps, users, vehiclePrograms } from './schema'
 import { demoTipper, demoTractor } from './demo/programs'
 import { demoMapHistories } from './demo/maps'
 import { insertRevision } from './queries/revisions'

@@ -7,7 +7,7 @@ import { startLocalServices } from './local-services.mjs'
 await buildIfStale()
 const services = await startLocalServices(process.env.MAPWRIGHT_DATA_DIR ?? path.join(root, '.data'))
 const env = { ...process.env, ...services.env, MAPWRIGHT_DEMO: '1' }
-const seeded = await run(bin('tsx'), ['scripts/seed.ts'], { env })
+const seeded = await run(bin('tsx'), ['--conditions=react-server', 'scripts/seed.ts'], { env })
 if (seeded !== 0) {
   await services.close()
   process.exit(seeded)

@@ -21,7 +21,7 @@ const env = {
 }
 delete env.DATABASE_URL
 await buildIfStale()
-const seeded = await run(bin('tsx'), ['scripts/seed.ts'], { env })
+const seeded = await run(bin('tsx'), ['--conditions=react-server', 'scripts/seed.ts'], { env })
 if (seeded !== 0) process.exit(seeded)
 const code = await run(bin('next'), ['start', '-H', '127.0.0.1', '-p', port], { env })
 await services.close()

@@ -4,6 +4,8 @@
 import { Readable } from 'node:stream'
 import { and, eq, sql } from 'drizzle-orm'
 import type { Db } from '../db/client'
+import type { ReviewAction } from '../domain/review-actions'
+import type { RevisionState } from '../domain/revision-states'
 import { driveReports, maps, mapRevisions, users } from '../db/schema'
 import { createReport } from '../db/queries/reports'
 import { recordRelease, transitionRevision } from '../db/queries/review'
@@ -26,7 +28,7 @@ async function revision(db: Db, mapName: string, number: number) {
   return r
 }
 
-async function step(revisionId: number, actorId: number, action: string, from: string, to: string, comment = '') {
+async function step(revisionId: number, actorId: number, action: ReviewAction, from: RevisionState, to: RevisionState, comment = '') {
   const r = await transitionRevision({ revisionId, actorId, action, from, to, comment })
   if (!r.ok) throw new Error(`demo workflow: ${action} on revision ${revisionId} found it ${r.currentState}`)
 }

@@ -1,11 +1,11 @@
 import Link from 'next/link'
 import { requirePageUser } from '../_lib/auth/page-access'
-import { roleLabel } from '../_lib/auth/roles'
+import { roleLabel } from '@/domain/roles'
 import { SafetyCaution } from '../_components/safety-caution'
 import { navFor } from '../_components/nav-items'
 import { WaitingList } from '../_components/waiting-list'
 import { waitingFor } from '../_lib/review/waiting'
-import type { Role } from '@/app/_lib/auth/roles'
+import type { Role } from '@/domain/roles'
 
 const ROLE_TASKS: Record<Role, string> = {
   calibration_engineer: 'Shape drive and regen maps, check them against the traction physics, and save revisions with a reason.',

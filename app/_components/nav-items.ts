@@ -1,4 +1,4 @@
-import type { Role } from '@/app/_lib/auth/roles'
+import type { Role } from '@/domain/roles'
 
 export interface NavItem {
   href: string

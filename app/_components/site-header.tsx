@@ -1,5 +1,5 @@
 import Link from 'next/link'
-import { roleLabel } from '@/app/_lib/auth/roles'
+import { roleLabel } from '@/domain/roles'
 import type { SessionUser } from '@/app/_lib/auth/session'
 import { navFor } from './nav-items'
 import { SignOutButton } from './sign-out-button'

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { ROLES } from '@/app/_lib/auth/roles'
+import { ROLES } from '@/domain/roles'
 
 export const roleSchema = z.enum(ROLES, { error: `Role must be one of ${ROLES.join(', ')}` })
 

@@ -1,4 +1,4 @@
-import { chargeLimitTorqueAt, limitsFromVehicle, motorEnvelopeAt, type MapTable } from '../../maps'
+import { chargeLimitTorqueAt, limitsFromVehicle, motorEnvelopeAt, type MapKind, type MapTable } from '../../maps'
 import type { VehicleParams } from '../../physics/vehicle'
 
 // INVENTED demo maps: shapes a calibration engineer might plausibly start from, not data from any vehicle.
@@ -46,13 +46,21 @@ export interface DemoRevision {
   table: MapTable
 }
 
+export interface DemoMapHistory {
+  program: string
+  name: string
+  kind: MapKind
+  description: string
+  revisions: DemoRevision[]
+}
+
 /** Revision histories for the demo maps, oldest first. */
-export function demoMapHistories(tipper: VehicleParams, tractor: VehicleParams) {
+export function demoMapHistories(tipper: VehicleParams, tractor: VehicleParams): DemoMapHistory[] {
   return [
     {
       program: 'BX-64 Tipper',
       name: 'Site drive',
-      kind: 'drive' as const,
+      kind: 'drive',
       description: 'Demo: accelerator map for quarry and site roads.',
       revisions: [
         { message: 'Starting point: near-linear pedal, full envelope', table: demoDriveTable(tipper, { gamma: 1.1, share: 1 }) },
@@ -62,34 +70,34 @@ export function demoMapHistories(tipper: VehicleParams, tractor: VehicleParams) 
           notes: 'Empty truck spun the rear tandem on wet gravel at about 40 % pedal. Capped torque below 10 km/h.',
           table: demoDriveTable(tipper, { gamma: 1.5, share: 1, launchCapNm: 1600 }),
         },
-      ] as DemoRevision[],
+      ],
     },
     {
       program: 'BX-64 Tipper',
       name: 'Site regen',
-      kind: 'regen' as const,
+      kind: 'regen',
       description: 'Demo: brake-pedal regen map; the 0 % row is lift-off regen.',
       revisions: [
         { message: 'Starting point: strong lift-off regen', table: demoRegenTable(tipper, { liftOffNm: 900, maxNm: 2400 }) },
         { message: 'Less lift-off regen for loose surfaces', table: demoRegenTable(tipper, { liftOffNm: 500, maxNm: 2400 }) },
-      ] as DemoRevision[],
+      ],
     },
     {
       program: 'BX-64 Tractor',
       name: 'Road drive',
-      kind: 'drive' as const,
+      kind: 'drive',
       description: 'Demo: accelerator map for the tractor-semitrailer on public roads.',
       revisions: [
         { message: 'Starting point from the tipper shape', table: demoDriveTable(tractor, { gamma: 1.5, share: 1 }) },
         { message: 'Gentler launch when solo (no trailer)', table: demoDriveTable(tractor, { gamma: 1.6, share: 0.95, launchCapNm: 2000 }) },
-      ] as DemoRevision[],
+      ],
     },
     {
       program: 'BX-64 Tractor',
       name: 'Road regen',
-      kind: 'regen' as const,
+      kind: 'regen',
       description: 'Demo: brake-pedal regen map for the tractor; the 0 % row is lift-off regen.',
-      revisions: [{ message: 'Starting point: moderate lift-off regen', table: demoRegenTable(tractor, { liftOffNm: 600, maxNm: 2800 }) }] as DemoRevision[],
+      revisions: [{ message: 'Starting point: moderate lift-off regen', table: demoRegenTable(tractor, { liftOffNm: 600, maxNm: 2800 }) }],
     },
   ]
 }

@@ -1,5 +1,7 @@
 import { asc, eq } from 'drizzle-orm'
 import { getDb } from '../client'
+import type { LogStatus } from '../../domain/log-statuses'
+import type { AnalysisResult } from '../../physics/drive-log/types'
 import { driveLogs } from '../schema'
 
 const columns = {
@@ -15,7 +17,6 @@ const columns = {
   createdAt: driveLogs.createdAt,
   analysedAt: driveLogs.analysedAt,
 }
-
 
 export async function createLog(input: { reportId: number; objectKey: string; fileName: string; sizeBytes: number; mapping: Record<string, string> }) {
   const db = await getDb()
@@ -34,7 +35,7 @@ export async function getLog(id: number) {
   return rows[0] ?? null
 }
 
-export async function setLogProgress(id: number, patch: Partial<{ status: string; progressBytes: number; errorMessage: string | null; analysis: Record<string, unknown>; analysedAt: Date }>) {
+export async function setLogProgress(id: number, patch: Partial<{ status: LogStatus; progressBytes: number; errorMessage: string | null; analysis: AnalysisResult; analysedAt: Date }>) {
   const db = await getDb()
   await db.update(driveLogs).set(patch).where(eq(driveLogs.id, id))
 }

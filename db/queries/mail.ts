@@ -1,6 +1,7 @@
 import { and, asc, desc, eq, lte, sql } from 'drizzle-orm'
 import { getDb, type Db } from '../client'
-import { mailOutbox, users, type Role } from '../schema'
+import type { Role } from '../../domain/roles'
+import { mailOutbox, users } from '../schema'
 
 export interface OutgoingMail {
   to: string[]

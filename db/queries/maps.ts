@@ -19,6 +19,9 @@ export interface MapSummary {
 const latest = sql<number | null>`(select max(${mapRevisions.number}) from ${mapRevisions} where ${mapRevisions.mapId} = ${maps.id})`
 const latestAt = sql<Date | null>`(select max(${mapRevisions.createdAt}) from ${mapRevisions} where ${mapRevisions.mapId} = ${maps.id})`
 
+/** The latest revision number of the map in the outer query (an index lookup on (map_id, number)). */
+const latestNumberOf = sql`(select max(r.number) from map_revisions r where r.map_id = ${maps.id})`
+
 /** A map's own columns with its program's name. */
 const mapColumns = {
   id: maps.id,
@@ -78,6 +81,30 @@ export async function createMap(
   })
 }
 
+/** A revision by its row id, with its table, its map and the map's program, in one round trip. Null when it does not exist. */
+export async function getRevisionWithMap(revisionId: number) {
+  const db = await getDb()
+  const rows = await db
+    .select({ map: mapWithProgramColumns, revision: { ...revisionSummaryColumns, table: mapRevisions.table } })
+    .from(mapRevisions)
+    .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .innerJoin(users, eq(users.id, mapRevisions.authorId))
+    .where(eq(mapRevisions.id, revisionId))
+  return rows[0] ?? null
+}
+
+/** The latest revision of every map, with its table and the program's parameters, in one query (the overview's findings). */
+export async function listLatestRevisions() {
+  const db = await getDb()
+  return db
+    .select({ mapId: maps.id, mapName: maps.name, programName: vehiclePrograms.name, programParams: vehiclePrograms.params, number: mapRevisions.number, table: mapRevisions.table })
+    .from(maps)
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, latestNumberOf)))
+    .orderBy(asc(vehiclePrograms.name), asc(maps.kind), asc(maps.name))
+}
+
 /**
  * A map, its program and its latest revision in one round trip (the most frequent read). Every map
  * has revision 1 from the moment it exists (createMap writes both in one transaction), so the
@@ -89,7 +116,7 @@ export async function getMapWithLatest(id: number) {
     .select({ map: mapWithProgramColumns, latest: { ...revisionSummaryColumns, table: mapRevisions.table } })
     .from(maps)
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
-    .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, sql`(select max(r.number) from map_revisions r where r.map_id = ${maps.id})`)))
+    .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, latestNumberOf)))
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
     .where(eq(maps.id, id))
   return rows[0] ?? null

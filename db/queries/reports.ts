@@ -1,5 +1,8 @@
 import { and, asc, desc, eq, isNull, sql, type SQL } from 'drizzle-orm'
 import { getDb } from '../client'
+import { SAFETY_SEVERITY } from '../../domain/report-safety'
+import type { SurfaceId } from '../../physics/surfaces'
+import type { LoadCase } from '../../physics/vehicle'
 import { driveReports, mapRevisions, maps, reportComments, users, vehiclePrograms, type ReportFlag, type ReportRatings } from '../schema'
 import { recordAudit } from './audit'
 import { enqueueMail, type OutgoingMail } from './mail'
@@ -9,10 +12,10 @@ export interface ReportFields {
   drivenOn: string
   vehicleUnit: string
   route: string
-  surface: string
+  surface: SurfaceId
   weather: string
   ambientC: number
-  loadCase: string
+  loadCase: LoadCase
   payloadKg: number
   trailer: boolean
   ratings: ReportRatings
@@ -20,7 +23,7 @@ export interface ReportFields {
   flags: ReportFlag[]
 }
 
-const safetyFlags = (flags: ReportFlag[]) => flags.filter((f) => f.severity === 4).length
+const safetyFlags = (flags: ReportFlag[]) => flags.filter((f) => f.severity === SAFETY_SEVERITY).length
 
 const columns = {
   id: driveReports.id,

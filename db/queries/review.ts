@@ -1,4 +1,6 @@
 import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm'
+import type { ReviewAction } from '../../domain/review-actions'
+import type { RevisionState } from '../../domain/revision-states'
 import { getDb, type Db } from '../client'
 import { mapRevisions, maps, releases, reviewComments, revisionEvents, users, vehiclePrograms } from '../schema'
 import { recordAudit } from './audit'
@@ -6,7 +8,7 @@ import { enqueueMail, type OutgoingMail } from './mail'
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0]
 
-export type TransitionResult = { ok: true } | { ok: false; currentState: string }
+export type TransitionResult = { ok: true } | { ok: false; currentState: RevisionState | 'missing' }
 
 /**
  * Move a revision from one state to another if (and only if) it is still in `from`: two leads
@@ -16,9 +18,9 @@ export type TransitionResult = { ok: true } | { ok: false; currentState: string 
 export async function transitionRevision(input: {
   revisionId: number
   actorId: number
-  action: string
-  from: string
-  to: string
+  action: ReviewAction
+  from: RevisionState
+  to: RevisionState
   comment: string
   mail?: OutgoingMail[]
   extra?: (tx: Tx) => Promise<void>
@@ -102,6 +104,8 @@ export async function listRevisionEvents(filter: { revisionId?: number; mapId?: 
     .orderBy(desc(revisionEvents.at), desc(revisionEvents.id))
 }
 
+export type RevisionEventRow = Awaited<ReturnType<typeof listRevisionEvents>>[number]
+
 export async function addReviewComment(c: { revisionId: number; authorId: number; row: number | null; col: number | null; body: string }) {
   const db = await getDb()
   const [row] = await db.insert(reviewComments).values(c).returning()
@@ -119,8 +123,10 @@ export async function listReviewComments(filter: { revisionId?: number; mapId?: 
     .orderBy(asc(reviewComments.createdAt))
 }
 
+export type ReviewCommentRow = Awaited<ReturnType<typeof listReviewComments>>[number]
+
 /** Revisions in a state, across maps, oldest first (the lead's queue; an engineer's sent-back list). */
-export async function revisionsInState(state: string, filter: { authorId?: number } = {}) {
+export async function revisionsInState(state: RevisionState, filter: { authorId?: number } = {}) {
   const db = await getDb()
   return db
     .select({ id: mapRevisions.id, mapId: maps.id, mapName: maps.name, programName: vehiclePrograms.name, number: mapRevisions.number, message: mapRevisions.message, authorId: mapRevisions.authorId, authorName: users.name, createdAt: mapRevisions.createdAt })

@@ -1,6 +1,7 @@
 import { and, desc, eq, lt, sql } from 'drizzle-orm'
 import type { MapTable } from '../../maps'
 import { checksum } from '../checksum'
+import type { RevisionState } from '../../domain/revision-states'
 import { getDb, type Db } from '../client'
 import { mapRevisions, maps, users } from '../schema'
 import { recordAudit } from './audit'
@@ -32,7 +33,7 @@ export interface RevisionSummary {
   message: string
   notes: string
   checksum: string
-  state: string
+  state: RevisionState
   createdAt: Date
 }
 export type Revision = RevisionSummary & { table: MapTable }
@@ -154,15 +155,5 @@ export async function getRevision(mapId: number, number?: number): Promise<Revis
     .where(number === undefined ? eq(mapRevisions.mapId, mapId) : and(eq(mapRevisions.mapId, mapId), eq(mapRevisions.number, number)))
     .orderBy(desc(mapRevisions.mapId), desc(mapRevisions.number))
     .limit(1)
-  return rows[0] ?? null
-}
-
-/** A revision's map and number by its row id (drive reports point at the row id). */
-export async function getRevisionById(id: number): Promise<{ id: number; mapId: number; number: number; checksum: string; state: string; authorId: number } | null> {
-  const db = await getDb()
-  const rows = await db
-    .select({ id: mapRevisions.id, mapId: mapRevisions.mapId, number: mapRevisions.number, checksum: mapRevisions.checksum, state: mapRevisions.state, authorId: mapRevisions.authorId })
-    .from(mapRevisions)
-    .where(eq(mapRevisions.id, id))
   return rows[0] ?? null
 }

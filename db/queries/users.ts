@@ -1,7 +1,8 @@
 import { asc, eq, sql } from 'drizzle-orm'
 import { getDb } from '../client'
 import { recordAudit, type AuditEntry } from './audit'
-import { users, type Role } from '../schema'
+import type { Role } from '../../domain/roles'
+import { users } from '../schema'
 
 /** The columns safe to return anywhere: never the password hash. */
 const publicColumns = {

@@ -39,7 +39,7 @@ async function timed<T>(f: () => Promise<T>): Promise<{ ms: number; value: T }> 
 }
 
 async function memoryInChild(file: string): Promise<MemoryReport> {
-  const { stdout } = await promisify(execFile)(process.execPath, ['--expose-gc', '--import', 'tsx', path.join(ROOT, 'tests/bench/log-ingest-memory.ts'), file], { cwd: ROOT, maxBuffer: 1 << 20 })
+  const { stdout } = await promisify(execFile)(process.execPath, ['--expose-gc', '--conditions=react-server', '--import', 'tsx', path.join(ROOT, 'tests/bench/log-ingest-memory.ts'), file], { cwd: ROOT, maxBuffer: 1 << 20 })
   const last = stdout.trim().split('\n').pop() ?? ''
   return JSON.parse(last) as MemoryReport
 }

@@ -2,7 +2,7 @@
 import { encode } from 'next-auth/jwt'
 import { env } from '@/app/_lib/config/env'
 import { createUser, type PublicUser } from '@/db/queries/users'
-import type { Role } from '@/db/schema'
+import type { Role } from '@/domain/roles'
 import { hashPassword } from '@/app/_lib/auth/password'
 
 let seq = 0

@@ -1,12 +1,13 @@
 import Link from 'next/link'
 import type { ReportRow } from '@/db/queries/reports'
+import { SAFETY_LABELS, type SafetyState } from '@/domain/report-safety'
 import { surfaceLabel } from '@/physics'
 
 export { surfaceLabel }
 
-export function SafetyBadge({ safety }: { safety: string }) {
-  if (safety === 'open') return <span className="rounded bg-danger px-1.5 py-0.5 text-xs font-semibold text-white">safety concern open</span>
-  if (safety === 'resolved') return <span className="rounded bg-slate-200 px-1.5 py-0.5 text-xs">safety concern resolved</span>
+export function SafetyBadge({ safety }: { safety: SafetyState }) {
+  if (safety === 'open') return <span className="rounded bg-danger px-1.5 py-0.5 text-xs font-semibold text-white">{SAFETY_LABELS.open}</span>
+  if (safety === 'resolved') return <span className="rounded bg-slate-200 px-1.5 py-0.5 text-xs">{SAFETY_LABELS.resolved}</span>
   return null
 }
 

@@ -1,3 +1,4 @@
+import 'server-only'
 import type { AuthOptions } from 'next-auth'
 import Credentials from 'next-auth/providers/credentials'
 import { checkCredentials } from './credentials'

@@ -1,3 +1,4 @@
+import 'server-only'
 import { getUserCredentials } from '@/db/queries/users'
 import { recordAudit } from '@/db/queries/audit'
 import { verifyPassword } from './password'

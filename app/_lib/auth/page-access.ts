@@ -2,7 +2,7 @@ import 'server-only'
 import { cookies } from 'next/headers'
 import { redirect } from 'next/navigation'
 import { cache } from 'react'
-import type { Role } from '@/app/_lib/auth/roles'
+import type { Role } from '@/domain/roles'
 import { userFromCookieHeader, type SessionUser } from './session'
 
 /**

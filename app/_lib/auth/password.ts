@@ -1,3 +1,4 @@
+import 'server-only'
 import { hash, verify } from '@node-rs/argon2'
 
 // @node-rs/argon2 defaults to argon2id; these are the OWASP-recommended minimums (19 MiB, t=2, p=1).

@@ -1,10 +1,5 @@
-import { ROLE_LABELS, ROLES, type Role } from '@/db/roles'
-
-export { ROLE_LABELS, ROLES, type Role }
-
-export function roleLabel(role: Role): string {
-  return ROLE_LABELS[role]
-}
+import 'server-only'
+import type { Role } from '@/domain/roles'
 
 /** Roles that may change calibration data. */
 export const EDITORS: readonly Role[] = ['calibration_engineer', 'lead_engineer']

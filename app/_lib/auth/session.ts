@@ -1,3 +1,4 @@
+import 'server-only'
 import { decode } from 'next-auth/jwt'
 import { getSessionUser, type PublicUser } from '@/db/queries/users'
 import { env } from '../config/env'

@@ -3,6 +3,8 @@
  * Kept in process memory: enough for one server; behind several servers, put the counts in the
  * shared database or the proxy in front (docs/security.md).
  */
+import 'server-only'
+
 export const LIMITS = {
   /** Failures counted within this window, ms. */
   windowMs: 15 * 60_000,

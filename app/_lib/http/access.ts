@@ -1,4 +1,5 @@
-import { roleLabel, type Role } from '../auth/roles'
+import 'server-only'
+import { roleLabel, type Role } from '@/domain/roles'
 import { errorResponse, ForbiddenError, UnauthorizedError } from './errors'
 import { userFromCookieHeader, type SessionUser } from '../auth/session'
 import { runWithRequestContext } from '@/db/request-context'

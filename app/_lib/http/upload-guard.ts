@@ -1,3 +1,4 @@
+import 'server-only'
 import { Transform, type TransformCallback } from 'node:stream'
 import { HttpError } from './errors'
 

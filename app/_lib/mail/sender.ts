@@ -1,3 +1,4 @@
+import 'server-only'
 import nodemailer, { type Transporter } from 'nodemailer'
 import { dueMail, markFailed, markSent } from '@/db/queries/mail'
 import { env } from '../config/env'

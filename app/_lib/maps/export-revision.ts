@@ -1,3 +1,4 @@
+import 'server-only'
 import type { MapWithProgram } from '@/db/queries/maps'
 import type { Revision } from '@/db/queries/revisions'
 import { verifiedChecksum } from '@/db/checksum'
@@ -5,6 +6,11 @@ import { toCHeader, toCsv, toJson } from '@/maps'
 
 export const EXPORT_FORMATS = ['csv', 'json', 'c'] as const
 export type ExportFormat = (typeof EXPORT_FORMATS)[number]
+
+/** The export format a query names, or null when it names none we write. */
+export function exportFormat(s: string): ExportFormat | null {
+  return EXPORT_FORMATS.find((f) => f === s) ?? null
+}
 
 /** A revision as a file: CSV for spreadsheets, JSON, or a C header for the controller firmware. */
 export function exportRevision(map: MapWithProgram, rev: Revision, format: ExportFormat) {

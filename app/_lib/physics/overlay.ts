@@ -2,6 +2,7 @@
  * The physics overlay of a stored revision, as the overlay route and the first paint of the
  * compare and physics pages serve it. The maths lives in physics/overlay.ts.
  */
+import 'server-only'
 import type { MapTable } from '@/maps'
 import type { VehicleParams } from '@/physics'
 import { mapOverlay, type MapOverlay } from '@/physics/overlay'

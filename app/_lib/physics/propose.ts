@@ -3,6 +3,7 @@
  * fed with the traction torque limit per speed for the chosen load case and surface. Nothing is
  * saved here; the engineer saves the draft through the ordinary revisions route.
  */
+import 'server-only'
 import { z } from 'zod'
 import type { MapTable } from '@/maps'
 import { tractionLimitTorqueBySpeed, type VehicleParams } from '@/physics'

@@ -3,8 +3,9 @@
  * body, checked against the vehicle program, and physics input errors turned into 400s (the
  * shared error mapper does not know the physics module, and a bad input is the caller's fault).
  */
+import 'server-only'
 import { z } from 'zod'
-import { LOAD_CASE_IDS, loadCasesFor, PhysicsInputError, SURFACE_IDS, type LoadCase, type SurfaceId, type VehicleParams } from '@/physics'
+import { LOAD_CASE_IDS, loadCasesFor, PhysicsInputError, SURFACE_IDS, type LoadCase, type VehicleParams } from '@/physics'
 import { ValidationError } from '../http/errors'
 
 export const loadCaseField = z.enum(LOAD_CASE_IDS, { error: `loadCase must be one of ${LOAD_CASE_IDS.join(', ')}` })

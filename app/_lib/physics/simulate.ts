@@ -3,6 +3,7 @@
  * the query schema, the run, and the samples as columns rounded to 5 significant digits (the
  * plots need no more, and it keeps a 30 s run near 100 kB of JSON).
  */
+import 'server-only'
 import { z } from 'zod'
 import type { MapTable } from '@/maps'
 import { simulateLaunch, simulateLiftOff, type SimSample, type VehicleParams } from '@/physics'

@@ -3,6 +3,7 @@
  * and regen (braking) force the drive axle can transmit with load transfer (docs/physics.md §4–5),
  * and the motor-shaft torque that reaches it. Pure; the traction route and the physics page share it.
  */
+import 'server-only'
 import { cellSlip, deliverableTorqueLimit, loadCasesFor, SURFACE_IDS, SURFACES, type LoadCase, type SurfaceId, type VehicleParams } from '@/physics'
 
 export interface TractionRow {

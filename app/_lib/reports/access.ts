@@ -1,7 +1,6 @@
 import 'server-only'
 import { getReport, type ReportRow } from '@/db/queries/reports'
-import { getRevisionById } from '@/db/queries/revisions'
-import { getMap } from '@/db/queries/maps'
+import { getRevisionWithMap } from '@/db/queries/maps'
 import { loadCasesFor } from '@/physics/load-cases'
 import type { ReportInput } from '@/app/_schemas/report'
 import { ForbiddenError, NotFoundError, ValidationError } from '../http/errors'
@@ -22,10 +21,9 @@ export function assertOwner(report: ReportRow, user: SessionUser): void {
 
 /** The revision must exist, and the load case must be one the vehicle program has. */
 export async function checkReportTarget(input: ReportInput): Promise<void> {
-  const rev = await getRevisionById(input.revisionId)
-  if (!rev) throw new ValidationError(`revisionId: revision ${input.revisionId} does not exist`)
-  const map = await getMap(rev.mapId)
-  if (!map) throw new ValidationError(`revisionId: revision ${input.revisionId} has no map`)
+  const target = await getRevisionWithMap(input.revisionId)
+  if (!target) throw new ValidationError(`revisionId: revision ${input.revisionId} does not exist`)
+  const { map } = target
   const cases = loadCasesFor(map.programParams)
   if (!cases.includes(input.loadCase)) throw new ValidationError(`loadCase: ${map.programName} has the load cases ${cases.join(', ')}`)
   if (input.trailer !== input.loadCase.startsWith('trailer')) throw new ValidationError('trailer: must match the load case (trailer-empty or trailer-laden means a trailer)')

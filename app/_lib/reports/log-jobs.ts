@@ -1,9 +1,9 @@
-// No 'server-only' marker: the demo seed runs the same analysis from a script.
+// The demo seed runs the same analysis from a script, under tsx --conditions=react-server (see package.json).
+import 'server-only'
 import { getLog, setLogProgress } from '@/db/queries/logs'
 import { getReport } from '@/db/queries/reports'
-import { getRevisionById, getRevision } from '@/db/queries/revisions'
-import { getMap } from '@/db/queries/maps'
-import { LogFormatError, type SurfaceId } from '@/physics'
+import { getRevisionWithMap } from '@/db/queries/maps'
+import { LogFormatError } from '@/physics'
 import { ingestLog } from './log-ingest'
 import { getObjectStream } from '../storage/object-store'
 
@@ -33,18 +33,17 @@ export async function analyse(logId: number): Promise<void> {
   if (!log) return
   const report = await getReport(log.reportId)
   if (!report) return
-  const rev = await getRevisionById(report.revisionId)
-  const map = rev && (await getMap(rev.mapId))
-  const full = rev && (await getRevision(rev.mapId, rev.number))
-  if (!map || !full) throw new Error(`log ${logId}: its revision is missing`)
+  const target = await getRevisionWithMap(report.revisionId)
+  if (!target) throw new Error(`log ${logId}: its revision is missing`)
+  const { map, revision } = target
   await setLogProgress(logId, { status: 'analysing', progressBytes: 0, errorMessage: null })
   let lastWrite = 0
   const result = await ingestLog(await getObjectStream(log.objectKey), {
     mapping: log.mapping,
     wheelRadiusM: map.programParams.wheelRadiusM,
-    map: { rowAxis: full.table.rowAxis, colAxis: full.table.colAxis },
+    map: { rowAxis: revision.table.rowAxis, colAxis: revision.table.colAxis },
     kind: map.kind,
-    surface: report.surface as SurfaceId,
+    surface: report.surface,
     onProgress: (bytes: number) => {
       // Throttle progress writes: one a second is plenty for a progress bar.
       const now = Date.now()

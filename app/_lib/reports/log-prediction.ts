@@ -1,3 +1,4 @@
+import 'server-only'
 import { lookup, type MapTable } from '@/maps'
 import { prepareCellSlip, type SlipEvent, type SurfaceId } from '@/physics'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
@@ -22,8 +23,8 @@ export interface EventPrediction {
  * what the physics predicts at the same pedal and speed for the report's load case and surface —
  * so the engineer sees whether the model agrees with the truck.
  */
-export function predictEvents(events: readonly SlipEvent[], ctx: { table: MapTable; vehicle: VehicleParams; loadCase: string; surface: string }): EventPrediction[] {
-  const at = prepareCellSlip({ vehicle: ctx.vehicle, loadCase: ctx.loadCase as LoadCase, surface: ctx.surface as SurfaceId })
+export function predictEvents(events: readonly SlipEvent[], ctx: { table: MapTable; vehicle: VehicleParams; loadCase: LoadCase; surface: SurfaceId }): EventPrediction[] {
+  const at = prepareCellSlip({ vehicle: ctx.vehicle, loadCase: ctx.loadCase, surface: ctx.surface })
   const wanted = ctx.table.kind === 'drive' ? 'spin' : 'lock'
   return events
     .filter((e) => e.kind === wanted)

@@ -1,16 +1,16 @@
 import 'server-only'
 import { emailsOfRole, type OutgoingMail } from '@/db/queries/mail'
 import { engineersOfMap } from '@/db/queries/reports'
-import { getRevisionById } from '@/db/queries/revisions'
-import { getMap } from '@/db/queries/maps'
+import { getRevisionWithMap } from '@/db/queries/maps'
 import type { ReportInput } from '@/app/_schemas/report'
 import { appUrl, nudgeMail } from '../mail/sender'
 import type { SessionUser } from '../auth/session'
 
 /** The e-mail for a new safety concern: to the lead engineers and the map's engineers. */
 export async function safetyMailFor(input: ReportInput, driver: SessionUser): Promise<(id: number) => OutgoingMail> {
-  const rev = await getRevisionById(input.revisionId)
-  const map = rev ? await getMap(rev.mapId) : null
+  const target = await getRevisionWithMap(input.revisionId)
+  const map = target?.map ?? null
+  const rev = target?.revision ?? null
   const to = [...new Set([...(await emailsOfRole('lead_engineer')), ...(map ? await engineersOfMap(map.id) : [])])]
   const flags = input.flags.filter((f) => f.severity === 4).map((f) => `- ${f.pedalPct} % pedal at ${f.speedKmh} km/h: ${f.what}`).join('\n')
   return (id) => ({

@@ -5,20 +5,19 @@
  * drive report was filed against this exact revision and none of its reports has an open safety
  * concern. Pure: the caller loads the data.
  */
+import 'server-only'
+import type { Acknowledgement, ReleaseConditions } from '@/db/schema'
+import type { SafetyState } from '@/domain/report-safety'
 import { limitsFromVehicle, validate, type MapTable } from '@/maps'
-import { slipGrid, SURFACES, type SurfaceId } from '@/physics'
+import { slipGrid, SURFACE_IDS, SURFACES, type SurfaceId } from '@/physics'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
 
-export interface ReleaseConditions {
-  surfaces: string[]
-  loadCases: string[]
-  marginPct: number
-}
+export type { ReleaseConditions }
 
 export interface TractionException {
   key: string
-  surface: string
-  loadCase: string
+  surface: SurfaceId
+  loadCase: LoadCase
   cells: { row: number; col: number; pedalPct: number; speedKmh: number; torqueNm: number; allowedNm: number }[]
 }
 
@@ -38,13 +37,13 @@ export interface GateResult {
 }
 
 /** Low-friction surfaces (peak μ below 0.6): the gate insists on at least one of them. */
-export const LOW_FRICTION = (Object.keys(SURFACES) as SurfaceId[]).filter((id) => SURFACES[id].peakMu < 0.6)
+export const LOW_FRICTION = SURFACE_IDS.filter((id) => SURFACES[id].peakMu < 0.6)
 
 export function tractionExceptions(table: MapTable, vehicle: VehicleParams, c: ReleaseConditions): TractionException[] {
   const out: TractionException[] = []
   for (const surface of c.surfaces) {
     for (const loadCase of c.loadCases) {
-      const grid = slipGrid({ vehicle, loadCase: loadCase as LoadCase, surface: surface as SurfaceId, gradeRad: 0, ...table })
+      const grid = slipGrid({ vehicle, loadCase, surface, gradeRad: 0, ...table })
       const cells: TractionException['cells'] = []
       grid.forEach((row, r) =>
         row.forEach((cell, col) => {
@@ -63,15 +62,15 @@ export function releaseGate(input: {
   table: MapTable
   vehicle: VehicleParams
   conditions: ReleaseConditions
-  reports: { safety: string }[]
-  acknowledgements: { key: string; reason: string }[]
+  reports: { safety: SafetyState }[]
+  acknowledgements: Acknowledgement[]
 }): GateResult {
   const { table, vehicle, conditions } = input
   const errors = validate(table, limitsFromVehicle(vehicle)).filter((f) => f.severity === 'error')
   const exceptions = tractionExceptions(table, vehicle, conditions)
   const acked = new Set(input.acknowledgements.filter((a) => a.reason.trim()).map((a) => a.key))
   const unacknowledged = exceptions.filter((e) => !acked.has(e.key)).map((e) => e.key)
-  const lowMu = conditions.surfaces.some((s) => (LOW_FRICTION as string[]).includes(s))
+  const lowMu = conditions.surfaces.some((s) => LOW_FRICTION.includes(s))
   const bothLoads = conditions.loadCases.includes('empty') && conditions.loadCases.includes('laden')
   const declared = lowMu && bothLoads
   const open = input.reports.filter((r) => r.safety === 'open').length

@@ -1,3 +1,4 @@
+import 'server-only'
 import { strToU8, zipSync } from 'fflate'
 import { verifiedChecksum } from '@/db/checksum'
 import { toCHeader, toCsv, toJson } from '@/maps'

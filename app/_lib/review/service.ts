@@ -1,14 +1,17 @@
 import 'server-only'
-import { getMap, type MapWithProgram } from '@/db/queries/maps'
+import { getRevisionWithMap, type MapWithProgram } from '@/db/queries/maps'
 import { emailOfUser, emailsOfRole, type OutgoingMail } from '@/db/queries/mail'
 import { listReports } from '@/db/queries/reports'
-import { getRevision, getRevisionById, type Revision } from '@/db/queries/revisions'
+import type { Revision } from '@/db/queries/revisions'
 import { recordRelease, recordWithdrawal, transitionRevision } from '@/db/queries/review'
 import { ConflictError, HttpError, NotFoundError } from '../http/errors'
 import { appUrl, nudgeMail } from '../mail/sender'
 import type { SessionUser } from '../auth/session'
 import { releaseGate, type GateResult } from './gate'
-import { ACTION_LABELS, checkTransition, isState, STATE_LABELS, type ReviewAction } from './states'
+import { ACTION_LABELS, type ReviewAction } from '@/domain/review-actions'
+import { STATE_LABELS, type RevisionState } from '@/domain/revision-states'
+import type { Acknowledgement } from '@/db/schema'
+import { checkTransition } from './states'
 
 export interface RevisionContext {
   revision: Revision
@@ -17,14 +20,12 @@ export interface RevisionContext {
 
 /** A revision by its row id, with its map and program. */
 export async function loadRevisionContext(revisionId: number): Promise<RevisionContext> {
-  const ref = await getRevisionById(revisionId)
-  const map = ref && (await getMap(ref.mapId))
-  const revision = ref && (await getRevision(ref.mapId, ref.number))
-  if (!ref || !map || !revision) throw new NotFoundError(`Revision ${revisionId}`)
-  return { revision, map }
+  const found = await getRevisionWithMap(revisionId)
+  if (!found) throw new NotFoundError(`Revision ${revisionId}`)
+  return found
 }
 
-export async function gateFor(ctx: RevisionContext, acknowledgements: { key: string; reason: string }[] = []): Promise<GateResult> {
+export async function gateFor(ctx: RevisionContext, acknowledgements: Acknowledgement[] = []): Promise<GateResult> {
   const reports = await listReports({ revisionId: ctx.revision.id })
   return releaseGate({ table: ctx.revision.table, vehicle: ctx.map.programParams, conditions: ctx.map.programReleaseConditions, reports, acknowledgements })
 }
@@ -54,11 +55,10 @@ export async function applyReviewAction(
   ctx: RevisionContext,
   actor: SessionUser,
   action: ReviewAction,
-  opts: { comment?: string; acknowledgements?: { key: string; reason: string }[] } = {},
-): Promise<{ state: string; gate?: GateResult }> {
+  opts: { comment?: string; acknowledgements?: Acknowledgement[] } = {},
+): Promise<{ state: RevisionState; gate?: GateResult }> {
   const { revision: r, map } = ctx
   const state = r.state
-  if (!isState(state)) throw new ConflictError(`Revision ${r.number} has an unknown state "${state}"`)
   const comment = opts.comment?.trim() ?? ''
   const check = checkTransition(action, state, actor, r.authorId, comment)
   if (!check.ok) throw new HttpError(check.status, check.status === 403 ? 'forbidden' : check.status === 400 ? 'invalid_input' : 'conflict', check.reason)
@@ -83,7 +83,7 @@ export async function applyReviewAction(
           ? async (tx) => void (await recordWithdrawal(tx, { mapId: map.id, revisionId: r.id, actorId: actor.id, reason: comment }))
           : undefined,
   })
-  if (!result.ok) throw new ConflictError(`Someone else got there first: revision ${r.number} is now “${isState(result.currentState) ? STATE_LABELS[result.currentState] : result.currentState}”`)
+  if (!result.ok) throw new ConflictError(`Someone else got there first: revision ${r.number} is now “${result.currentState === 'missing' ? result.currentState : STATE_LABELS[result.currentState]}”`)
   nudgeMail()
   return { state: check.to, gate }
 }

@@ -2,30 +2,10 @@
  * The review workflow of a revision as a pure state machine: which action moves which state, and
  * who may take it. The server checks every transition here before it touches the database.
  */
-import type { Role } from '../auth/roles'
-
-export const STATES = ['draft', 'in_review', 'returned', 'approved', 'released', 'retired', 'withdrawn'] as const
-export type RevisionState = (typeof STATES)[number]
-
-export const STATE_LABELS: Record<RevisionState, string> = {
-  draft: 'Draft',
-  in_review: 'Waiting for review',
-  returned: 'Sent back',
-  approved: 'Approved',
-  released: 'Released',
-  retired: 'Replaced by a later release',
-  withdrawn: 'Release withdrawn',
-}
-
-export type ReviewAction = 'submit' | 'approve' | 'send_back' | 'release' | 'withdraw'
-
-export const ACTION_LABELS: Record<ReviewAction, string> = {
-  submit: 'Submit for review',
-  approve: 'Approve',
-  send_back: 'Send back',
-  release: 'Release to the vehicles',
-  withdraw: 'Withdraw release',
-}
+import 'server-only'
+import type { Role } from '@/domain/roles'
+import { REVIEW_ACTIONS, ACTION_LABELS, type ReviewAction } from '@/domain/review-actions'
+import { STATE_LABELS, type RevisionState } from '@/domain/revision-states'
 
 interface Rule {
   from: RevisionState
@@ -64,12 +44,8 @@ export function checkTransition(action: ReviewAction, state: RevisionState, acto
 
 /** The actions this actor could take now (for showing buttons; the server re-checks). */
 export function availableActions(state: RevisionState, actor: { id: number; role: Role }, authorId: number): ReviewAction[] {
-  return (Object.keys(RULES) as ReviewAction[]).filter((a) => {
+  return REVIEW_ACTIONS.filter((a) => {
     const c = checkTransition(a, state, actor, authorId, 'x')
     return c.ok
   })
-}
-
-export function isState(s: string): s is RevisionState {
-  return (STATES as readonly string[]).includes(s)
 }

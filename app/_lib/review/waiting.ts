@@ -3,9 +3,8 @@ import type { WaitingItem } from '@/app/_components/waiting-list'
 import { revisionsInState } from '@/db/queries/review'
 import { listReports } from '@/db/queries/reports'
 import { revisionsAwaitingDrive, unreadReportsOf } from '@/db/queries/tasks'
-import { getRevision } from '@/db/queries/revisions'
 import { limitsFromVehicle, validate } from '@/maps'
-import { getMap, listMaps } from '@/db/queries/maps'
+import { listLatestRevisions } from '@/db/queries/maps'
 import type { SessionUser } from '../auth/session'
 
 export interface WaitingBox {
@@ -53,12 +52,9 @@ export async function waitingFor(user: SessionUser): Promise<WaitingBox[]> {
 
 async function findingsToClear(): Promise<WaitingItem[]> {
   const out: WaitingItem[] = []
-  for (const m of await listMaps()) {
-    const latest = await getRevision(m.id)
-    const map = await getMap(m.id)
-    if (!latest || !map) continue
-    const errors = validate(latest.table, limitsFromVehicle(map.programParams)).filter((f) => f.severity === 'error').length
-    if (errors > 0) out.push({ href: `/maps/${m.id}/edit`, label: `${m.programName} · ${m.name} r${latest.number}`, detail: `${errors} error(s)` })
+  for (const m of await listLatestRevisions()) {
+    const errors = validate(m.table, limitsFromVehicle(m.programParams)).filter((f) => f.severity === 'error').length
+    if (errors > 0) out.push({ href: `/maps/${m.mapId}/edit`, label: `${m.programName} · ${m.mapName} r${m.number}`, detail: `${errors} error(s)` })
   }
   return out
 }

@@ -177,7 +177,7 @@ describe.skipIf(Boolean(process.env.TEST_DATABASE_URL))('crash safety of the pro
     }
     delete env.DATABASE_URL
     // Not spawnSync: the fake S3 and mail servers the seed talks to run on this process's event loop.
-    const seeded = await runAsync(bin('tsx'), ['scripts/seed.ts'], { ...env, NODE_ENV: 'development' })
+    const seeded = await runAsync(bin('tsx'), ['--conditions=react-server', 'scripts/seed.ts'], { ...env, NODE_ENV: 'development' })
     expect(seeded.code, seeded.output).toBe(0)
 
     // First life: sign in and find one map per writer.

@@ -1,7 +1,7 @@
 import fs from 'node:fs'
 import path from 'node:path'
 import { describe, expect, it } from 'vitest'
-import { ROLES } from '@/app/_lib/auth/roles'
+import { ROLES } from '@/domain/roles'
 import { call, makeUser, sessionCookie } from '@/tests/support/api'
 import { describeAccess, discoverRoutes } from '@/tests/support/routes'
 

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest'
-import { availableActions, checkTransition, STATES, type ReviewAction, type RevisionState } from '@/app/_lib/review/states'
-import { ROLES, type Role } from '@/app/_lib/auth/roles'
+import { availableActions, checkTransition } from '@/app/_lib/review/states'
+import { REVISION_STATES, type RevisionState } from '@/domain/revision-states'
+import { type ReviewAction } from '@/domain/review-actions'
+import { ROLES, type Role } from '@/domain/roles'
 
 const AUTHOR = 1
 const OTHER = 2
@@ -17,7 +19,7 @@ const ALLOWED: { action: ReviewAction; from: RevisionState; to: RevisionState; r
 describe('revision state machine', () => {
   it('allows exactly the listed transitions, for exactly the listed roles, from exactly the listed state', () => {
     for (const action of ['submit', 'approve', 'send_back', 'release', 'withdraw'] as ReviewAction[]) {
-      for (const state of STATES) {
+      for (const state of REVISION_STATES) {
         for (const role of ROLES) {
           // The author submits; someone else approves (four eyes); others are neutral.
           const actorId = action === 'submit' ? AUTHOR : OTHER

@@ -5,7 +5,7 @@ import { zodResolver } from '@hookform/resolvers/zod'
 import { useMutation } from '@tanstack/react-query'
 import { useState } from 'react'
 import { api } from '@/app/_components/api-client'
-import { ROLE_LABELS, ROLES } from '@/app/_lib/auth/roles'
+import { ROLE_LABELS, ROLES } from '@/domain/roles'
 import { createUserSchema, type CreateUserInput } from '@/app/_schemas/user'
 
 export function NewUserForm({ onCreated }: { onCreated: () => void }) {

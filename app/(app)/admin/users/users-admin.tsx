@@ -2,7 +2,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query'
 import { useState } from 'react'
 import { api } from '@/app/_components/api-client'
-import { ROLE_LABELS, ROLES, type Role } from '@/app/_lib/auth/roles'
+import { isRole, ROLE_LABELS, ROLES, type Role } from '@/domain/roles'
 import { NewUserForm } from './new-user-form'
 
 interface UserJson {
@@ -51,7 +51,7 @@ export function UsersAdmin({ myId }: { myId: number }) {
                     aria-label={`Role of ${u.email}`}
                     className="field py-1"
                     value={u.role}
-                    onChange={(e) => patch.mutate({ id: u.id, role: e.target.value as Role })}
+                    onChange={(e) => isRole(e.target.value) && patch.mutate({ id: u.id, role: e.target.value })}
                   >
                     {ROLES.map((r) => (
                       <option key={r} value={r}>{ROLE_LABELS[r]}</option>

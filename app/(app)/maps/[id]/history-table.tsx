@@ -1,7 +1,7 @@
 import Link from 'next/link'
 import { formatTime, shortChecksum } from '@/app/_components/format'
 import type { RevisionSummary } from '@/db/queries/revisions'
-import { isState, STATE_LABELS } from '@/app/_lib/review/states'
+import { STATE_LABELS } from '@/domain/revision-states'
 
 
 export function HistoryTable(props: { mapId: number; revisions: RevisionSummary[]; total: number; canEdit: boolean }) {
@@ -27,7 +27,7 @@ export function HistoryTable(props: { mapId: number; revisions: RevisionSummary[
               <td className="px-3 py-2 whitespace-nowrap">{formatTime(r.createdAt)}</td>
               <td className="px-3 py-2">{r.message}</td>
               <td className="px-3 py-2 font-mono text-xs" title={r.checksum}>{shortChecksum(r.checksum)}</td>
-              <td className="px-3 py-2" data-testid={`state-${r.number}`}>{isState(r.state) ? STATE_LABELS[r.state] : r.state}</td>
+              <td className="px-3 py-2" data-testid={`state-${r.number}`}>{STATE_LABELS[r.state]}</td>
               <td className="px-3 py-2 whitespace-nowrap">
                 <Link href={`/maps/${props.mapId}/revisions/${r.number}`} className="text-accent hover:underline">Open</Link>
                 {' · '}

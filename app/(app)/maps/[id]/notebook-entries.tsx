@@ -1,18 +1,14 @@
 import Link from 'next/link'
 import { formatTime } from '@/app/_components/format'
 import { MarkdownNotes } from '@/app/_components/markdown-notes'
-import { isState, STATE_LABELS } from '@/app/_lib/review/states'
+import { STATE_LABELS } from '@/domain/revision-states'
 import type { RevisionSummary } from '@/db/queries/revisions'
 import type { ReportRow } from '@/db/queries/reports'
+import type { ReviewCommentRow, RevisionEventRow } from '@/db/queries/review'
 import { SafetyBadge, surfaceLabel } from '@/app/(app)/reports/report-table'
 
-interface EventItem { id: number; revisionId: number; fromState: string; toState: string; comment: string; at: Date; actorName: string }
-interface CommentItem { id: number; revisionId: number; row: number | null; col: number | null; body: string; createdAt: Date; authorName: string }
-
-const label = (s: string) => (isState(s) ? STATE_LABELS[s] : s)
-
 /** The map's story, newest first: each revision with its notes, state changes, review comments and drive reports. */
-export function NotebookEntries(props: { revisions: RevisionSummary[]; events: EventItem[]; comments: CommentItem[]; reports: ReportRow[] }) {
+export function NotebookEntries(props: { revisions: RevisionSummary[]; events: RevisionEventRow[]; comments: ReviewCommentRow[]; reports: ReportRow[] }) {
   return (
     <ol className="space-y-3">
       {props.revisions.map((r) => {
@@ -22,14 +18,14 @@ export function NotebookEntries(props: { revisions: RevisionSummary[]; events: E
         return (
           <li key={r.id} className="card space-y-2" data-testid={`notebook-${r.number}`}>
             <p className="text-xs text-slate-500">
-              r{r.number} · {r.authorName} · {formatTime(r.createdAt)} · {label(r.state)}
+              r{r.number} · {r.authorName} · {formatTime(r.createdAt)} · {STATE_LABELS[r.state]}
             </p>
             <p className="font-medium">{r.message}</p>
             <MarkdownNotes text={r.notes} />
             {events.length > 0 && (
               <ul className="text-sm text-slate-700">
                 {events.map((e) => (
-                  <li key={e.id}><span className="text-slate-500">State</span> {formatTime(e.at)} {e.actorName}: {label(e.fromState)} → {label(e.toState)}{e.comment ? ` — “${e.comment}”` : ''}</li>
+                  <li key={e.id}><span className="text-slate-500">State</span> {formatTime(e.at)} {e.actorName}: {STATE_LABELS[e.fromState]} → {STATE_LABELS[e.toState]}{e.comment ? ` — “${e.comment}”` : ''}</li>
                 ))}
               </ul>
             )}

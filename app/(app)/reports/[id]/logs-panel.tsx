@@ -2,6 +2,7 @@
 import { useQuery, useQueryClient } from '@tanstack/react-query'
 import { useState } from 'react'
 import { api } from '@/app/_components/api-client'
+import { isLogPending, type LogStatus } from '@/domain/log-statuses'
 import { uploadLog } from './upload-log'
 import { LogAnalysisView } from './log-analysis'
 
@@ -9,7 +10,7 @@ export interface LogItem {
   id: number
   fileName: string
   sizeBytes: number
-  status: string
+  status: LogStatus
   progressBytes: number
   errorMessage: string | null
   createdAt: string
@@ -27,7 +28,7 @@ export function LogsPanel(props: { reportId: number; initialLogs: LogItem[]; can
     initialData: { logs: props.initialLogs },
     queryFn: () => api<{ logs: LogItem[] }>(`/api/reports/${props.reportId}/logs`),
     // Poll while a log is still being parsed, so the progress bar moves.
-    refetchInterval: (q) => (q.state.data?.logs.some((l) => l.status === 'uploaded' || l.status === 'analysing') ? 1000 : false),
+    refetchInterval: (q) => (q.state.data?.logs.some((l) => isLogPending(l.status)) ? 1000 : false),
   })
 
   async function onFile(file: File) {
@@ -66,7 +67,7 @@ export function LogsPanel(props: { reportId: number; initialLogs: LogItem[]; can
           <p className="text-sm">
             <a className="text-accent hover:underline" href={`/api/reports/${props.reportId}/logs/${l.id}/file`}>{l.fileName}</a> · {mb(l.sizeBytes)} · <span data-testid="log-status">{l.status}</span>
           </p>
-          {(l.status === 'analysing' || l.status === 'uploaded') && <Progress label="Reading the log" fraction={l.sizeBytes ? l.progressBytes / l.sizeBytes : 0} />}
+          {isLogPending(l.status) && <Progress label="Reading the log" fraction={l.sizeBytes ? l.progressBytes / l.sizeBytes : 0} />}
           {l.status === 'failed' && <p role="alert" className="error-text text-sm">{l.errorMessage}</p>}
           {l.status === 'done' && <LogAnalysisView reportId={props.reportId} logId={l.id} mapKind={props.mapKind} />}
         </div>

@@ -6,7 +6,8 @@ import { formatTime, shortChecksum } from '@/app/_components/format'
 import { MarkdownNotes } from '@/app/_components/markdown-notes'
 import { SafetyCaution } from '@/app/_components/safety-caution'
 import { gateFor, loadRevisionContext } from '@/app/_lib/review/service'
-import { availableActions, STATE_LABELS, isState } from '@/app/_lib/review/states'
+import { availableActions } from '@/app/_lib/review/states'
+import { STATE_LABELS } from '@/domain/revision-states'
 import { NotFoundError } from '@/app/_lib/http/errors'
 import { currentRelease, listReviewComments, listRevisionEvents } from '@/db/queries/review'
 import { listReports } from '@/db/queries/reports'
@@ -36,7 +37,7 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
   const base = released && released.revisionId !== r.id ? await getRevision(map.id, released.number) : null
   const changes = base ? diff(base.table, r.table) : null
   const findings = validate(r.table, limitsFromVehicle(map.programParams))
-  const state = isState(r.state) ? r.state : 'draft'
+  const state = r.state
   const actions = availableActions(state, user, r.authorId)
   return (
     <div className="space-y-5">
@@ -72,7 +73,7 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
         <ul className="space-y-1 text-sm" data-testid="revision-events">
           {events.map((e) => (
             <li key={e.id}>
-              {formatTime(e.at)} — {e.actorName}: {isState(e.fromState) ? STATE_LABELS[e.fromState] : e.fromState} → {isState(e.toState) ? STATE_LABELS[e.toState] : e.toState}
+              {formatTime(e.at)} — {e.actorName}: {STATE_LABELS[e.fromState]} → {STATE_LABELS[e.toState]}
               {e.comment && <> — “{e.comment}”</>}
             </li>
           ))}

@@ -3,7 +3,7 @@ import { useRouter } from 'next/navigation'
 import { useState } from 'react'
 import { useMutation } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
-import { ACTION_LABELS, type ReviewAction } from '@/app/_lib/review/states'
+import { ACTION_LABELS, type ReviewAction } from '@/domain/review-actions'
 
 /** The actions open to this person now; the server checks them again. */
 export function ReviewActions(props: { revisionId: number; actions: ReviewAction[]; exceptions: { key: string; label: string }[] }) {

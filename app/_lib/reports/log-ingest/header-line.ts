@@ -1,4 +1,5 @@
 /** Reads the header line off the front of a text stream and decides the delimiter, or refuses the file as not CSV. */
+import 'server-only'
 import { LogFormatError } from '@/physics/drive-log'
 
 /** The header must end within this many characters. */

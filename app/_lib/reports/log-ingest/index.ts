@@ -1,4 +1,5 @@
 /** Server-side drive-log ingest: streaming CSV parse feeding the pure analyser in `physics/drive-log`. */
+import 'server-only'
 export { ingestLog, type IngestOptions } from './parse-log'
 export { ingestLogText } from './ingest-text'
 export type { LogIngestResult, LogReadOptions } from './row-sink'

@@ -3,6 +3,7 @@
  * cells, then the same row sink as the streaming path (which splits lines itself), so the two cross-check.
  * Handy for tests and tiny uploads; use {@link ingestLog} for files.
  */
+import 'server-only'
 import Papa from 'papaparse'
 import { LogFormatError } from '@/physics/drive-log'
 import { sniffHeaderLine } from './header-line'

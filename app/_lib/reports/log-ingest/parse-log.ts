@@ -7,6 +7,7 @@
  * double quote back to papaparse's full CSV rules. Only one parser chunk (~64 KiB of text) and the
  * analyser's bounded state are held at any time.
  */
+import 'server-only'
 import { Readable } from 'node:stream'
 import Papa from 'papaparse'
 import { LogFormatError } from '@/physics/drive-log'

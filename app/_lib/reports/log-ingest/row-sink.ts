@@ -6,6 +6,7 @@
  *    with full CSV quoting, joining the following lines while a quoted cell is still open.
  * Both give the same result for the same bytes.
  */
+import 'server-only'
 import Papa, { type ParseError } from 'papaparse'
 import {
   createLogAnalyser, createRowDecoders, LogFormatError, resolveLogHeader,

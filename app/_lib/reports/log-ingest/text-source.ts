@@ -3,6 +3,7 @@
  * of bytes; refuses binary data (a NUL byte), text that is not UTF-8, and uploads larger than `maxBytes`.
  * Small chunks are coalesced to about 64 KiB so the CSV parser sees few, large pieces.
  */
+import 'server-only'
 import { LogFormatError } from '@/physics/drive-log'
 
 /** Anything the ingest reads bytes from. */

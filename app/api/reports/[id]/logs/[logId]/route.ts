@@ -4,10 +4,8 @@ import { assertOwner, loadReport } from '@/app/_lib/reports/access'
 import { intParam } from '@/app/_lib/http/request'
 import { startLogAnalysis } from '@/app/_lib/reports/log-jobs'
 import { getLog } from '@/db/queries/logs'
-import { getRevisionById, getRevision } from '@/db/queries/revisions'
-import { getMap } from '@/db/queries/maps'
+import { getRevisionWithMap } from '@/db/queries/maps'
 import { predictEvents } from '@/app/_lib/reports/log-prediction'
-import type { AnalysisResult } from '@/physics'
 
 async function loadLog(reportParam: string, logParam: string) {
   const report = await loadReport(reportParam)
@@ -20,12 +18,11 @@ async function loadLog(reportParam: string, logParam: string) {
 // physics prediction at each logged event for the report's revision, load case and surface
 export const GET = withRole<{ id: string; logId: string }>('signed-in', async (_req, { params }) => {
   const { report, log } = await loadLog(params.id, params.logId)
-  const analysis = log.analysis as AnalysisResult | null
+  const analysis = log.analysis
   let predictions = null
   if (log.status === 'done' && analysis) {
-    const ref = await getRevisionById(report.revisionId)
-    const [rev, map] = ref ? await Promise.all([getRevision(ref.mapId, ref.number), getMap(ref.mapId)]) : [null, null]
-    if (rev && map) predictions = predictEvents(analysis.events, { table: rev.table, vehicle: map.programParams, loadCase: report.loadCase, surface: report.surface })
+    const target = await getRevisionWithMap(report.revisionId)
+    if (target) predictions = predictEvents(analysis.events, { table: target.revision.table, vehicle: target.map.programParams, loadCase: report.loadCase, surface: report.surface })
   }
   return Response.json({ log, predictions })
 })

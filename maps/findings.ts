@@ -1,7 +1,10 @@
 /**
  * What validate reports. A finding is data, not an exception: the editor lists them beside
- * the table and highlights the cells.
+ * the table and highlights the cells. It carries its numbers in SI units and its sentence as
+ * parts, so the UI renders it in the chosen units (findingMessage) without parsing text.
  */
+import { renderParts, type MessagePart } from './finding-text'
+import type { UnitSet } from './units'
 
 export type Severity = 'error' | 'warning'
 
@@ -26,8 +29,29 @@ export interface Finding {
   row?: number
   /** Column (speed breakpoint) index, 0-based, when the finding concerns a column or a cell. */
   col?: number
-  /** Human sentence naming the cell, e.g. "at 40 % pedal, 20 km/h: 2,400 N·m exceeds …". */
+  /** Pedal breakpoint, %, and road speed, km/h, of the cell when the finding concerns one. */
+  pedalPct?: number
+  speedKmh?: number
+  /** The offending value, N·m, and the bound it breaks, N·m, when the rule compares the two. */
+  valueNm?: number
+  limitNm?: number
+  /** The sentence, with its quantities in SI units; render with findingMessage. */
+  parts: MessagePart[]
+  /** The sentence in metric units, e.g. "at 40 % pedal, 20 km/h: 2,400 N·m exceeds …" (API clients, logs). */
   message: string
+}
+
+/** A finding from its sentence; the metric message is rendered here. */
+export function finding(f: Omit<Finding, 'message'>): Finding {
+  return { ...f, message: renderParts(f.parts) }
+}
+
+/**
+ * A finding's sentence in a unit system (metric gives `message`).
+ * @example findingMessage(f, UNITS.imperial) // "at 40 % pedal, 12.4 mph: 1,770.2 lbf·ft exceeds …"
+ */
+export function findingMessage(f: Pick<Finding, 'parts'>, units: UnitSet): string {
+  return renderParts(f.parts, units)
 }
 
 /** One line per rule, for the UI legend and the docs; severities are those validate uses. */

@@ -1,5 +1,7 @@
 /**
- * Number ↔ text, two ways: exact (files must round-trip bit for bit) and human (messages).
+ * Number ↔ text, the one set of formatters: exact (files must round-trip bit for bit), human
+ * (messages and labels), cell (grid text that pastes back into a spreadsheet) and table (figures
+ * where a missing value shows as a dash).
  */
 
 /**
@@ -26,30 +28,34 @@ export function parseExact(text: string): number | undefined {
   return Number.isFinite(n) ? n : undefined
 }
 
-const human = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 })
+const formats = new Map<string, Intl.NumberFormat>()
+function format(n: number, digits: number, grouping: boolean): string {
+  const key = `${digits}:${grouping}`
+  let f = formats.get(key)
+  if (!f) formats.set(key, (f = new Intl.NumberFormat('en-US', { maximumFractionDigits: digits, useGrouping: grouping })))
+  return f.format(n)
+}
 
 /**
- * Number for messages: thousands separators, at most one decimal.
+ * Number for messages and labels: thousands separators, at most `digits` decimals (default 1).
  * @example humanNumber(2400) // "2,400";  humanNumber(12.345) // "12.3"
  */
-export function humanNumber(n: number): string {
-  return Number.isFinite(n) ? human.format(n) : String(n)
+export function humanNumber(n: number, digits = 1): string {
+  return Number.isFinite(n) ? format(n, digits, true) : String(n)
 }
 
 /**
- * Which pedal row, in the words a calibration engineer uses.
- * @example rowLabel('regen', 0) // "at 0 % brake pedal (lift-off)"
+ * Number for a grid cell: no grouping, at most one decimal, so a copied block pastes back into any spreadsheet as numbers.
+ * @example cellNumber(7374.93) // "7374.9"
  */
-export function rowLabel(kind: 'drive' | 'regen', pedalPct: number): string {
-  const pedal = kind === 'regen' ? (pedalPct === 0 ? 'brake pedal (lift-off)' : 'brake pedal') : 'pedal'
-  return `at ${humanNumber(pedalPct)} % ${pedal}`
+export function cellNumber(n: number): string {
+  return Number.isFinite(n) ? format(n, 1, false) : String(n)
 }
 
 /**
- * Where a cell is.
- * @example cellLabel('drive', 40, 20) // "at 40 % pedal, 20 km/h"
- *          cellLabel('regen', 0, 60)  // "at 0 % brake pedal (lift-off), 60 km/h"
+ * Number for tables of figures: like humanNumber, but a missing (non-finite) value is a dash.
+ * @example tableNumber(1234.56, 0) // "1,235";  tableNumber(NaN) // "—"
  */
-export function cellLabel(kind: 'drive' | 'regen', pedalPct: number, speedKmh: number): string {
-  return `${rowLabel(kind, pedalPct)}, ${humanNumber(speedKmh)} km/h`
+export function tableNumber(n: number, digits = 1): string {
+  return Number.isFinite(n) ? format(n, digits, true) : '—'
 }

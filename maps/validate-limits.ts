@@ -3,9 +3,10 @@
  * breakpoints, and steep steps. Non-finite cells are skipped.
  */
 import { chargeLimitTorqueAt, dischargeLimitTorqueAt, motorEnvelopeAt, shaftSpeedRadS } from './envelope'
-import type { Finding } from './findings'
+import { cellLabel, kmh, nm, pedalWord, rowLabel, sentence } from './finding-text'
+import { finding, type Finding } from './findings'
 import { stepThresholdNm, type MapLimits } from './limits'
-import { cellLabel, humanNumber, rowLabel } from './number-format'
+import { humanNumber } from './number-format'
 import type { MapTable } from './table'
 
 /** Slack so that a value clamped to exactly the envelope is not flagged by rounding. */
@@ -33,6 +34,7 @@ export function checkLimits(table: MapTable, limits: MapLimits): Finding[] {
   const out: Finding[] = []
   const { kind, rowAxis, colAxis, values } = table
   const at = (r: number, c: number) => cellLabel(kind, rowAxis[r], colAxis[c])
+  const cell = (r: number, c: number) => ({ row: r, col: c, pedalPct: rowAxis[r], speedKmh: colAxis[c] })
   for (let r = 0; r < rowAxis.length; r++) {
     for (let c = 0; c < colAxis.length; c++) {
       const v = values[r][c]
@@ -40,15 +42,19 @@ export function checkLimits(table: MapTable, limits: MapLimits): Finding[] {
       const speed = colAxis[c]
       const env = motorEnvelopeAt(limits, speed)
       if (Math.abs(v) > env * (1 + TOL) + TOL) {
-        const why = speed > limits.maxRoadSpeedKmh ? ` (above ${humanNumber(limits.maxRoadSpeedKmh)} km/h the motor exceeds its speed limit)` : ''
-        out.push({ severity: 'error', rule: 'motor-envelope', row: r, col: c, message: `${at(r, c)}: ${humanNumber(v)} N·m exceeds the motor envelope of ${humanNumber(env)} N·m${why}` })
+        const why = speed > limits.maxRoadSpeedKmh ? sentence` (above ${kmh(limits.maxRoadSpeedKmh)} the motor exceeds its speed limit)` : []
+        out.push(finding({ severity: 'error', rule: 'motor-envelope', ...cell(r, c), valueNm: v, limitNm: env, parts: sentence`${at(r, c)}: ${nm(v)} exceeds the motor envelope of ${nm(env)}${why}` }))
       }
       const omega = shaftSpeedRadS(limits, speed)
       const braking = brakingOf(kind, v)
-      if (braking > 0 && braking * omega > limits.batteryChargePowerW * (1 + TOL))
-        out.push({ severity: 'error', rule: 'charge-power', row: r, col: c, message: `${at(r, c)}: ${humanNumber(braking)} N·m of braking needs ${kw(braking * omega)} at the motor shaft, above the battery charge limit of ${kw(limits.batteryChargePowerW)} (${humanNumber(chargeLimitTorqueAt(limits, speed))} N·m at this speed)` })
-      if (kind === 'drive' && v > 0 && v * omega > limits.batteryDischargePowerW * (1 + TOL))
-        out.push({ severity: 'warning', rule: 'discharge-power', row: r, col: c, message: `${at(r, c)}: ${humanNumber(v)} N·m needs ${kw(v * omega)} at the motor shaft, more than the battery can deliver (${kw(limits.batteryDischargePowerW)}, ${humanNumber(dischargeLimitTorqueAt(limits, speed))} N·m at this speed)` })
+      if (braking > 0 && braking * omega > limits.batteryChargePowerW * (1 + TOL)) {
+        const limitNm = chargeLimitTorqueAt(limits, speed)
+        out.push(finding({ severity: 'error', rule: 'charge-power', ...cell(r, c), valueNm: v, limitNm, parts: sentence`${at(r, c)}: ${nm(braking)} of braking needs ${kw(braking * omega)} at the motor shaft, above the battery charge limit of ${kw(limits.batteryChargePowerW)} (${nm(limitNm)} at this speed)` }))
+      }
+      if (kind === 'drive' && v > 0 && v * omega > limits.batteryDischargePowerW * (1 + TOL)) {
+        const limitNm = dischargeLimitTorqueAt(limits, speed)
+        out.push(finding({ severity: 'warning', rule: 'discharge-power', ...cell(r, c), valueNm: v, limitNm, parts: sentence`${at(r, c)}: ${nm(v)} needs ${kw(v * omega)} at the motor shaft, more than the battery can deliver (${kw(limits.batteryDischargePowerW)}, ${nm(limitNm)} at this speed)` }))
+      }
     }
   }
   out.push(...checkBetween(table, limits), ...checkSteps(table, limits))
@@ -81,7 +87,7 @@ function checkBetween(table: MapTable, limits: MapLimits): Finding[] {
         if (excess > TOL * (1 + bound.nm) && (!worst || excess > worst.excess)) worst = { excess, speed, v, ...bound }
       }
       if (worst)
-        out.push({ severity: 'warning', rule: 'envelope-between', row: r, col: c, message: `${rowLabel(kind, rowAxis[r])}, between ${humanNumber(s0)} and ${humanNumber(s1)} km/h: interpolation reaches ${humanNumber(worst.v)} N·m at ${humanNumber(worst.speed)} km/h, above the ${worst.what} of ${humanNumber(worst.nm)} N·m there — add a speed breakpoint` })
+        out.push(finding({ severity: 'warning', rule: 'envelope-between', row: r, col: c, pedalPct: rowAxis[r], speedKmh: worst.speed, valueNm: worst.v, limitNm: worst.nm, parts: sentence`${rowLabel(kind, rowAxis[r])}, between ${kmh(s0, true)} and ${kmh(s1)}: interpolation reaches ${nm(worst.v)} at ${kmh(worst.speed)}, above the ${worst.what} of ${nm(worst.nm)} there — add a speed breakpoint` }))
     }
   }
   return out
@@ -92,7 +98,7 @@ function checkSteps(table: MapTable, limits: MapLimits): Finding[] {
   const out: Finding[] = []
   const max = stepThresholdNm(limits)
   const { kind, rowAxis, colAxis, values } = table
-  const pedalWord = kind === 'regen' ? 'brake pedal' : 'pedal'
+  const cell = (r: number, c: number, step: number) => ({ row: r, col: c, pedalPct: rowAxis[r], speedKmh: colAxis[c], valueNm: step, limitNm: max })
   for (let r = 0; r < rowAxis.length; r++) {
     for (let c = 0; c < colAxis.length; c++) {
       const v = values[r][c]
@@ -100,9 +106,9 @@ function checkSteps(table: MapTable, limits: MapLimits): Finding[] {
       const left = c > 0 ? values[r][c - 1] : NaN
       const down = r > 0 ? values[r - 1][c] : NaN
       if (Number.isFinite(left) && Math.abs(v - left) > max)
-        out.push({ severity: 'warning', rule: 'steep-step', row: r, col: c, message: `${rowLabel(kind, rowAxis[r])}, from ${humanNumber(colAxis[c - 1])} to ${humanNumber(colAxis[c])} km/h: a step of ${humanNumber(Math.abs(v - left))} N·m exceeds ${humanNumber(max)} N·m` })
+        out.push(finding({ severity: 'warning', rule: 'steep-step', ...cell(r, c, Math.abs(v - left)), parts: sentence`${rowLabel(kind, rowAxis[r])}, from ${kmh(colAxis[c - 1], true)} to ${kmh(colAxis[c])}: a step of ${nm(Math.abs(v - left))} exceeds ${nm(max)}` }))
       if (Number.isFinite(down) && Math.abs(v - down) > max)
-        out.push({ severity: 'warning', rule: 'steep-step', row: r, col: c, message: `at ${humanNumber(colAxis[c])} km/h, from ${humanNumber(rowAxis[r - 1])} to ${humanNumber(rowAxis[r])} % ${pedalWord}: a step of ${humanNumber(Math.abs(v - down))} N·m exceeds ${humanNumber(max)} N·m` })
+        out.push(finding({ severity: 'warning', rule: 'steep-step', ...cell(r, c, Math.abs(v - down)), parts: sentence`at ${kmh(colAxis[c])}, from ${rowAxis[r - 1]} to ${rowAxis[r]} % ${pedalWord(kind)}: a step of ${nm(Math.abs(v - down))} exceeds ${nm(max)}` }))
     }
   }
   return out

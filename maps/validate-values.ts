@@ -2,8 +2,8 @@
  * Rules on the values alone, needing no vehicle: pedal monotonicity and regen sign.
  * Non-finite cells are skipped (they already carry a 'not-finite' finding).
  */
-import type { Finding } from './findings'
-import { cellLabel, humanNumber } from './number-format'
+import { cellLabel, nm, pedalWord, sentence } from './finding-text'
+import { finding, type Finding } from './findings'
 import type { MapTable } from './table'
 
 /**
@@ -16,27 +16,28 @@ export function checkValues(table: MapTable): Finding[] {
   const out: Finding[] = []
   const { kind, rowAxis, colAxis, values } = table
   const at = (r: number, c: number) => cellLabel(kind, rowAxis[r], colAxis[c])
-  const pedalWord = kind === 'regen' ? 'brake pedal' : 'pedal'
+  const cell = (r: number, c: number) => ({ row: r, col: c, pedalPct: rowAxis[r], speedKmh: colAxis[c] })
   for (let c = 0; c < colAxis.length; c++) {
     for (let r = 1; r < rowAxis.length; r++) {
       const below = values[r - 1][c]
       const here = values[r][c]
       if (!Number.isFinite(below) || !Number.isFinite(here) || here >= below) continue
-      out.push({
+      const why = kind === 'drive' ? ' — a drive map must not fall as the pedal rises' : ' — regen falls as the brake pedal rises'
+      out.push(finding({
         severity: kind === 'drive' ? 'error' : 'warning',
         rule: 'pedal-monotonic',
-        row: r,
-        col: c,
-        message: `${at(r, c)}: ${humanNumber(here)} N·m is less than ${humanNumber(below)} N·m at ${humanNumber(rowAxis[r - 1])} % ${pedalWord}` +
-          (kind === 'drive' ? ' — a drive map must not fall as the pedal rises' : ' — regen falls as the brake pedal rises'),
-      })
+        ...cell(r, c),
+        valueNm: here,
+        limitNm: below,
+        parts: sentence`${at(r, c)}: ${nm(here)} is less than ${nm(below)} at ${rowAxis[r - 1]} % ${pedalWord(kind)}${why}`,
+      }))
     }
   }
   if (kind === 'regen')
     values.forEach((row, r) =>
       row.forEach((v, c) => {
         if (Number.isFinite(v) && v < 0)
-          out.push({ severity: 'error', rule: 'regen-negative', row: r, col: c, message: `${at(r, c)}: regen braking torque ${humanNumber(v)} N·m is negative; regen values must be ≥ 0` })
+          out.push(finding({ severity: 'error', rule: 'regen-negative', ...cell(r, c), valueNm: v, limitNm: 0, parts: sentence`${at(r, c)}: regen braking torque ${nm(v)} is negative; regen values must be ≥ 0` }))
       }),
     )
   return out

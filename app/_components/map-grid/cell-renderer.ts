@@ -8,7 +8,7 @@ import { baseRenderer } from 'handsontable/renderers/baseRenderer'
 import type { MapTable } from '@/maps'
 import type { ColourScale } from './colour-scale'
 import { markKey, type CellMark } from './finding-marks'
-import { fmtCell, type UnitSet } from './units'
+import { cellNumber, type UnitSet } from '@/maps'
 
 export interface RenderContext {
   table: MapTable
@@ -53,7 +53,7 @@ export function makeRenderer(store: RenderStore): Renderer {
     TD.style.backgroundColor = ''
     TD.style.color = ''
     TD.style.boxShadow = ''
-    TD.textContent = typeof value === 'number' ? fmtCell(value) : String(value ?? '')
+    TD.textContent = typeof value === 'number' ? cellNumber(value) : String(value ?? '')
     // Inline like the value colours, so the theme's cell background cannot win over the axis band.
     if (isAxis) TD.style.backgroundColor = row === 0 && col === 0 ? AXIS_CORNER : AXIS_BAND
     if (!isAxis && typeof value === 'number') {

@@ -5,10 +5,9 @@
  */
 import { useQuery } from '@tanstack/react-query'
 import Link from 'next/link'
-import { cellLabel, diff, type MapTable } from '@/maps'
+import { cellLabel, diff, type MapTable, humanNumber, renderParts, type UnitSet } from '@/maps'
 import { api } from '@/app/_components/api-client'
 import type { RevisionAnswer } from './api-types'
-import { fmt, toUnits, type UnitSet } from './units'
 
 export interface ConflictPanelProps {
   mapId: number
@@ -43,8 +42,8 @@ export function ConflictPanel({ mapId, message, latestNumber, baseTable, units: 
           </p>
           {big && (
             <p>
-              Largest change {toUnits(cellLabel(baseTable.kind, big.pedalPct, big.speedKmh), u)}: {fmt(u.torqueOut(big.before))} → {fmt(u.torqueOut(big.after))} {u.torque} ({big.delta > 0 ? '+' : ''}
-              {fmt(u.torqueOut(big.delta))} {u.torque}).
+              Largest change {renderParts(cellLabel(baseTable.kind, big.pedalPct, big.speedKmh), u)}: {humanNumber(u.torqueOut(big.before))} → {humanNumber(u.torqueOut(big.after))} {u.torque} ({big.delta > 0 ? '+' : ''}
+              {humanNumber(u.torqueOut(big.delta))} {u.torque}).
             </p>
           )}
           <div className="flex flex-wrap gap-2 pt-1">

@@ -3,8 +3,7 @@
  * column 0 holds the pedal breakpoints, the rest are torque values. Keeping the axes inside
  * the data lets a calibrator edit a breakpoint like any cell and paste a block that carries them.
  */
-import { mapSelection, parseExact, setBreakpoint, type AxisName, type MapTable } from '@/maps'
-import type { UnitSet } from './units'
+import { mapSelection, parseExact, setBreakpoint, type AxisName, type MapTable, type UnitSet } from '@/maps'
 
 export type GridCell = number | string
 /** One edit as the grid reports it: grid row, grid column, the new raw value. */

@@ -4,7 +4,7 @@
  * workspace, save, import and export. Loaded in the browser only (see lazy.tsx).
  */
 import { useCallback, useMemo, useRef, useState } from 'react'
-import { validate, type MapLimits, type MapTable } from '@/maps'
+import { validate, type MapLimits, type MapTable, UNITS, type UnitSystem } from '@/maps'
 import { ExportLinks } from './export-links'
 import { applyGridEdits, type GridEdit } from './grid-data'
 import { ImportPanel } from './import-panel'
@@ -14,7 +14,6 @@ import { SavePanel } from './save-panel'
 import type { GridRange } from './selection'
 import { Toolbar } from './toolbar'
 import { UnitSwitch } from './unit-switch'
-import { UNITS, type UnitSystem } from './units'
 import { useMapDraft } from './use-map-draft'
 import { useUndoKeys } from './use-undo-keys'
 import { TractionShadingControls, useTractionShade, type ShadingChoice } from './traction-shading'

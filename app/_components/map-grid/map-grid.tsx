@@ -19,7 +19,7 @@ import type { ColourScale } from './colour-scale'
 import { markCells } from './finding-marks'
 import { toGridData, type GridEdit } from './grid-data'
 import type { GridRange } from './selection'
-import type { UnitSet } from './units'
+import type { UnitSet } from '@/maps'
 
 // Only what the editor uses, so the page does not ship every Handsontable feature.
 registerCellType(TextCellType)

@@ -4,7 +4,7 @@
  * read-only revision view. Picking a finding selects its cell; the plot follows the selection.
  */
 import { useCallback, useMemo, useState } from 'react'
-import { validate, type Finding, type MapLimits, type MapTable } from '@/maps'
+import { validate, type Finding, type MapLimits, type MapTable, findingMessage, type UnitSet } from '@/maps'
 import { ColourLegend } from './colour-legend'
 import { colourScale } from './colour-scale'
 import { FindingsList } from './findings-list'
@@ -12,7 +12,6 @@ import type { GridEdit } from './grid-data'
 import MapGrid, { type GridApi, type MapGridProps } from './map-grid'
 import type { GridRange } from './selection'
 import { SmallPlot } from './small-plot'
-import { toUnits, type UnitSet } from './units'
 
 export interface MapWorkspaceProps {
   table: MapTable
@@ -31,7 +30,7 @@ export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, on
   const [along, setAlong] = useState<'speed' | 'pedal'>('speed')
   const findings = useMemo(() => validate(table, limits ?? undefined), [table, limits])
   const scale = useMemo(() => colourScale(table.values, limits?.motorPeakTorqueNm), [table, limits])
-  const describe = useCallback((f: Finding) => toUnits(f.message, units), [units])
+  const describe = useCallback((f: Finding) => findingMessage(f, units), [units])
   const onApi = useCallback(
     (a: GridApi | null) => {
       setApi(a)

@@ -2,10 +2,9 @@
  * The toolbar's operations, each a call into maps/ with the typed input converted from display
  * units to SI. Errors are thrown with messages a calibrator can act on.
  */
-import { addOffset, clampToEnvelope, fillLinear, insertBreakpoint, mapSelection, removeBreakpoint, scaleBy, setValue, smooth, wholeTable, type MapLimits, type MapTable } from '@/maps'
+import { addOffset, clampToEnvelope, fillLinear, insertBreakpoint, mapSelection, removeBreakpoint, scaleBy, setValue, smooth, wholeTable, type MapLimits, type MapTable, type UnitSet } from '@/maps'
 import { readCell } from './grid-data'
 import { selectedCol, selectedRow, valueSelection, type GridRange } from './selection'
-import type { UnitSet } from './units'
 
 export type OpName = 'set' | 'scale' | 'offset' | 'fill-rows' | 'fill-cols' | 'smooth' | 'clamp' | 'insert-row' | 'insert-col' | 'remove-row' | 'remove-col'
 

@@ -1,12 +1,11 @@
 'use client'
 /** Read-only view of one saved revision: grid, findings, plot, unit switch and exports. */
 import { useMemo, useState } from 'react'
-import { validate, type MapLimits, type MapTable } from '@/maps'
+import { validate, type MapLimits, type MapTable, UNITS, type UnitSystem } from '@/maps'
 import { ExportLinks } from './export-links'
 import { MapWorkspace } from './map-workspace'
 import type { GridRange } from './selection'
 import { UnitSwitch } from './unit-switch'
-import { UNITS, type UnitSystem } from './units'
 
 export interface RevisionViewerProps {
   mapId: number

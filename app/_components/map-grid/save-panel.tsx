@@ -17,7 +17,7 @@ import { api, ApiError } from '@/app/_components/api-client'
 import { conflictDetails, type SaveAnswer } from './api-types'
 import { ConflictPanel } from './conflict-panel'
 import type { Base } from './use-map-draft'
-import type { UnitSet } from './units'
+import type { UnitSet } from '@/maps'
 
 /** The part of the save body typed here; the table and the parent revision come from the editor. */
 const saveFieldsSchema = saveRevisionSchema.pick({ message: true, notes: true })

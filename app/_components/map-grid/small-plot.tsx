@@ -4,9 +4,8 @@
  * with the motor limit for reference. Hand-drawn SVG instead of a plotting library keeps the
  * editor page light.
  */
-import { chargeLimitTorqueAt, motorEnvelopeAt, type MapLimits, type MapTable } from '@/maps'
+import { chargeLimitTorqueAt, motorEnvelopeAt, type MapLimits, type MapTable, humanNumber, type UnitSet } from '@/maps'
 import { extent, linear, niceTicks } from './plot-scale'
-import { fmt, type UnitSet } from './units'
 
 export interface SmallPlotProps {
   table: MapTable
@@ -42,7 +41,7 @@ export function SmallPlot({ table, units: u, limits, along, index }: SmallPlotPr
   const y = linear(y0, y1, H - M.b, M.t)
   const path = (pts: [number, number][]) => pts.map(([a, b], i) => `${i ? 'L' : 'M'}${x(a).toFixed(1)},${y(b).toFixed(1)}`).join(' ')
   const pts = xs.map((v, i): [number, number] => [v, ys[i]])
-  const what = bySpeed ? `${fmt(table.rowAxis[index])} % ${table.kind === 'regen' ? 'brake ' : ''}pedal` : `${fmt(u.speedOut(table.colAxis[index]))} ${u.speed}`
+  const what = bySpeed ? `${humanNumber(table.rowAxis[index])} % ${table.kind === 'regen' ? 'brake ' : ''}pedal` : `${humanNumber(u.speedOut(table.colAxis[index]))} ${u.speed}`
   const limitName = table.kind === 'regen' ? 'braking limit (motor and battery charge)' : 'motor limit'
 
   return (
@@ -55,11 +54,11 @@ export function SmallPlot({ table, units: u, limits, along, index }: SmallPlotPr
         {niceTicks(y0, y1).map((t) => (
           <g key={`y${t}`}>
             <line x1={M.l} x2={W - M.r} y1={y(t)} y2={y(t)} stroke="#e5e7eb" />
-            <text x={M.l - 4} y={y(t) + 3} fontSize={10} textAnchor="end" fill="#475569">{fmt(t)}</text>
+            <text x={M.l - 4} y={y(t) + 3} fontSize={10} textAnchor="end" fill="#475569">{humanNumber(t)}</text>
           </g>
         ))}
         {niceTicks(xs[0], xs[xs.length - 1]).map((t) => (
-          <text key={`x${t}`} x={x(t)} y={H - M.b + 14} fontSize={10} textAnchor="middle" fill="#475569">{fmt(t)}</text>
+          <text key={`x${t}`} x={x(t)} y={H - M.b + 14} fontSize={10} textAnchor="middle" fill="#475569">{humanNumber(t)}</text>
         ))}
         <line x1={M.l} x2={W - M.r} y1={H - M.b} y2={H - M.b} stroke="#94a3b8" />
         <line x1={M.l} x2={M.l} y1={M.t} y2={H - M.b} stroke="#94a3b8" />

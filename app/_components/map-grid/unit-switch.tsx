@@ -1,6 +1,6 @@
 'use client'
 /** Metric / imperial display switch. Only the display changes; stored values stay SI. */
-import type { UnitSystem } from './units'
+import type { UnitSystem } from '@/maps'
 
 export function UnitSwitch({ value, onChange }: { value: UnitSystem; onChange: (u: UnitSystem) => void }) {
   const option = (u: UnitSystem, label: string) => (

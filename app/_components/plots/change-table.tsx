@@ -1,7 +1,7 @@
 'use client'
 /** The changed cells of a comparison or a proposal, largest change first, in the chosen units. */
 import { useState } from 'react'
-import { fmt1, type PlotUnits } from './units'
+import { tableNumber, type UnitSet } from '@/maps'
 
 export interface ChangeRow {
   pedalPct: number
@@ -14,7 +14,7 @@ export interface ChangeRow {
 
 const FIRST = 25
 
-export function ChangeTable({ rows, units: u, testId = 'change-table', empty = 'No cell changed.' }: { rows: ChangeRow[]; units: PlotUnits; testId?: string; empty?: string }) {
+export function ChangeTable({ rows, units: u, testId = 'change-table', empty = 'No cell changed.' }: { rows: ChangeRow[]; units: UnitSet; testId?: string; empty?: string }) {
   const [all, setAll] = useState(false)
   if (rows.length === 0) return <p className="text-sm text-slate-600" data-testid={testId}>{empty}</p>
   const shown = all ? rows : rows.slice(0, FIRST)
@@ -39,12 +39,12 @@ export function ChangeTable({ rows, units: u, testId = 'change-table', empty = '
               const d = r.after - r.before
               return (
                 <tr key={`${r.pedalPct}-${r.speedKmh}`} className="border-t border-line">
-                  <td className="px-2 py-0.5">{fmt1(r.pedalPct)} %</td>
-                  <td className="px-2">{fmt1(u.speedOut(r.speedKmh))}</td>
-                  <td className="px-2 text-right">{fmt1(u.torqueOut(r.before))}</td>
-                  <td className="px-2 text-right">{fmt1(u.torqueOut(r.after))}</td>
-                  <td className={`px-2 text-right font-medium ${d < 0 ? 'text-danger' : 'text-accent'}`}>{d > 0 ? '+' : ''}{fmt1(u.torqueOut(d))}</td>
-                  <td className="px-2 text-right">{r.before !== 0 ? `${d > 0 ? '+' : ''}${fmt1((100 * d) / Math.abs(r.before))}` : '—'}</td>
+                  <td className="px-2 py-0.5">{tableNumber(r.pedalPct)} %</td>
+                  <td className="px-2">{tableNumber(u.speedOut(r.speedKmh))}</td>
+                  <td className="px-2 text-right">{tableNumber(u.torqueOut(r.before))}</td>
+                  <td className="px-2 text-right">{tableNumber(u.torqueOut(r.after))}</td>
+                  <td className={`px-2 text-right font-medium ${d < 0 ? 'text-danger' : 'text-accent'}`}>{d > 0 ? '+' : ''}{tableNumber(u.torqueOut(d))}</td>
+                  <td className="px-2 text-right">{r.before !== 0 ? `${d > 0 ? '+' : ''}${tableNumber((100 * d) / Math.abs(r.before))}` : '—'}</td>
                   {hasNote && <td className="px-2 text-slate-600">{r.note}</td>}
                 </tr>
               )

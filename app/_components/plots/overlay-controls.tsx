@@ -1,7 +1,7 @@
 'use client'
 /** The selects that choose the physics overlay (load case, surface, grade) and the display units. */
 import { LOAD_CASE_LABELS, SURFACE_IDS, SURFACES, type LoadCase, type SurfaceId } from '@/physics'
-import type { UnitSystem } from './units'
+import type { UnitSystem } from '@/maps'
 
 export interface OverlayChoice {
   loadCase: LoadCase

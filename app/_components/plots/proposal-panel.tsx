@@ -13,14 +13,14 @@ import { ChangeTable } from './change-table'
 import type { OverlayChoice } from './overlay-controls'
 import { LOAD_CASE_LABELS } from '@/physics/load-cases'
 import { SURFACES } from '@/physics/surfaces'
-import { fmt0, type PlotUnits } from './units'
+import { tableNumber, type UnitSet } from '@/maps'
 
 export interface ProposalPanelProps {
   mapId: number
   mapName: string
   baseNumber: number
   choice: OverlayChoice
-  units: PlotUnits
+  units: UnitSet
 }
 
 export function ProposalPanel({ mapId, mapName, baseNumber, choice, units }: ProposalPanelProps) {
@@ -59,7 +59,7 @@ export function ProposalPanel({ mapId, mapName, baseNumber, choice, units }: Pro
           <p className="text-sm" data-testid="proposal-summary">
             {p.changes.length === 0
               ? 'Every cell is already under the traction limit less the margin; nothing to change.'
-              : `${p.changes.length} cells lowered; ceiling ${fmt0(units.torqueOut(Math.min(...p.ceilingByCol)))}–${fmt0(units.torqueOut(Math.max(...p.ceilingByCol)))} ${units.torque}. Not saved yet.`}
+              : `${p.changes.length} cells lowered; ceiling ${tableNumber(units.torqueOut(Math.min(...p.ceilingByCol)), 0)}–${tableNumber(units.torqueOut(Math.max(...p.ceilingByCol)), 0)} ${units.torque}. Not saved yet.`}
           </p>
           {p.baseNumber !== p.latestNumber && (
             <p className="rounded bg-amber-50 px-2 py-1 text-sm text-amber-900">

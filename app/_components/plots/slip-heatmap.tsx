@@ -8,7 +8,7 @@ import type { Data } from 'plotly.js'
 import type { MapTable } from '@/maps'
 import { SLIP_SCALE, SOLID_BEYOND } from './palette'
 import { Plot } from './plot'
-import { fmt1, type PlotUnits } from './units'
+import { tableNumber, type UnitSet } from '@/maps'
 
 export interface SlipOverlay {
   slip: (number | null)[][]
@@ -21,7 +21,7 @@ export interface SlipOverlay {
 export interface SlipHeatmapProps {
   table: MapTable
   overlay: SlipOverlay
-  units: PlotUnits
+  units: UnitSet
   title: string
   filename: string
   testId: string
@@ -29,8 +29,8 @@ export interface SlipHeatmapProps {
 
 export function SlipHeatmap({ table, overlay, units: u, title, filename, testId }: SlipHeatmapProps) {
   // Categories, not numbers: the breakpoints are uneven, and every cell should be as wide as in the grid.
-  const x = table.colAxis.map((s) => fmt1(u.speedOut(s)))
-  const y = table.rowAxis.map((p) => `${fmt1(p)} %`)
+  const x = table.colAxis.map((s) => tableNumber(u.speedOut(s)))
+  const y = table.rowAxis.map((p) => `${tableNumber(p)} %`)
   const beyond = table.kind === 'regen' ? 'lock' : 'spin'
   const util = overlay.utilisation.map((row) => row.map((v) => `${Math.round(v * 100)} %`))
   const data: Data[] = [

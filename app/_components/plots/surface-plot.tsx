@@ -8,11 +8,11 @@ import type { Data, Scene } from 'plotly.js'
 import type { MapTable } from '@/maps'
 import { TORQUE_SCALE, SOLID_LIMIT } from './palette'
 import { Plot, type RelayoutEvent } from './plot'
-import type { PlotUnits } from './units'
+import type { UnitSet } from '@/maps'
 
 export interface SurfacePlotProps {
   table: MapTable
-  units: PlotUnits
+  units: UnitSet
   title: string
   filename: string
   /** Shared colour range, in stored N·m (so two plots compare colour for colour). */

@@ -1,6 +1,6 @@
 /** Shapes shared by the compare page's server loader and its client view. */
 import type { OverlayChoice } from '@/app/_components/plots/overlay-controls'
-import { unitSystem } from '@/app/_components/plots/units'
+import { unitSystem } from '@/maps'
 import type { MapOverlay } from '@/physics/overlay'
 import { SURFACE_IDS, type LoadCase, type SurfaceId } from '@/physics'
 import type { MapDiff, MapTable } from '@/maps'

@@ -4,7 +4,7 @@ import { useMemo, useState } from 'react'
 import { ChangeTable, type ChangeRow } from '@/app/_components/plots/change-table'
 import { DIFF_SCALE } from '@/app/_components/plots/palette'
 import { SurfacePlot, type Camera } from '@/app/_components/plots/surface-plot'
-import type { PlotUnits } from '@/app/_components/plots/units'
+import type { UnitSet } from '@/maps'
 import type { MapDiff, MapTable } from '@/maps'
 import type { MapOverlay } from '@/physics/overlay'
 import type { Side } from './compare-data'
@@ -13,7 +13,7 @@ interface Props {
   a: Side
   b: Side
   diff: MapDiff
-  units: PlotUnits
+  units: UnitSet
   limits: { a?: MapOverlay; b?: MapOverlay } | null
   rows: ChangeRow[]
 }

@@ -9,7 +9,7 @@ import { useMemo, useState } from 'react'
 import { OverlayControls } from '@/app/_components/plots/overlay-controls'
 import { ProposalPanel } from '@/app/_components/plots/proposal-panel'
 import { SlipHeatmap } from '@/app/_components/plots/slip-heatmap'
-import { PLOT_UNITS } from '@/app/_components/plots/units'
+import { UNITS } from '@/maps'
 import { useOverlay } from '@/app/_components/plots/use-overlay'
 import { useQueryState } from '@/app/_components/plots/use-query-state'
 import type { CompareViewData } from './compare-data'
@@ -19,7 +19,7 @@ export function CompareView(props: CompareViewData & { canEdit: boolean }) {
   const { a, b, diff, initialChoice, initialOverlays } = props
   const [choice, setChoice] = useQueryState(initialChoice)
   const [showLimit, setShowLimit] = useState(true)
-  const units = PLOT_UNITS[choice.units]
+  const units = UNITS[choice.units]
   const oa = useOverlay(a.mapId, a.number, choice, { choice: initialChoice, overlay: initialOverlays.a })
   const ob = useOverlay(b.mapId, b.number, choice, { choice: initialChoice, overlay: initialOverlays.b })
   const label = (s: typeof a) => `${s.mapName} r${s.number}`

@@ -6,12 +6,12 @@ import type { OverlayChoice } from '@/app/_components/plots/overlay-controls'
 import { ProposalPanel } from '@/app/_components/plots/proposal-panel'
 import { SlipHeatmap } from '@/app/_components/plots/slip-heatmap'
 import { SurfacePlot } from '@/app/_components/plots/surface-plot'
-import type { PlotUnits } from '@/app/_components/plots/units'
+import type { UnitSet } from '@/maps'
 import { useOverlay } from '@/app/_components/plots/use-overlay'
 import type { MapTable } from '@/maps'
 import type { ProgramMap } from './physics-workbench'
 
-export function MapPhysics({ map, rev, choice, units, canEdit }: { map: ProgramMap; rev: number; choice: OverlayChoice; units: PlotUnits; canEdit: boolean }) {
+export function MapPhysics({ map, rev, choice, units, canEdit }: { map: ProgramMap; rev: number; choice: OverlayChoice; units: UnitSet; canEdit: boolean }) {
   const table = useQuery({
     queryKey: ['revision-table', map.id, rev],
     queryFn: () => api<{ revision: { table: MapTable } }>(`/api/maps/${map.id}/revisions/${rev}`).then((r) => r.revision.table),

@@ -4,7 +4,7 @@
  * map with its traction-limit sheet and slip heat map, and the launch or lift-off simulation.
  */
 import { OverlayControls, type OverlayChoice } from '@/app/_components/plots/overlay-controls'
-import { PLOT_UNITS, unitSystem } from '@/app/_components/plots/units'
+import { UNITS, unitSystem } from '@/maps'
 import { useQueryState } from '@/app/_components/plots/use-query-state'
 import type { TractionRow } from '@/app/_lib/physics/traction'
 import { SURFACE_IDS, type LoadCase } from '@/physics'
@@ -42,7 +42,7 @@ function initialState(q: Props['query'], maps: ProgramMap[], loadCases: LoadCase
 
 export function PhysicsWorkbench(props: Props) {
   const [state, setState] = useQueryState<State>(initialState(props.query, props.maps, props.loadCases))
-  const units = PLOT_UNITS[state.units]
+  const units = UNITS[state.units]
   const map = props.maps.find((m) => m.id === state.map)
   return (
     <div className="space-y-4">

@@ -7,13 +7,13 @@ import { useMutation } from '@tanstack/react-query'
 import { useState } from 'react'
 import { api } from '@/app/_components/api-client'
 import type { OverlayChoice } from '@/app/_components/plots/overlay-controls'
-import { fmt1, type PlotUnits } from '@/app/_components/plots/units'
+import { tableNumber, type UnitSet } from '@/maps'
 import type { SimulationResponse } from '@/app/_lib/physics/simulate'
 import type { ProgramMap } from './physics-workbench'
 import { SimulationPlots } from './simulation-plots'
 import { SimulationSummary } from './simulation-summary'
 
-export function SimulationPanel({ map, rev, choice, units }: { map: ProgramMap; rev: number; choice: OverlayChoice; units: PlotUnits }) {
+export function SimulationPanel({ map, rev, choice, units }: { map: ProgramMap; rev: number; choice: OverlayChoice; units: UnitSet }) {
   const launch = map.kind === 'drive'
   const [pedalPct, setPedal] = useState(100)
   const [rampS, setRamp] = useState(0)
@@ -51,7 +51,7 @@ export function SimulationPanel({ map, rev, choice, units }: { map: ProgramMap; 
         )}
         {num('Duration (s)', durationS, setDuration, 1, 60)}
         <button type="submit" className="btn-primary" disabled={run.isPending}>{run.isPending ? 'Running…' : `Run ${launch ? 'launch' : 'lift-off'}`}</button>
-        {!launch && units.system === 'imperial' && <span className="text-xs text-slate-500">= {fmt1(units.speedOut(initialSpeedKmh))} {units.speed}</span>}
+        {!launch && units.system === 'imperial' && <span className="text-xs text-slate-500">= {tableNumber(units.speedOut(initialSpeedKmh))} {units.speed}</span>}
       </form>
       {run.error && <p className="error-text" role="alert">{run.error.message}</p>}
       {run.data && (

@@ -1,10 +1,10 @@
 'use client'
 /** Time plots of a simulation: speeds, slip against the tyre peak, motor torque, acceleration and jerk. */
 import { TimePlot } from '@/app/_components/plots/time-plot'
-import type { PlotUnits } from '@/app/_components/plots/units'
+import type { UnitSet } from '@/maps'
 import type { SimulationResponse } from '@/app/_lib/physics/simulate'
 
-export function SimulationPlots({ result, units: u, filename }: { result: SimulationResponse; units: PlotUnits; filename: string }) {
+export function SimulationPlots({ result, units: u, filename }: { result: SimulationResponse; units: UnitSet; filename: string }) {
   const s = result.series
   const peak = result.summary.tyrePeakSlip
   const peakRef = peak === null ? [] : [result.mode === 'launch' ? { y: peak, label: 'tyre peak' } : { y: -peak, label: 'tyre peak' }]

@@ -1,12 +1,12 @@
 'use client'
 /** The summary figures of a launch or lift-off, in the chosen units. */
-import { fmt1, type PlotUnits } from '@/app/_components/plots/units'
+import { tableNumber, type UnitSet } from '@/maps'
 import type { SimulationResponse } from '@/app/_lib/physics/simulate'
 
 const secs = (s: number | null) => (s === null ? 'not reached' : `${s.toFixed(2)} s`)
 
-export function SimulationSummary({ result, units: u }: { result: SimulationResponse; units: PlotUnits }) {
-  const speed = (kmh: number) => `${fmt1(u.speedOut(kmh))} ${u.speed}`
+export function SimulationSummary({ result, units: u }: { result: SimulationResponse; units: UnitSet }) {
+  const speed = (kmh: number) => `${tableNumber(u.speedOut(kmh))} ${u.speed}`
   const items: [string, string, boolean?][] =
     result.mode === 'launch'
       ? [

@@ -3,10 +3,10 @@
 import { useQuery } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
 import { LOAD_CASE_LABELS } from '@/physics/load-cases'
-import { fmt0, fmt1, type PlotUnits } from '@/app/_components/plots/units'
+import { tableNumber, type UnitSet } from '@/maps'
 import type { TractionRow } from '@/app/_lib/physics/traction'
 
-export function TractionTable({ programId, initial, units: u }: { programId: number; initial: TractionRow[]; units: PlotUnits }) {
+export function TractionTable({ programId, initial, units: u }: { programId: number; initial: TractionRow[]; units: UnitSet }) {
   const q = useQuery({
     queryKey: ['traction', programId],
     queryFn: () => api<{ rows: TractionRow[] }>(`/api/programs/${programId}/traction`).then((r) => r.rows),
@@ -19,7 +19,7 @@ export function TractionTable({ programId, initial, units: u }: { programId: num
       <h2 className="text-lg font-semibold">Traction limits</h2>
       <p className="text-sm text-slate-600">
         Largest force the drive axle can put on the road before the tyres pass their peak, with the load transfer of that force
-        (level road, lowest gear). “Motor can give” is the motor and battery limit at {fmt1(u.speedOut(5))} {u.speed}.
+        (level road, lowest gear). “Motor can give” is the motor and battery limit at {tableNumber(u.speedOut(5))} {u.speed}.
       </p>
       <div className="overflow-x-auto">
         <table className="w-full text-sm tabular-nums" data-testid="traction-table">
@@ -41,13 +41,13 @@ export function TractionTable({ programId, initial, units: u }: { programId: num
                 <tr key={`${r.surface}-${r.loadCase}`} className="border-t border-line">
                   <td className="py-1">{r.surfaceLabel} <span className="text-slate-500">μ {r.peakMu}</span></td>
                   <td>{LOAD_CASE_LABELS[r.loadCase]}</td>
-                  <td className="text-right">{fmt1(r.driveLimitKN)}{r.driveLimitedBy === 'steer-axle-lift' ? ' (steer axle lifts)' : ''}</td>
+                  <td className="text-right">{tableNumber(r.driveLimitKN)}{r.driveLimitedBy === 'steer-axle-lift' ? ' (steer axle lifts)' : ''}</td>
                   <td className={`text-right ${spins ? 'font-semibold text-danger' : ''}`} title={spins ? 'Full pedal at low speed can spin the drive axle' : undefined}>
-                    {fmt0(u.torqueOut(r.driveTorqueAtLimitNm))}
+                    {tableNumber(u.torqueOut(r.driveTorqueAtLimitNm), 0)}
                   </td>
-                  <td className="text-right">{fmt0(u.torqueOut(r.lowSpeedEnvelopeNm))}</td>
-                  <td className="text-right">{fmt1(r.regenLimitKN)}</td>
-                  <td className="text-right">{fmt0(u.torqueOut(r.regenTorqueAtLimitNm))}</td>
+                  <td className="text-right">{tableNumber(u.torqueOut(r.lowSpeedEnvelopeNm), 0)}</td>
+                  <td className="text-right">{tableNumber(r.regenLimitKN)}</td>
+                  <td className="text-right">{tableNumber(u.torqueOut(r.regenTorqueAtLimitNm), 0)}</td>
                 </tr>
               )
             })}

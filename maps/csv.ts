@@ -8,8 +8,8 @@
  * First row: a corner cell, then the speed breakpoints (km/h). Each further row: a pedal
  * breakpoint (%), then the torque requests (N·m) at those speeds.
  */
+import Papa from 'papaparse'
 import { MapFormatError } from './errors'
-import { splitCsv, type CsvLine } from './csv-split'
 import { formatExact, parseExact } from './number-format'
 import { assertFiniteTable, MAX_BREAKPOINTS, MIN_BREAKPOINTS, type MapKind, type MapTable } from './table'
 
@@ -28,6 +28,41 @@ export function toCsv(table: MapTable): string {
   const lines = [[CSV_CORNER[table.kind], ...table.colAxis.map(formatExact)].join(',')]
   table.rowAxis.forEach((p, r) => lines.push([formatExact(p), ...table.values[r].map(formatExact)].join(',')))
   return lines.join('\n') + '\n'
+}
+
+interface CsvLine {
+  /** 1-based line number in the file. */
+  line: number
+  cells: string[]
+}
+
+/** The cells of one line split by papaparse; a quote left open is refused at the cell it opens. */
+function cellsOf(text: string, delimiter: ',' | ';', line: number): string[] {
+  const { data, errors } = Papa.parse<string[]>(text, { delimiter, quoteChar: '"', newline: '\n' })
+  const cells = data[0] ?? ['']
+  if (errors.some((e) => e.code === 'MissingQuotes')) throw new MapFormatError('bad-quote', 'a quoted cell is not closed', line, cells.length)
+  return cells
+}
+
+/**
+ * Non-empty lines split into cells, with their line numbers. A quoted cell never spans lines
+ * (a map cell holds a number), so each line is split alone and errors keep their position.
+ * The delimiter is the one of `,` and `;` that splits the header into more cells (`;` files
+ * from decimal-comma locales still have more `;` than `,`). Trailing blank lines are dropped;
+ * a blank line before the end is refused (it usually means two tables were pasted together).
+ */
+function splitCsv(text: string): { delimiter: ',' | ';'; lines: CsvLine[] } {
+  const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text
+  const raw = body.split(/\r\n|\n|\r/)
+  while (raw.length > 0 && raw[raw.length - 1].trim() === '') raw.pop()
+  if (raw.length === 0) throw new MapFormatError('empty-file', 'the file is empty', 1, 1)
+  const fields = (d: ',' | ';') => Papa.parse<string[]>(raw[0], { delimiter: d, quoteChar: '"', newline: '\n' }).data[0]?.length ?? 0
+  const delimiter = fields(';') > fields(',') ? ';' : ','
+  const lines = raw.map((t, i) => {
+    if (t.trim() === '') throw new MapFormatError('empty-line', 'the line is empty; a map is one block of rows', i + 1, 1)
+    return { line: i + 1, cells: cellsOf(t, delimiter, i + 1) }
+  })
+  return { delimiter, lines }
 }
 
 function number(text: string, delimiter: string, line: number, column: number): number {

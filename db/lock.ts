@@ -15,13 +15,18 @@ export class DatabaseLockedError extends Error {
   }
 }
 
+/** The `code` of a Node system error (EPERM, EEXIST, …), if it has one. */
+function errorCode(e: unknown): unknown {
+  return e instanceof Error && 'code' in e ? e.code : undefined
+}
+
 function isAlive(pid: number): boolean {
   try {
     process.kill(pid, 0)
     return true
   } catch (e) {
     // EPERM means the process exists but belongs to someone else: still a live holder.
-    return (e as NodeJS.ErrnoException).code === 'EPERM'
+    return errorCode(e) === 'EPERM'
   }
 }
 
@@ -46,7 +51,7 @@ export function lockDataDir(dir: string): () => void {
       process.once('exit', release)
       return release
     } catch (e) {
-      if ((e as NodeJS.ErrnoException).code !== 'EEXIST') throw e
+      if (errorCode(e) !== 'EEXIST') throw e
       const holder = Number.parseInt(fs.readFileSync(file, 'utf8').trim(), 10)
       if (holder === process.pid) return () => {}
       if (Number.isInteger(holder) && holder > 0 && isAlive(holder)) throw new DatabaseLockedError(dir, holder)

@@ -1,6 +1,10 @@
 import 'server-only'
 import fs from 'node:fs'
+import { z } from 'zod'
 import { env } from '../config/env'
+
+/** One line of the capture file, as the local SMTP stand-in writes it. */
+const capturedLine = z.object({ receivedAt: z.string(), from: z.string(), to: z.array(z.string()), raw: z.string() })
 
 export interface CapturedMessage {
   receivedAt: string
@@ -29,7 +33,7 @@ export function readCapturedMail(limit = 200): CapturedMessage[] {
   if (!file || !fs.existsSync(file)) return []
   const lines = fs.readFileSync(file, 'utf8').trim().split('\n').filter(Boolean).slice(-limit).reverse()
   return lines.map((l) => {
-    const m = JSON.parse(l) as { receivedAt: string; from: string; to: string[]; raw: string }
+    const m = capturedLine.parse(JSON.parse(l))
     const split = m.raw.search(/\r?\n\r?\n/)
     const head = m.raw.slice(0, split)
     const subject = /^Subject: (.*(?:\r?\n[ \t].*)*)/im.exec(head)?.[1] ?? ''

@@ -24,7 +24,7 @@ export function proposeFor(vehicle: VehicleParams, table: MapTable, body: Propos
   return physics(() => {
     const limits = tractionLimitTorqueBySpeed({ vehicle, loadCase: body.loadCase, surface: body.surface, gradeRad: gradeRad(body.gradePct), colAxis: table.colAxis, kind: table.kind })
     const p = proposeTractionSafe(table, limits.map((l) => l.tractionLimitNm), body.marginPct)
-    return { table: p.table as MapTable, changes: p.changes, ceilingByCol: p.ceilingByCol }
+    return { table: p.table, changes: p.changes, ceilingByCol: p.ceilingByCol }
   })
 }
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { sql } from 'drizzle-orm'
+import { z } from 'zod'
 import { getDb } from '@/db/client'
 import { LINK_KINDS } from '@/domain/one-time-links'
 import { LOG_STATUSES } from '@/domain/log-statuses'
@@ -27,12 +28,15 @@ const CHECKS: [name: string, ids: readonly string[]][] = [
   ['auth_tokens_kind_check', LINK_KINDS],
 ]
 
+// The raw-query result shape differs between the two drivers' types; both carry `rows`.
+const rowsOf = <T extends z.ZodType>(row: T, result: unknown) => z.object({ rows: z.array(row) }).parse(result)
+
 describe('CHECK constraints derived from the domain constants', () => {
   it.each(CHECKS)('%s lists exactly the ids of its constant', async (name, ids) => {
     const db = await getDb()
-    const rows = await db.execute<{ def: string }>(sql`select pg_get_constraintdef(oid) as def from pg_constraint where conname = ${name}`)
-    expect(rows.rows).toHaveLength(1)
-    const listed = [...rows.rows[0].def.matchAll(/'([^']*)'/g)].map((m) => m[1])
+    const { rows } = rowsOf(z.object({ def: z.string() }), await db.execute(sql`select pg_get_constraintdef(oid) as def from pg_constraint where conname = ${name}`))
+    expect(rows).toHaveLength(1)
+    const listed = [...rows[0].def.matchAll(/'([^']*)'/g)].map((m) => m[1])
     expect([...listed].sort()).toEqual([...ids].sort())
   })
 
@@ -40,7 +44,7 @@ describe('CHECK constraints derived from the domain constants', () => {
     const db = await getDb()
     await expect(db.execute(sql`insert into mail_outbox ("to", subject, text, status) values ('[]'::jsonb, 's', 't', 'bounced')`)).rejects.toThrow()
     const { mapId, engineer } = await programAndMap()
-    const [rev] = (await db.execute<{ id: number }>(sql`select id from map_revisions where map_id = ${mapId}`)).rows
+    const [rev] = rowsOf(z.object({ id: z.number() }), await db.execute(sql`select id from map_revisions where map_id = ${mapId}`)).rows
     const insertEvent = (action: string) =>
       db.execute(sql`insert into revision_events (revision_id, actor_id, action, from_state, to_state) values (${rev.id}, ${engineer.id}, ${action}, 'draft', 'in_review')`)
     await expect(insertEvent('publish')).rejects.toThrow()

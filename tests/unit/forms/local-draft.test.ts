@@ -4,7 +4,7 @@ import { z } from 'zod'
 import { readDraft, removeDraft, writeDraft, type DraftStorage } from '@/app/_components/local-draft'
 import { mapDraftKey, mapDraftSchema } from '@/app/_components/map-grid/draft-storage'
 import { reportDraftKey, reportDraftSchema } from '@/app/(app)/reports/report-draft'
-import { small } from '../maps/fixtures'
+import { small } from '@/tests/support/fixtures'
 
 /** localStorage's contract on a Map; `fail` makes the named calls throw like a blocked or full storage. */
 function memoryStorage(fail: { get?: boolean; set?: boolean; remove?: boolean } = {}): DraftStorage & { items: Map<string, string> } {

@@ -1,7 +1,7 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { insertBreakpoint, lookup, MapEditError, removeBreakpoint, setBreakpoint, type MapTable } from '../../../maps'
-import { deepFreeze, small } from './fixtures'
+import { deepFreeze, small } from '@/tests/support/fixtures'
 
 describe('insertBreakpoint', () => {
   it('adds a speed breakpoint filled by lookup', () => {

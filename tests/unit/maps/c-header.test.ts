@@ -5,7 +5,7 @@ import path from 'node:path'
 import { afterAll, describe, expect, it } from 'vitest'
 import { checksum, verifiedChecksum } from '@/db/checksum'
 import { cIdentifier, commentText, crc32, int32LeBytes, MapInputError, SAFETY_CAUTION, toCHeader, type CHeaderMeta, type MapTable } from '../../../maps'
-import { insideTable, small } from './fixtures'
+import { insideTable, small } from '@/tests/support/fixtures'
 
 const table: MapTable = {
   kind: 'drive',

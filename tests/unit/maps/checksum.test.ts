@@ -3,7 +3,7 @@ import path from 'node:path'
 import { describe, expect, it } from 'vitest'
 import { checksum, sha256Hex } from '@/db/checksum'
 import { canonicalJson, MapInputError, setValue, type MapTable } from '../../../maps'
-import { small } from './fixtures'
+import { small } from '@/tests/support/fixtures'
 
 describe('canonicalJson', () => {
   it('has fixed key order, no whitespace and shortest numbers', () => {

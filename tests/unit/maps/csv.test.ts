@@ -1,7 +1,7 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { fromCsv, MapFormatError, MapInputError, toCsv, type MapTable } from '../../../maps'
-import { small } from './fixtures'
+import { small } from '@/tests/support/fixtures'
 
 /** The error fromCsv throws for `text`, so its fields can be checked. */
 function csvError(text: string): MapFormatError {

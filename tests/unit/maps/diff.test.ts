@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { addOffset, diff, insertBreakpoint, scaleBy, setValue, type MapTable } from '../../../maps'
-import { small } from './fixtures'
+import { small } from '@/tests/support/fixtures'
 
 describe('diff, same axes', () => {
   it('reports nothing for identical tables', () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest'
 import {
   addOffset, clampToEnvelope, fillLinear, limitsFromVehicle, MapEditError, motorEnvelopeAt, normaliseSelection, scaleBy, setValue, smooth, validate, wholeTable, type MapTable,
 } from '../../../maps'
-import { deepFreeze, insideTable, small, vehicle } from './fixtures'
+import { deepFreeze, insideTable, small, vehicle } from '@/tests/support/fixtures'
 
 const limits = limitsFromVehicle(vehicle)
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { chargeLimitTorqueAt, dischargeLimitTorqueAt, limitsFromVehicle, MapInputError, motorEnvelopeAt, stepThresholdNm } from '../../../maps'
-import { handEnvelope, vehicle } from './fixtures'
+import { handEnvelope, vehicle } from '@/tests/support/fixtures'
 
 const limits = limitsFromVehicle(vehicle)
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { findingMessage, limitsFromVehicle, renderParts, sentence, nm, kmh, UNITS, unitSystem, validate, type MapTable } from '../../../maps'
-import { vehicle } from './fixtures'
+import { vehicle } from '@/tests/support/fixtures'
 
 const limits = { ...limitsFromVehicle(vehicle), maxStepNm: 5000 }
 const only = (t: MapTable, rule: string) => validate(t, limits).filter((f) => f.rule === rule)

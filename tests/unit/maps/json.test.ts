@@ -1,7 +1,7 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { fromJson, MapFormatError, MapInputError, mapTableSchema, toJson, type MapTable } from '../../../maps'
-import { insideTable, small } from './fixtures'
+import { insideTable, small } from '@/tests/support/fixtures'
 
 function jsonError(text: string): MapFormatError {
   try {

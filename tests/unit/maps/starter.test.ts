@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { limitsFromVehicle, starterTable, validate } from '../../../maps'
-import { vehicle } from './fixtures'
+import { vehicle } from '@/tests/support/fixtures'
 
 // The fixture vehicle gives 10 rad/s of motor shaft per km/h; 2,000 N·m and 300 kW mean the power
 // limit starts at 15 km/h (P = T·ω: 300,000 W / 2,000 N·m = 150 rad/s), worked by hand.

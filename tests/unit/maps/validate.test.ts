@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { clampToEnvelope, isValid, limitsFromVehicle, validate, VALIDATION_RULES, type Finding, type MapTable, type RuleId } from '../../../maps'
-import { handChargeLimit, handEnvelope, insideTable, vehicle } from './fixtures'
+import { handChargeLimit, handEnvelope, insideTable, vehicle } from '@/tests/support/fixtures'
 
 const limits = limitsFromVehicle(vehicle)
 const rules = (fs: Finding[]) => [...new Set(fs.map((f) => f.rule))].sort()

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest'
 import { mapOverlay } from '@/physics/overlay'
 import type { MapTable, VehicleParams } from '@/physics'
-import { rigid6x4 } from '@/tests/unit/physics/fixtures'
+import { rigid6x4 } from '@/tests/support/fixtures'
 
 // Standard gravity, exact by definition (3rd CGPM 1901; NIST SP 330).
 const g = 9.80665

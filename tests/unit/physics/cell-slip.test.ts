@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { cellSlip, loadCasesFor, peakSlip, prepareCellSlip, slipGrid, SURFACES, SURFACE_IDS, tractionLimitTorqueBySpeed, type MapTable } from '@/physics'
-import { linearDriveMap, regenMap, tractor } from './fixtures'
+import { linearDriveMap, regenMap, tractor } from '@/tests/support/fixtures'
 
 const g = 9.80665
 const ref = (k: number, c: { B: number; C: number; D: number; E: number }) => c.D * Math.sin(c.C * Math.atan(c.B * k - c.E * (c.B * k - Math.atan(c.B * k))))

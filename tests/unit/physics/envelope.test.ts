@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { deliverableTorqueLimit, motorShaftSpeedRadS, motorTorqueFromWheel, motorTorqueLimit, overallRatio, wheelTorqueFromMotor, PhysicsInputError } from '@/physics'
-import { tractor } from './fixtures'
+import { tractor } from '@/tests/support/fixtures'
 
 // Fixture: R = 0.5 m, G = 2 × 6 = 12, η = 0.95, 3000 N·m, 450 kW, 6000 rpm, battery 500 kW out / 350 kW in.
 describe('motor envelope', () => {

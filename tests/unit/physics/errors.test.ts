@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { axleLoadsFor, cellSlip, magicFormula, PhysicsInputError, simulateLaunch, slipRatio, SURFACES, tractionLimit, validateVehicle, type SurfaceId } from '@/physics'
-import { linearDriveMap, tractor } from './fixtures'
+import { linearDriveMap, tractor } from '@/tests/support/fixtures'
 
 const catchErr = (f: () => unknown): PhysicsInputError => {
   try { f() } catch (e) { if (e instanceof PhysicsInputError) return e; throw e }

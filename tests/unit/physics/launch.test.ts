@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import * as math from 'mathjs'
 import { pedalAt, simulateLaunch, PhysicsInputError, type LaunchOptions } from '@/physics'
-import { linearDriveMap, tractor } from './fixtures'
+import { linearDriveMap, tractor } from '@/tests/support/fixtures'
 
 type SolveODE = (f: (t: number, y: number[]) => number[], tspan: [number, number], y0: number[], o: { method: string; tol: number; maxStep: number }) => { t: number[]; y: number[][] }
 const solveODEFn: unknown = Reflect.get(math, 'solveODE') // mathjs 15 ships solveODE without a TS declaration

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { simulateLiftOff, PhysicsInputError } from '@/physics'
-import { regenMap, tractor } from './fixtures'
+import { regenMap, tractor } from '@/tests/support/fixtures'
 
 const g = 9.80665
 

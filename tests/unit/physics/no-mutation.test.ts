@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { axleLoadsFor, cellSlip, lookup, magicFormula, simulateLaunch, simulateLiftOff, slipForForceRatio, slipGrid, SURFACES, tractionLimit, tractionLimitTorqueBySpeed, tractorTractionLimit, type PedalTrace } from '@/physics'
-import { linearDriveMap, regenMap, rigid6x4, tractor } from './fixtures'
+import { linearDriveMap, regenMap, rigid6x4, tractor } from '@/tests/support/fixtures'
 
 describe('no input is mutated', () => {
   it('vehicle, maps, traces, coefficients and bodies are unchanged after every call', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { lusolve } from 'mathjs'
 import { axleLoadsFor, combinationModel, fifthWheelLoad, tractorDriveAxleLoad, tractorRegenLimit, tractorTractionLimit, PhysicsInputError } from '@/physics'
-import { tractor as program } from './fixtures'
+import { tractor as program } from '@/tests/support/fixtures'
 
 const tractor = { massKg: 9000, wheelbaseM: 3.8, cgToFrontAxleM: 1.6, cgHeightM: 1.1 }
 const trailer = { massKg: 30000, cgToKingpinM: 4.8, cgHeightM: 2.0, kingpinToAxleM: 8, fifthWheelToFrontAxleM: 3.5, fifthWheelHeightM: 1.2 }

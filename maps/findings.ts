@@ -4,6 +4,7 @@
  * parts, so the UI renders it in the chosen units (findingMessage) without parsing text.
  */
 import { renderParts, type MessagePart } from './finding-text'
+import type { MapTable } from './table'
 import type { UnitSet } from './units'
 
 export type Severity = 'error' | 'warning'
@@ -39,6 +40,11 @@ export interface Finding {
   parts: MessagePart[]
   /** The sentence in metric units, e.g. "at 40 % pedal, 20 km/h: 2,400 N·m exceeds …" (API clients, logs). */
   message: string
+}
+
+/** Where a cell finding points: the cell's indices and its pedal and speed breakpoints. */
+export function cellWhere(t: Pick<MapTable, 'rowAxis' | 'colAxis'>, r: number, c: number): Pick<Finding, 'row' | 'col' | 'pedalPct' | 'speedKmh'> {
+  return { row: r, col: c, pedalPct: t.rowAxis[r], speedKmh: t.colAxis[c] }
 }
 
 /** A finding from its sentence; the metric message is rendered here. */

@@ -4,7 +4,7 @@
  */
 import { chargeLimitTorqueAt, dischargeLimitTorqueAt, motorEnvelopeAt, shaftSpeedRadS } from './envelope'
 import { cellLabel, kmh, nm, pedalWord, rowLabel, sentence } from './finding-text'
-import { finding, type Finding } from './findings'
+import { cellWhere, finding, type Finding } from './findings'
 import { stepThresholdNm, type MapLimits } from './limits'
 import { humanNumber } from './number-format'
 import type { MapTable } from './table'
@@ -34,7 +34,6 @@ export function checkLimits(table: MapTable, limits: MapLimits): Finding[] {
   const out: Finding[] = []
   const { kind, rowAxis, colAxis, values } = table
   const at = (r: number, c: number) => cellLabel(kind, rowAxis[r], colAxis[c])
-  const cell = (r: number, c: number) => ({ row: r, col: c, pedalPct: rowAxis[r], speedKmh: colAxis[c] })
   for (let r = 0; r < rowAxis.length; r++) {
     for (let c = 0; c < colAxis.length; c++) {
       const v = values[r][c]
@@ -43,17 +42,17 @@ export function checkLimits(table: MapTable, limits: MapLimits): Finding[] {
       const env = motorEnvelopeAt(limits, speed)
       if (Math.abs(v) > env * (1 + TOL) + TOL) {
         const why = speed > limits.maxRoadSpeedKmh ? sentence` (above ${kmh(limits.maxRoadSpeedKmh)} the motor exceeds its speed limit)` : []
-        out.push(finding({ severity: 'error', rule: 'motor-envelope', ...cell(r, c), valueNm: v, limitNm: env, parts: sentence`${at(r, c)}: ${nm(v)} exceeds the motor envelope of ${nm(env)}${why}` }))
+        out.push(finding({ severity: 'error', rule: 'motor-envelope', ...cellWhere(table, r, c), valueNm: v, limitNm: env, parts: sentence`${at(r, c)}: ${nm(v)} exceeds the motor envelope of ${nm(env)}${why}` }))
       }
       const omega = shaftSpeedRadS(limits, speed)
       const braking = brakingOf(kind, v)
       if (braking > 0 && braking * omega > limits.batteryChargePowerW * (1 + TOL)) {
         const limitNm = chargeLimitTorqueAt(limits, speed)
-        out.push(finding({ severity: 'error', rule: 'charge-power', ...cell(r, c), valueNm: v, limitNm, parts: sentence`${at(r, c)}: ${nm(braking)} of braking needs ${kw(braking * omega)} at the motor shaft, above the battery charge limit of ${kw(limits.batteryChargePowerW)} (${nm(limitNm)} at this speed)` }))
+        out.push(finding({ severity: 'error', rule: 'charge-power', ...cellWhere(table, r, c), valueNm: v, limitNm, parts: sentence`${at(r, c)}: ${nm(braking)} of braking needs ${kw(braking * omega)} at the motor shaft, above the battery charge limit of ${kw(limits.batteryChargePowerW)} (${nm(limitNm)} at this speed)` }))
       }
       if (kind === 'drive' && v > 0 && v * omega > limits.batteryDischargePowerW * (1 + TOL)) {
         const limitNm = dischargeLimitTorqueAt(limits, speed)
-        out.push(finding({ severity: 'warning', rule: 'discharge-power', ...cell(r, c), valueNm: v, limitNm, parts: sentence`${at(r, c)}: ${nm(v)} needs ${kw(v * omega)} at the motor shaft, more than the battery can deliver (${kw(limits.batteryDischargePowerW)}, ${nm(limitNm)} at this speed)` }))
+        out.push(finding({ severity: 'warning', rule: 'discharge-power', ...cellWhere(table, r, c), valueNm: v, limitNm, parts: sentence`${at(r, c)}: ${nm(v)} needs ${kw(v * omega)} at the motor shaft, more than the battery can deliver (${kw(limits.batteryDischargePowerW)}, ${nm(limitNm)} at this speed)` }))
       }
     }
   }
@@ -98,7 +97,7 @@ function checkSteps(table: MapTable, limits: MapLimits): Finding[] {
   const out: Finding[] = []
   const max = stepThresholdNm(limits)
   const { kind, rowAxis, colAxis, values } = table
-  const cell = (r: number, c: number, step: number) => ({ row: r, col: c, pedalPct: rowAxis[r], speedKmh: colAxis[c], valueNm: step, limitNm: max })
+  const cell = (r: number, c: number, step: number) => ({ ...cellWhere(table, r, c), valueNm: step, limitNm: max })
   for (let r = 0; r < rowAxis.length; r++) {
     for (let c = 0; c < colAxis.length; c++) {
       const v = values[r][c]

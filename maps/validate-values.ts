@@ -3,7 +3,7 @@
  * Non-finite cells are skipped (they already carry a 'not-finite' finding).
  */
 import { cellLabel, nm, pedalWord, sentence } from './finding-text'
-import { finding, type Finding } from './findings'
+import { cellWhere, finding, type Finding } from './findings'
 import type { MapTable } from './table'
 
 /**
@@ -16,7 +16,6 @@ export function checkValues(table: MapTable): Finding[] {
   const out: Finding[] = []
   const { kind, rowAxis, colAxis, values } = table
   const at = (r: number, c: number) => cellLabel(kind, rowAxis[r], colAxis[c])
-  const cell = (r: number, c: number) => ({ row: r, col: c, pedalPct: rowAxis[r], speedKmh: colAxis[c] })
   for (let c = 0; c < colAxis.length; c++) {
     for (let r = 1; r < rowAxis.length; r++) {
       const below = values[r - 1][c]
@@ -26,7 +25,7 @@ export function checkValues(table: MapTable): Finding[] {
       out.push(finding({
         severity: kind === 'drive' ? 'error' : 'warning',
         rule: 'pedal-monotonic',
-        ...cell(r, c),
+        ...cellWhere(table, r, c),
         valueNm: here,
         limitNm: below,
         parts: sentence`${at(r, c)}: ${nm(here)} is less than ${nm(below)} at ${rowAxis[r - 1]} % ${pedalWord(kind)}${why}`,
@@ -37,7 +36,7 @@ export function checkValues(table: MapTable): Finding[] {
     values.forEach((row, r) =>
       row.forEach((v, c) => {
         if (Number.isFinite(v) && v < 0)
-          out.push(finding({ severity: 'error', rule: 'regen-negative', ...cell(r, c), valueNm: v, limitNm: 0, parts: sentence`${at(r, c)}: regen braking torque ${nm(v)} is negative; regen values must be ≥ 0` }))
+          out.push(finding({ severity: 'error', rule: 'regen-negative', ...cellWhere(table, r, c), valueNm: v, limitNm: 0, parts: sentence`${at(r, c)}: regen braking torque ${nm(v)} is negative; regen values must be ≥ 0` }))
       }),
     )
   return out

@@ -2,6 +2,7 @@
  * The few numbers of a vehicle program that bound a torque map, collected once so that
  * validation and clamping do not need the whole physics model.
  */
+import { kmhToMps, rpmToRadS } from '../physics/units'
 import type { VehicleParams } from '../physics/vehicle'
 import { MapInputError } from './errors'
 
@@ -29,8 +30,6 @@ export interface MapLimits {
 /** Default steep-step threshold as a share of motor peak torque. */
 export const DEFAULT_STEP_SHARE = 0.25
 
-const RPM_TO_RAD_S = (2 * Math.PI) / 60
-
 /**
  * Limits of a vehicle program. The shaft speed uses the lowest gear (gearRatios[0]): it gives the
  * highest shaft speed per km/h, hence the smallest power-limited torque — the conservative side
@@ -53,7 +52,7 @@ export function limitsFromVehicle(vehicle: VehicleParams): MapLimits {
   for (const [label, v] of positive)
     if (!Number.isFinite(v) || v <= 0)
       throw new MapInputError('bad-vehicle', `the vehicle program's ${label} must be a positive number, got ${v}`)
-  const radPerKmh = (ratio: number) => (1 / 3.6 / vehicle.wheelRadiusM) * ratio * vehicle.finalDriveRatio
+  const radPerKmh = (ratio: number) => (kmhToMps(1) / vehicle.wheelRadiusM) * ratio * vehicle.finalDriveRatio
   const topGear = Math.min(...vehicle.gearRatios)
   return {
     motorPeakTorqueNm: vehicle.motorPeakTorqueNm,
@@ -62,7 +61,7 @@ export function limitsFromVehicle(vehicle: VehicleParams): MapLimits {
     batteryChargePowerW: vehicle.batteryChargePowerW,
     batteryDischargePowerW: vehicle.batteryDischargePowerW,
     shaftRadPerKmh: radPerKmh(vehicle.gearRatios[0]),
-    maxRoadSpeedKmh: (vehicle.motorMaxSpeedRpm * RPM_TO_RAD_S) / radPerKmh(topGear),
+    maxRoadSpeedKmh: rpmToRadS(vehicle.motorMaxSpeedRpm) / radPerKmh(topGear),
     drivelineEfficiency: vehicle.drivelineEfficiency,
   }
 }

@@ -7,6 +7,7 @@ import { useMutation } from '@tanstack/react-query'
 import type { z } from 'zod'
 import { api } from '@/app/_components/api-client'
 import { reportInputSchema } from '@/app/_schemas/report'
+import { loadCasesFor } from '@/physics/load-cases'
 import { RevisionPicker, type MapOption } from './revision-picker'
 import { FlagGrid } from './flag-grid'
 import { FlagList } from './flag-list'
@@ -91,7 +92,7 @@ export function ReportForm(props: {
           error={formState.errors.revisionId?.message}
         />
       </section>
-      <ConditionsFields form={form} loadCases={map ? props.loadCases[map.programId] ?? ['empty', 'laden'] : ['empty', 'laden']} />
+      <ConditionsFields form={form} loadCases={(map && props.loadCases[map.programId]) || loadCasesFor({ trailer: null })} />
       <RatingsFields form={form} />
       <section className="card space-y-3">
         <h2 className="font-semibold">Points on the map</h2>

@@ -39,7 +39,7 @@ async function openPglite(): Promise<Handle> {
     // PGlite has no autovacuum, so its planner never learns table sizes; refresh the statistics once per open.
     await client.exec('analyze')
     return {
-      db: db as unknown as Db,
+      db,
       kind: 'pglite',
       close: async () => {
         await client.close()
@@ -63,7 +63,7 @@ async function openPostgres(url: string): Promise<Handle> {
   try {
     const db = drizzle({ client: pool, schema })
     await migrate(db, { migrationsFolder })
-    return { db: db as unknown as Db, kind: 'postgres', close: () => pool.end() }
+    return { db, kind: 'postgres', close: () => pool.end() }
   } catch (e) {
     await pool.end()
     throw e

@@ -79,9 +79,10 @@ const CLIENT_VALUE_CODES = ['22003', '22P02', '22021', '22P05']
 
 /** A PostgreSQL error code, possibly wrapped by the driver or Drizzle. */
 function hasPgCode(e: unknown, code: string): boolean {
-  for (let cur = e as { code?: string; cause?: unknown } | undefined, i = 0; cur && i < 4; i++) {
-    if (cur.code === code) return true
-    cur = cur.cause as typeof cur
+  let cur: unknown = e
+  for (let i = 0; i < 4 && typeof cur === 'object' && cur !== null; i++) {
+    if ('code' in cur && cur.code === code) return true
+    cur = 'cause' in cur ? cur.cause : undefined
   }
   return false
 }

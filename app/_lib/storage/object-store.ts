@@ -1,4 +1,5 @@
-// Object storage for drive logs (S3 API). No 'server-only' marker: the demo seed also stores logs.
+// Object storage for drive logs (S3 API). The demo seed also stores logs, under tsx --conditions=react-server.
+import 'server-only'
 import { Readable } from 'node:stream'
 import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, S3Client } from '@aws-sdk/client-s3'
 import { Upload } from '@aws-sdk/lib-storage'

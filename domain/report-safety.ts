@@ -8,7 +8,9 @@ export const SAFETY_LABELS: Readonly<Record<SafetyState, string>> = {
   resolved: 'safety concern resolved',
 }
 
-/** Flag severities, 1 (minor) … 4; a severity-4 flag is a safety concern and opens the report's concern. */
+/** Severities of a flag on a drive report; a severity-4 flag is a safety concern and opens the report's concern. */
 export const FLAG_SEVERITIES = [1, 2, 3, 4] as const
 export type FlagSeverity = (typeof FLAG_SEVERITIES)[number]
 export const SAFETY_SEVERITY = 4 satisfies FlagSeverity
+
+export const SEVERITY_LABELS: Readonly<Record<FlagSeverity, string>> = { 1: 'Note', 2: 'Annoying', 3: 'Must fix', 4: 'Safety concern' }

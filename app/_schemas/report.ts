@@ -1,5 +1,8 @@
 import { z } from 'zod'
+import { FLAG_SEVERITIES, SEVERITY_LABELS } from '@/domain/report-safety'
 import { LOAD_CASE_IDS, SURFACE_IDS } from '@/physics'
+
+export { SEVERITY_LABELS }
 
 export const RATING_KEYS = ['launch', 'tipIn', 'steadyPedal', 'liftOffRegen', 'brakeBlending'] as const
 export const RATING_LABELS: Record<(typeof RATING_KEYS)[number], string> = {
@@ -12,8 +15,6 @@ export const RATING_LABELS: Record<(typeof RATING_KEYS)[number], string> = {
 /** 1 = unacceptable … 5 = good; a short fixed scale a driver can answer with a thumb. */
 export const RATING_SCALE = [1, 2, 3, 4, 5] as const
 
-export const SEVERITY_LABELS = { 1: 'Note', 2: 'Annoying', 3: 'Must fix', 4: 'Safety concern' } as const
-
 const rating = (label: string) =>
   z.number({ error: `${label}: choose a rating from 1 to 5` }).int(`${label}: choose a rating from 1 to 5`).min(1, `${label}: choose a rating from 1 to 5`).max(5, `${label}: choose a rating from 1 to 5`)
 
@@ -21,7 +22,7 @@ export const flagSchema = z.object({
   pedalPct: z.number({ error: 'Flag pedal must be a number (%)' }).min(0, 'Flag pedal must be 0–100 %').max(100, 'Flag pedal must be 0–100 %'),
   speedKmh: z.number({ error: 'Flag speed must be a number (km/h)' }).min(0, 'Flag speed must not be negative').max(200, 'Flag speed must be at most 200 km/h'),
   what: z.string().trim().min(1, 'Say what happened at the flagged point').max(500),
-  severity: z.union([z.literal(1), z.literal(2), z.literal(3), z.literal(4)], { error: 'Severity must be 1, 2, 3 or 4' }),
+  severity: z.literal(FLAG_SEVERITIES, { error: 'Severity must be 1, 2, 3 or 4' }),
 })
 
 /** One schema for the report form and the API, so both refuse the same input with the same words. */

@@ -55,11 +55,6 @@ export type SaveResult =
   | { ok: false; reason: 'stale-parent'; latestNumber: number }
   | { ok: false; reason: 'no-map' }
 
-/**
- * Save a new revision on top of `parentNumber`. The map row is locked for the transaction, so
- * concurrent saves queue up; a save whose parent is no longer the latest is refused (nothing is
- * written) and told the newer number. The unique (map, number) index is the last line of defence.
- */
 /** Every this many revisions of a map, the save refreshes the planner statistics of the revisions table. */
 export const STATS_EVERY = 100
 
@@ -72,6 +67,11 @@ export async function refreshRevisionStatistics(): Promise<void> {
   await db.execute(sql`analyze map_revisions`)
 }
 
+/**
+ * Save a new revision on top of `parentNumber`. The map row is locked for the transaction, so
+ * concurrent saves queue up; a save whose parent is no longer the latest is refused (nothing is
+ * written) and told the newer number. The unique (map, number) index is the last line of defence.
+ */
 export async function saveRevision(input: {
   mapId: number
   parentNumber: number

@@ -1,4 +1,4 @@
-import { and, desc, eq, isNull, sql } from 'drizzle-orm'
+import { and, desc, eq, inArray, isNull } from 'drizzle-orm'
 import { getDb } from '../client'
 import { driveReports, mapRevisions, maps, vehiclePrograms } from '../schema'
 
@@ -13,7 +13,7 @@ export async function revisionsAwaitingDrive() {
     .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
     .leftJoin(driveReports, eq(driveReports.revisionId, mapRevisions.id))
-    .where(and(sql`${mapRevisions.state} in ('in_review', 'approved')`, isNull(driveReports.id)))
+    .where(and(inArray(mapRevisions.state, ['in_review', 'approved']), isNull(driveReports.id)))
     .orderBy(desc(mapRevisions.createdAt))
 }
 

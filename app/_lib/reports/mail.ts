@@ -1,5 +1,6 @@
 import 'server-only'
 import { emailsOfRole, type OutgoingMail } from '@/db/queries/mail'
+import { SAFETY_SEVERITY } from '@/domain/report-safety'
 import { engineersOfMap } from '@/db/queries/reports'
 import { getRevisionWithMap } from '@/db/queries/maps'
 import type { ReportInput } from '@/app/_schemas/report'
@@ -12,7 +13,7 @@ export async function safetyMailFor(input: ReportInput, driver: SessionUser): Pr
   const map = target?.map ?? null
   const rev = target?.revision ?? null
   const to = [...new Set([...(await emailsOfRole('lead_engineer')), ...(map ? await engineersOfMap(map.id) : [])])]
-  const flags = input.flags.filter((f) => f.severity === 4).map((f) => `- ${f.pedalPct} % pedal at ${f.speedKmh} km/h: ${f.what}`).join('\n')
+  const flags = input.flags.filter((f) => f.severity === SAFETY_SEVERITY).map((f) => `- ${f.pedalPct} % pedal at ${f.speedKmh} km/h: ${f.what}`).join('\n')
   return (id) => ({
     to,
     subject: `Safety concern: ${map?.programName ?? ''} · ${map?.name ?? ''} r${rev?.number ?? '?'}`,

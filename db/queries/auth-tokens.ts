@@ -3,9 +3,10 @@ import { getDb } from '../client'
 import { authTokens, users } from '../schema'
 import { recordAudit } from './audit'
 import { enqueueMail, type OutgoingMail } from './mail'
+import type { LinkKind } from '../../domain/one-time-links'
 
 /** Store a one-time link's hash and queue its e-mail in one transaction. */
-export async function createAuthToken(t: { userId: number; kind: 'invite' | 'reset'; tokenHash: string; expiresAt: Date; mail: OutgoingMail; actorId: number | null }) {
+export async function createAuthToken(t: { userId: number; kind: LinkKind; tokenHash: string; expiresAt: Date; mail: OutgoingMail; actorId: number | null }) {
   const db = await getDb()
   await db.transaction(async (tx) => {
     await tx.insert(authTokens).values({ userId: t.userId, kind: t.kind, tokenHash: t.tokenHash, expiresAt: t.expiresAt })

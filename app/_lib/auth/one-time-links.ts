@@ -1,4 +1,5 @@
 import 'server-only'
+import type { LinkKind } from '@/domain/one-time-links'
 import { createHash, randomBytes } from 'node:crypto'
 import { createAuthToken, consumeAuthToken } from '@/db/queries/auth-tokens'
 import { appUrl, nudgeMail } from '../mail/sender'
@@ -10,7 +11,7 @@ export const RESET_HOURS = 1
 const hashToken = (token: string) => createHash('sha256').update(token).digest('hex')
 
 /** Make a one-time link for a user and e-mail it. Only the token's hash is stored. */
-export async function sendOneTimeLink(user: { id: number; email: string; name: string }, kind: 'invite' | 'reset', actorId: number | null): Promise<void> {
+export async function sendOneTimeLink(user: { id: number; email: string; name: string }, kind: LinkKind, actorId: number | null): Promise<void> {
   const token = randomBytes(32).toString('base64url')
   const hours = kind === 'invite' ? INVITE_HOURS : RESET_HOURS
   const link = appUrl(`/set-password?token=${token}`)

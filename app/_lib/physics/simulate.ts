@@ -35,9 +35,8 @@ export const SAMPLE_S = 0.02
 const round5 = (x: number): number => (Number.isFinite(x) ? Number(x.toPrecision(5)) : x)
 
 function columns(samples: SimSample[]): Series {
-  const out = Object.fromEntries(SERIES.map((k) => [k, [] as number[]])) as Series
-  for (const s of samples) for (const k of SERIES) out[k].push(round5(s[k]))
-  return out
+  const col = (k: (typeof SERIES)[number]) => samples.map((s) => round5(s[k]))
+  return { t: col('t'), pedalPct: col('pedalPct'), speedKmh: col('speedKmh'), wheelSpeedKmh: col('wheelSpeedKmh'), slip: col('slip'), motorTorqueNm: col('motorTorqueNm'), accelMps2: col('accelMps2'), jerkMps3: col('jerkMps3') }
 }
 
 /** Infinity (a monotone tyre curve has no peak slip) does not survive JSON; say null instead. */

@@ -15,7 +15,7 @@ export interface ByteCounter { bytes: number }
 const COALESCE_CHARS = 65_536
 
 function isWebStream(s: LogByteSource): s is ReadableStream<Uint8Array> {
-  return typeof (s as ReadableStream<Uint8Array>).getReader === 'function'
+  return 'getReader' in s && typeof s.getReader === 'function'
 }
 
 async function* bytesOf(source: LogByteSource): AsyncGenerator<Uint8Array | string> {
@@ -29,7 +29,7 @@ async function* bytesOf(source: LogByteSource): AsyncGenerator<Uint8Array | stri
       }
     } finally { reader.releaseLock() }
   } else {
-    for await (const chunk of source as AsyncIterable<Uint8Array | string>) yield chunk
+    for await (const chunk of source) yield chunk
   }
 }
 

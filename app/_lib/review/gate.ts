@@ -12,8 +12,6 @@ import { limitsFromVehicle, validate, type MapTable } from '@/maps'
 import { slipGrid, SURFACE_IDS, SURFACES, type SurfaceId } from '@/physics'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
 
-export type { ReleaseConditions }
-
 export interface TractionException {
   key: string
   surface: SurfaceId

@@ -105,19 +105,25 @@ export async function listLatestRevisions() {
     .orderBy(asc(vehiclePrograms.name), asc(maps.kind), asc(maps.name))
 }
 
+/** A map, its program and one revision of it (the latest when `number` is omitted) in one round trip; null when either is missing. */
+export async function getMapWithRevision(mapId: number, number?: number) {
+  const db = await getDb()
+  const rows = await db
+    .select({ map: mapWithProgramColumns, revision: { ...revisionSummaryColumns, table: mapRevisions.table } })
+    .from(maps)
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, number ?? latestNumberOf)))
+    .innerJoin(users, eq(users.id, mapRevisions.authorId))
+    .where(eq(maps.id, mapId))
+  return rows[0] ?? null
+}
+
 /**
  * A map, its program and its latest revision in one round trip (the most frequent read). Every map
  * has revision 1 from the moment it exists (createMap writes both in one transaction), so the
  * joins are inner. Null when the map does not exist.
  */
 export async function getMapWithLatest(id: number) {
-  const db = await getDb()
-  const rows = await db
-    .select({ map: mapWithProgramColumns, latest: { ...revisionSummaryColumns, table: mapRevisions.table } })
-    .from(maps)
-    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
-    .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, latestNumberOf)))
-    .innerJoin(users, eq(users.id, mapRevisions.authorId))
-    .where(eq(maps.id, id))
-  return rows[0] ?? null
+  const found = await getMapWithRevision(id)
+  return found && { map: found.map, latest: found.revision }
 }

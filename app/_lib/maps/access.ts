@@ -1,5 +1,5 @@
 import 'server-only'
-import { getMap, type MapWithProgram } from '@/db/queries/maps'
+import { getMap, getMapWithRevision, type MapWithProgram } from '@/db/queries/maps'
 import { getRevision, saveRevision, type Revision } from '@/db/queries/revisions'
 import type { MapTable } from '@/maps'
 import { ConflictError, NotFoundError, ValidationError } from '../http/errors'
@@ -19,6 +19,27 @@ export async function loadRevision(mapId: number, numberParam: string | undefine
   const rev = await getRevision(mapId, number)
   if (!rev) throw new NotFoundError(number === undefined ? `A revision of map ${mapId}` : `Revision ${number} of map ${mapId}`)
   return rev
+}
+
+/**
+ * The map and revision a route's `:id` and `:number` name, in one query. A miss goes through
+ * loadMap and loadRevision, so the errors and their order (map first, then the number) are theirs.
+ */
+export async function loadMapRevision(idParam: string | undefined, numberParam: string | undefined): Promise<{ map: MapWithProgram; revision: Revision }> {
+  const id = intParam(idParam, 'Map id')
+  const number = numberParam === 'latest' ? undefined : optionalInt(numberParam)
+  const found = number === null ? null : await getMapWithRevision(id, number)
+  if (found) return found
+  const map = await loadMap(idParam)
+  return { map, revision: await loadRevision(map.id, numberParam) }
+}
+
+function optionalInt(param: string | undefined): number | null {
+  try {
+    return intParam(param, 'Revision number')
+  } catch {
+    return null
+  }
 }
 
 /** Save on top of parentNumber; a stale parent is a 409 that names the newer revision. */

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { getRevisionWithMap, listLatestRevisions } from '@/db/queries/maps'
+import { getMapWithRevision, getRevisionWithMap, listLatestRevisions } from '@/db/queries/maps'
+import { loadMap, loadMapRevision, loadRevision } from '@/app/_lib/maps/access'
 import { saveRevision } from '@/db/queries/revisions'
 import { waitingFor } from '@/app/_lib/review/waiting'
 import { limitsFromVehicle, validate } from '@/maps'
@@ -49,5 +50,20 @@ describe('one query for a revision with its map and program', () => {
     expect(hrefs).toContain(`/maps/${broken.mapId}/edit`)
     expect(hrefs).not.toContain(`/maps/${fixed.mapId}/edit`)
     expect(findings?.items.find((i) => i.href === `/maps/${broken.mapId}/edit`)?.label).toMatch(/ · Launch r3$/)
+  })
+
+  it('reads a map with one revision in one query, and a miss fails as loadMap then loadRevision would', async () => {
+    const { mapId, engineer } = await programAndMap()
+    await save(mapId, engineer.id, 1, OVER_ENVELOPE)
+    const one = await loadMapRevision(String(mapId), '1')
+    expect(one).toEqual({ map: await loadMap(String(mapId)), revision: await loadRevision(mapId, '1') })
+    expect((await loadMapRevision(String(mapId), 'latest')).revision.table).toEqual(OVER_ENVELOPE)
+    expect((await getMapWithRevision(mapId))?.revision.number).toBe(2)
+    const missing = String(2_000_000_000)
+    await expect(loadMapRevision(String(mapId), '3')).rejects.toMatchObject({ status: 404, message: expect.stringContaining(`Revision 3 of map ${mapId}`) })
+    await expect(loadMapRevision(missing, '1')).rejects.toMatchObject({ status: 404, message: expect.stringContaining(`Map ${missing}`) })
+    // The map is checked before the number, as before: a missing map with a bad number is still a 404.
+    await expect(loadMapRevision(missing, 'abc')).rejects.toMatchObject({ status: 404 })
+    await expect(loadMapRevision(String(mapId), 'abc')).rejects.toMatchObject({ status: 400 })
   })
 })

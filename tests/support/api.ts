@@ -28,18 +28,23 @@ type Handler<P> = (req: Request, ctx: { params: Promise<P> }) => Promise<Respons
 /** Call a route handler as Next would, with a real Request. */
 export async function call<P = Record<string, string>>(
   handler: Handler<P>,
-  opts: { method?: string; path?: string; body?: unknown; rawBody?: string; cookie?: string; params?: P } = {},
+  opts: { method?: string; path?: string; body?: unknown; rawBody?: string | ReadableStream<Uint8Array>; cookie?: string; params?: P; headers?: Record<string, string> } = {},
   // Bodies are loose JSON here: each test asserts the fields it cares about.
   // eslint-disable-next-line @typescript-eslint/no-explicit-any
 ): Promise<{ status: number; body: any }> {
   const headers: Record<string, string> = {}
   if (opts.cookie) headers.cookie = opts.cookie
-  if (opts.body !== undefined || opts.rawBody !== undefined) headers['content-type'] = 'application/json'
+  // A browser's fetch through the app's api() client sends JSON for every state-changing call.
+  if (opts.body !== undefined || opts.rawBody !== undefined || !['GET', 'HEAD', undefined].includes(opts.method)) headers['content-type'] = 'application/json'
+  Object.assign(headers, opts.headers)
+  const body = opts.rawBody ?? (opts.body !== undefined ? JSON.stringify(opts.body) : undefined)
   const req = new Request(`http://127.0.0.1:3000${opts.path ?? '/api/test'}`, {
     method: opts.method ?? 'GET',
     headers,
-    body: opts.rawBody ?? (opts.body !== undefined ? JSON.stringify(opts.body) : undefined),
-  })
+    body,
+    // A streamed body needs half duplex (undici's rule for request streams).
+    ...(body instanceof ReadableStream ? { duplex: 'half' } : {}),
+  } as RequestInit)
   const res = await handler(req, { params: Promise.resolve((opts.params ?? {}) as P) })
   const text = await res.text()
   return { status: res.status, body: text ? JSON.parse(text) : null }

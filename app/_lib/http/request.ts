@@ -1,11 +1,47 @@
 import type { z } from 'zod'
-import { ValidationError } from './errors'
+import { BodyTooLargeError, ValidationError } from './errors'
 
-/** Parse a JSON body against a schema; malformed JSON and schema failures become 400s. */
-export async function readJson<S extends z.ZodType>(req: Request, schema: S): Promise<z.infer<S>> {
+/** Every JSON body is capped at this unless a route says otherwise (the CSV import needs more). */
+export const JSON_BODY_LIMIT = 1024 * 1024
+
+/**
+ * The body as UTF-8 text, refused with 413 once it passes `maxBytes`: a declared Content-Length over
+ * the limit before a byte is read, an undeclared or understated one as soon as the count passes it
+ * (the rest is never pulled, so a huge body cannot fill the server's memory).
+ */
+export async function readBodyText(req: Request, maxBytes = JSON_BODY_LIMIT): Promise<string> {
+  const declared = Number(req.headers.get('content-length') ?? NaN)
+  if (declared > maxBytes) {
+    await req.body?.cancel().catch(() => {})
+    throw new BodyTooLargeError(maxBytes)
+  }
+  if (!req.body) return ''
+  const reader = req.body.getReader()
+  const chunks: Uint8Array[] = []
+  let size = 0
+  for (;;) {
+    const { done, value } = await reader.read()
+    if (done) break
+    size += value.byteLength
+    if (size > maxBytes) {
+      await reader.cancel().catch(() => {})
+      throw new BodyTooLargeError(maxBytes)
+    }
+    chunks.push(value)
+  }
+  try {
+    return new TextDecoder('utf-8', { fatal: true }).decode(Buffer.concat(chunks))
+  } catch {
+    throw new ValidationError('The request body must be UTF-8 text')
+  }
+}
+
+/** Parse a JSON body (at most `maxBytes`) against a schema; malformed JSON and schema failures become 400s. */
+export async function readJson<S extends z.ZodType>(req: Request, schema: S, opts: { maxBytes?: number } = {}): Promise<z.infer<S>> {
+  const text = await readBodyText(req, opts.maxBytes)
   let body: unknown
   try {
-    body = await req.json()
+    body = JSON.parse(text)
   } catch {
     throw new ValidationError('The request body must be valid JSON')
   }

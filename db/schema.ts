@@ -330,6 +330,30 @@ export const authTokens = pgTable(
   (t) => [uniqueIndex('auth_tokens_hash_idx').on(t.tokenHash)],
 )
 
+/**
+ * A creation a person may send twice (a dropped connection, a reload that restores the draft): the
+ * client's key (the draft's id) per user and kind of creation, what the first request created, and
+ * a hash of its content. Written in the creation's own transaction; the unique index lets only one
+ * of two concurrent repeats create.
+ */
+export const idempotencyKeys = pgTable(
+  'idempotency_keys',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    userId: integer('user_id')
+      .notNull()
+      .references(() => users.id),
+    /** What the key created: report, report-comment, review-comment, revision. */
+    scope: text('scope').notNull(),
+    key: text('key').notNull(),
+    requestHash: text('request_hash').notNull(),
+    /** The id of the created row (set in the same transaction as the claim). */
+    resultId: integer('result_id'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('idempotency_keys_user_scope_key_idx').on(t.userId, t.scope, t.key)],
+)
+
 export const usersRelations = relations(users, ({ many }) => ({ revisions: many(mapRevisions) }))
 export const programsRelations = relations(vehiclePrograms, ({ many }) => ({ maps: many(maps) }))
 export const mapsRelations = relations(maps, ({ one, many }) => ({

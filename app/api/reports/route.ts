@@ -1,6 +1,7 @@
 import { withRole } from '@/app/_lib/http/access'
 import { checkReportTarget } from '@/app/_lib/reports/access'
 import { readJson } from '@/app/_lib/http/request'
+import { createdResponse, createOnce } from '@/app/_lib/http/idempotency'
 import { reportInputSchema } from '@/app/_schemas/report'
 import { createReport, getReport, listReports } from '@/db/queries/reports'
 import { nudgeMail, safetyMailFor } from '@/app/_lib/reports/mail'
@@ -18,11 +19,13 @@ export const GET = withRole('signed-in', async (req, { user }) => {
   return Response.json({ reports })
 })
 
-// POST /api/reports — a test driver files a drive report against one exact revision
+// POST /api/reports — a test driver files a drive report against one exact revision.
+// Idempotency-Key (the draft's id): filing the same draft again answers with the first report.
 export const POST = withRole(['test_driver'], async (req, { user }) => {
   const input = await readJson(req, reportInputSchema)
   await checkReportTarget(input)
-  const id = await createReport(input, user.id, await safetyMailFor(input, user))
-  nudgeMail()
-  return Response.json({ report: await getReport(id) }, { status: 201 })
+  const mail = await safetyMailFor(input, user)
+  const { id, replayed } = await createOnce(req, { userId: user.id, scope: 'report', what: 'report', request: input }, (conn) => createReport(input, user.id, mail, conn))
+  if (!replayed) nudgeMail()
+  return createdResponse({ report: await getReport(id) }, replayed)
 })

@@ -42,6 +42,8 @@ export const users = pgTable(
     role: text('role').$type<Role>().notNull(),
     passwordHash: text('password_hash').notNull(),
     disabled: boolean('disabled').notNull().default(false),
+    /** Carried in every session token; raised on a password change, reset or disabling to end all sessions. */
+    sessionVersion: integer('session_version').notNull().default(1),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
@@ -328,6 +330,22 @@ export const authTokens = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex('auth_tokens_hash_idx').on(t.tokenHash)],
+)
+
+/**
+ * Sessions ended by signing out, by the session id in the token. Kept until every token of that
+ * session has expired (the sign-out time plus the session lifetime), then pruned.
+ */
+export const revokedSessions = pgTable(
+  'revoked_sessions',
+  {
+    sid: text('sid').primaryKey(),
+    userId: integer('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+  },
+  (t) => [index('revoked_sessions_expires_idx').on(t.expiresAt)],
 )
 
 /**

@@ -1,7 +1,8 @@
-import { and, eq, gt, isNull } from 'drizzle-orm'
+import { and, eq, gt, isNull, sql } from 'drizzle-orm'
 import { getDb } from '../client'
 import { authTokens, users } from '../schema'
 import { recordAudit } from './audit'
+import { forgetSessionChecks } from './users'
 import { enqueueMail, type OutgoingMail } from './mail'
 
 /** Store a one-time link's hash and queue its e-mail in one transaction. */
@@ -20,15 +21,18 @@ export async function createAuthToken(t: { userId: number; kind: 'invite' | 'res
  */
 export async function consumeAuthToken(tokenHash: string, passwordHash: string): Promise<number | null> {
   const db = await getDb()
-  return db.transaction(async (tx) => {
+  const userId = await db.transaction(async (tx) => {
     const [tok] = await tx
       .update(authTokens)
       .set({ usedAt: new Date() })
       .where(and(eq(authTokens.tokenHash, tokenHash), isNull(authTokens.usedAt), gt(authTokens.expiresAt, new Date())))
       .returning({ userId: authTokens.userId, kind: authTokens.kind })
     if (!tok) return null
-    await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, tok.userId))
+    // The new password ends every session the account had (someone may have had the old one).
+    await tx.update(users).set({ passwordHash, updatedAt: new Date(), sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, tok.userId))
     await recordAudit({ actorId: tok.userId, action: `auth.${tok.kind}-used`, entityType: 'user', entityId: tok.userId }, tx)
     return tok.userId
   })
+  if (userId) forgetSessionChecks(userId)
+  return userId
 }

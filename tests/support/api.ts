@@ -1,5 +1,7 @@
 // Helpers for integration tests: real users in the test database, real session cookies, real Requests.
+import { randomUUID } from 'node:crypto'
 import { encode } from 'next-auth/jwt'
+import { currentSessionVersion } from '@/db/queries/sessions'
 import { env } from '@/app/_lib/config/env'
 import { createUser, type PublicUser } from '@/db/queries/users'
 import type { Role } from '@/db/schema'
@@ -19,7 +21,9 @@ export async function makeUser(role: Role, opts: { password?: string; email?: st
 
 /** The Cookie header a browser would send after signing in as `user`, minted with the app's own secret. */
 export async function sessionCookie(user: Pick<PublicUser, 'id' | 'role' | 'email' | 'name'>): Promise<string> {
-  const token = await encode({ token: { sub: String(user.id), role: user.role, email: user.email, name: user.name }, secret: env().authSecret })
+  // A session of its own (sid) at the account's current session version (sv), as a sign-in makes.
+  const sv = await currentSessionVersion(user.id)
+  const token = await encode({ token: { sub: String(user.id), role: user.role, email: user.email, name: user.name, sid: randomUUID(), sv }, secret: env().authSecret })
   return `next-auth.session-token=${encodeURIComponent(token)}`
 }
 

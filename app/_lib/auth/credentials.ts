@@ -18,7 +18,7 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms))
  * Repeated failures for the account or from the address are slowed down, then refused a while.
  * Returns the user for the session, or null; failures are audited against the account.
  */
-export async function checkCredentials(email: string, password: string, ip: string | null = null): Promise<SessionUser | null> {
+export async function checkCredentials(email: string, password: string, ip: string | null = null): Promise<(SessionUser & { sessionVersion: number }) | null> {
   if (!email.trim() || !password) return null
   const keys = [`account:${email.trim().toLowerCase()}`, ...(ip ? [`ip:${ip}`] : [])]
   const verdict = checkAttempt(keys)
@@ -33,5 +33,5 @@ export async function checkCredentials(email: string, password: string, ip: stri
   }
   clearFailures([keys[0]])
   await recordAudit({ actorId: user.id, action: 'auth.signin', entityType: 'user', entityId: user.id, details: { ip } })
-  return { id: user.id, email: user.email, name: user.name, role: user.role }
+  return { id: user.id, email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion }
 }

@@ -3,6 +3,8 @@ import type { DeepPartialSkipArrayKey } from 'react-hook-form'
 import type { ReportFormIn } from './report-form'
 
 export interface ReportDraft {
+  /** Sent as the Idempotency-Key: filing the same draft twice files one report. */
+  id?: string
   values: DeepPartialSkipArrayKey<ReportFormIn>
   mapId?: number
   revisionNumber?: number

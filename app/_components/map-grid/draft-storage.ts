@@ -7,6 +7,8 @@ import { z } from 'zod'
 import { mapTableSchema, type MapTable } from '@/maps'
 
 export interface Draft {
+  /** Sent as the Idempotency-Key of the save: saving the same draft twice makes one revision. */
+  id?: string
   baseNumber: number
   /** The revision's table as it was when the draft began, to tell what changed. */
   baseTable: MapTable
@@ -18,6 +20,7 @@ export interface Draft {
 }
 
 const draftSchema = z.object({
+  id: z.string().optional(),
   baseNumber: z.number().int().min(0),
   baseTable: mapTableSchema,
   table: mapTableSchema,

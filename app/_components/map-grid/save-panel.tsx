@@ -15,6 +15,8 @@ import type { UnitSet } from './units'
 
 export interface SavePanelProps {
   mapId: number
+  /** The draft's id, sent as the Idempotency-Key. */
+  draftId: string
   table: MapTable
   base: Base
   dirty: boolean
@@ -32,7 +34,7 @@ export function SavePanel(p: SavePanelProps) {
   const [touched, setTouched] = useState(false)
   const [conflict, setConflict] = useState<{ message: string; latestNumber: number } | null>(null)
   const save = useMutation({
-    mutationFn: () => api<SaveAnswer>(`/api/maps/${p.mapId}/revisions`, { method: 'POST', json: { parentNumber: p.base.number, message: p.message.trim(), notes: p.notes, table: p.table } }),
+    mutationFn: () => api<SaveAnswer>(`/api/maps/${p.mapId}/revisions`, { method: 'POST', json: { parentNumber: p.base.number, message: p.message.trim(), notes: p.notes, table: p.table }, headers: { 'idempotency-key': p.draftId } }),
     onSuccess: (res) => {
       p.onSaved()
       router.push(`/maps/${p.mapId}?saved=${res.revision.number}`)

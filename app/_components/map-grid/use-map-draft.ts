@@ -5,6 +5,7 @@
  */
 import { useCallback, useEffect, useState } from 'react'
 import type { MapTable } from '@/maps'
+import { newDraftId } from '@/app/_components/api-client'
 import { clearDraft, loadDraft, saveDraft } from './draft-storage'
 import { sameTable } from './same-table'
 import { useHistory } from './use-history'
@@ -21,12 +22,14 @@ export function useMapDraft(mapId: number, pageBase: Base) {
   const [message, setMessage] = useState(restored?.message ?? '')
   const [notes, setNotes] = useState(restored?.notes ?? '')
   const [restoredAt, setRestoredAt] = useState<string | null>(restored?.savedAt ?? null)
+  // Kept with the draft across reloads, so a save sent again after a lost answer is recognised.
+  const [draftId, setDraftId] = useState(() => restored?.id ?? newDraftId())
   const dirty = !sameTable(history.table, base.table)
 
   useEffect(() => {
     if (!dirty && !message && !notes) return clearDraft(mapId)
-    saveDraft(mapId, { baseNumber: base.number, baseTable: base.table, table: history.table, message, notes, savedAt: new Date().toISOString() })
-  }, [mapId, base, history.table, message, notes, dirty])
+    saveDraft(mapId, { id: draftId, baseNumber: base.number, baseTable: base.table, table: history.table, message, notes, savedAt: new Date().toISOString() })
+  }, [mapId, base, history.table, message, notes, dirty, draftId])
 
   const { reset } = history
   const discard = useCallback(() => {
@@ -36,13 +39,17 @@ export function useMapDraft(mapId: number, pageBase: Base) {
     setMessage('')
     setNotes('')
     setRestoredAt(null)
+    setDraftId(newDraftId())
   }, [mapId, pageBase, reset])
 
   /** Put the edits on top of a newer revision: the edited table stays exactly as it is. */
   const rebase = useCallback((next: Base) => setBase(next), [])
 
   /** After a save the draft is done with. */
-  const finish = useCallback(() => clearDraft(mapId), [mapId])
+  const finish = useCallback(() => {
+    clearDraft(mapId)
+    setDraftId(newDraftId())
+  }, [mapId])
 
-  return { ...history, base, dirty, message, setMessage, notes, setNotes, restoredAt, dismissRestored: () => setRestoredAt(null), discard, rebase, finish }
+  return { ...history, draftId, base, dirty, message, setMessage, notes, setNotes, restoredAt, dismissRestored: () => setRestoredAt(null), discard, rebase, finish }
 }

@@ -2,6 +2,7 @@ import { roleLabel, type Role } from '../auth/roles'
 import { errorResponse, ForbiddenError, UnauthorizedError } from './errors'
 import { userFromCookieHeader, type SessionUser } from '../auth/session'
 import { runWithRequestContext } from '@/db/request-context'
+import { assertSameOrigin } from './same-origin'
 
 /** Who may call an entry point: listed roles, any signed-in user, or anyone. */
 export type Access = readonly Role[] | 'signed-in' | 'public'
@@ -12,6 +13,11 @@ export interface RouteCtx<P> {
 }
 
 type NextCtx<P> = { params: Promise<P> }
+
+export interface RouteOptions {
+  /** Body types a state-changing call may send; JSON unless the route takes a file (see same-origin.ts). */
+  accepts?: readonly string[]
+}
 
 /** Check a user against a declared access rule; throws 401/403 errors. */
 export function assertAccess(user: SessionUser | null, access: Access): asserts user is SessionUser {
@@ -29,11 +35,13 @@ export function assertAccess(user: SessionUser | null, access: Access): asserts 
 export function withRole<P = Record<string, string>>(
   access: Exclude<Access, 'public'>,
   handler: (req: Request, ctx: RouteCtx<P>) => Promise<Response>,
+  opts: RouteOptions = {},
 ) {
   const route = async (req: Request, ctx: NextCtx<P>): Promise<Response> => {
     try {
       const user = await userFromCookieHeader(req.headers.get('cookie'))
       assertAccess(user, access)
+      assertSameOrigin(req, opts.accepts)
       const params = await ctx.params
       return await runWithRequestContext({ ip: clientIp(req) }, () => handler(req, { user, params }))
     } catch (e) {
@@ -56,6 +64,7 @@ export function clientIp(req: Request): string | null {
 export function publicRoute<P = Record<string, string>>(handler: (req: Request, ctx: { params: P }) => Promise<Response>) {
   const route = async (req: Request, ctx: NextCtx<P>): Promise<Response> => {
     try {
+      assertSameOrigin(req)
       const params = await ctx.params
       return await runWithRequestContext({ ip: clientIp(req) }, () => handler(req, { params }))
     } catch (e) {

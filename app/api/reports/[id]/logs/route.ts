@@ -51,4 +51,4 @@ export const POST = withRole<{ id: string }>(['test_driver'], async (req, { user
   const log = await createLog({ reportId: report.id, objectKey, fileName, sizeBytes: guard.bytes, mapping })
   startLogAnalysis(log.id)
   return Response.json({ log }, { status: 201 })
-})
+}, { accepts: ['text/csv'] })

@@ -3,7 +3,7 @@ import NextAuth from 'next-auth'
 import type { NextApiRequest, NextApiResponse } from 'next'
 import { errorResponse } from '../http/errors'
 import { readBodyText } from '../http/request'
-import { clientIp } from '../http/access'
+import { clientAddress } from '../http/client-address'
 import { authOptions } from './auth-options'
 
 /** Sign-in and sign-out forms are a few hundred bytes; nothing larger is read. */
@@ -72,6 +72,6 @@ export async function handleAuthRequest(req: Request, segments: string[]): Promi
       sent = typeof v === 'string' || v === undefined ? v : JSON.stringify(v)
     },
   } as unknown as NextApiResponse
-  await NextAuth(apiReq, apiRes, authOptions(clientIp(req)))
+  await NextAuth(apiReq, apiRes, authOptions(clientAddress(req)))
   return new Response(status === 302 ? null : (sent as string | undefined), { status, headers })
 }

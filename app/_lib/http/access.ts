@@ -3,6 +3,7 @@ import { errorResponse, ForbiddenError, UnauthorizedError } from './errors'
 import { userFromCookieHeader, type SessionUser } from '../auth/session'
 import { runWithRequestContext } from '@/db/request-context'
 import { assertSameOrigin } from './same-origin'
+import { clientAddress } from './client-address'
 
 /** Who may call an entry point: listed roles, any signed-in user, or anyone. */
 export type Access = readonly Role[] | 'signed-in' | 'public'
@@ -43,18 +44,12 @@ export function withRole<P = Record<string, string>>(
       assertAccess(user, access)
       assertSameOrigin(req, opts.accepts)
       const params = await ctx.params
-      return await runWithRequestContext({ ip: clientIp(req) }, () => handler(req, { user, params }))
+      return await runWithRequestContext({ ip: clientAddress(req) }, () => handler(req, { user, params }))
     } catch (e) {
       return errorResponse(e)
     }
   }
   return Object.assign(route, { access })
-}
-
-/** The caller's address: the first X-Forwarded-For hop when a proxy sets it, else X-Real-IP. */
-export function clientIp(req: Request): string | null {
-  const fwd = req.headers.get('x-forwarded-for')
-  return fwd?.split(',')[0].trim() || req.headers.get('x-real-ip') || null
 }
 
 /**
@@ -66,7 +61,7 @@ export function publicRoute<P = Record<string, string>>(handler: (req: Request, 
     try {
       assertSameOrigin(req)
       const params = await ctx.params
-      return await runWithRequestContext({ ip: clientIp(req) }, () => handler(req, { params }))
+      return await runWithRequestContext({ ip: clientAddress(req) }, () => handler(req, { params }))
     } catch (e) {
       return errorResponse(e)
     }

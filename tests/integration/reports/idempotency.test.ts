@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest'
 import * as reportsRoute from '@/app/api/reports/route'
 import * as reportCommentsRoute from '@/app/api/reports/[id]/comments/route'
 import * as revisionsRoute from '@/app/api/maps/[id]/revisions/route'
+import * as importRoute from '@/app/api/maps/[id]/import/route'
 import * as reviewCommentsRoute from '@/app/api/revisions/[revisionId]/comments/route'
 import { listReports } from '@/db/queries/reports'
 import { listOutbox } from '@/db/queries/mail'
@@ -14,6 +15,7 @@ import { listReportComments } from '@/db/queries/reports'
 import { makeUser, sessionCookie } from '@/tests/support/api'
 import { programAndMap, withCell, SMALL_DRIVE } from '@/tests/support/fixtures'
 import { filedReport, reportBody } from '@/tests/support/report-fixtures'
+import { toCsv } from '@/maps'
 
 type Handler<P> = (req: Request, ctx: { params: Promise<P> }) => Promise<Response>
 
@@ -92,6 +94,18 @@ describe('saving the same revision twice', () => {
     const again = await post(revisionsRoute.POST, cookie, { id: String(mapId) }, body, key)
     expect(first.status).toBe(201)
     expect(again.status).toBe(201)
+    expect(again.body).toEqual(first.body)
+    expect((await listRevisions(mapId)).map((r) => r.number)).toEqual([2, 1])
+  })
+
+  it('answers a repeated CSV import with the revision it made', async () => {
+    const { mapId, cookie } = await programAndMap()
+    const exported = toCsv(withCell(SMALL_DRIVE, 2, 2, 70))
+    const body = { parentNumber: 1, message: 'Imported from the bench', csv: exported }
+    const key = randomUUID()
+    const first = await post(importRoute.POST, cookie, { id: String(mapId) }, body, key)
+    const again = await post(importRoute.POST, cookie, { id: String(mapId) }, body, key)
+    expect([first.status, again.status]).toEqual([201, 201])
     expect(again.body).toEqual(first.body)
     expect((await listRevisions(mapId)).map((r) => r.number)).toEqual([2, 1])
   })

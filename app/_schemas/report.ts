@@ -27,7 +27,9 @@ export const flagSchema = z.object({
 /** One schema for the report form and the API, so both refuse the same input with the same words. */
 export const reportInputSchema = z.object({
   revisionId: z.number({ error: 'Choose the revision the vehicle was flashed with' }).int().positive().max(2_147_483_647, 'Choose the revision the vehicle was flashed with'),
-  drivenOn: z.iso.date('Date must be a calendar date (YYYY-MM-DD)'),
+  drivenOn: z.iso
+    .date('Date must be a calendar date (YYYY-MM-DD)')
+    .refine((d) => d >= '1970-01-01' && d <= '9999-12-31', 'Date must be from 1970-01-01 to 9999-12-31'),
   vehicleUnit: z.string().trim().min(1, 'Vehicle unit is required (e.g. its fleet number)').max(60),
   route: z.string().trim().min(1, 'Route or course is required').max(200),
   surface: z.enum(SURFACE_IDS, { error: 'Choose a road surface' }),

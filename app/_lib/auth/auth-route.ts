@@ -4,6 +4,7 @@ import type { NextApiRequest, NextApiResponse } from 'next'
 import { errorResponse } from '../http/errors'
 import { readBodyText } from '../http/request'
 import { clientAddress } from '../http/client-address'
+import { noStore } from '../http/access'
 import { authOptions } from './auth-options'
 
 /** Sign-in and sign-out forms are a few hundred bytes; nothing larger is read. */
@@ -37,7 +38,7 @@ export async function handleAuthRequest(req: Request, segments: string[]): Promi
   try {
     body = await parseBody(req)
   } catch (e) {
-    return errorResponse(e)
+    return noStore(errorResponse(e))
   }
   const url = new URL(req.url)
   const apiReq = {
@@ -73,5 +74,6 @@ export async function handleAuthRequest(req: Request, segments: string[]): Promi
     },
   } as unknown as NextApiResponse
   await NextAuth(apiReq, apiRes, authOptions(clientAddress(req)))
+  headers.set('cache-control', 'no-store')
   return new Response(status === 302 ? null : (sent as string | undefined), { status, headers })
 }

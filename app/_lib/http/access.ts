@@ -44,9 +44,9 @@ export function withRole<P = Record<string, string>>(
       assertAccess(user, access)
       assertSameOrigin(req, opts.accepts)
       const params = await ctx.params
-      return await runWithRequestContext({ ip: clientAddress(req) }, () => handler(req, { user, params }))
+      return noStore(await runWithRequestContext({ ip: clientAddress(req) }, () => handler(req, { user, params })))
     } catch (e) {
-      return errorResponse(e)
+      return noStore(errorResponse(e))
     }
   }
   return Object.assign(route, { access })
@@ -61,10 +61,25 @@ export function publicRoute<P = Record<string, string>>(handler: (req: Request, 
     try {
       assertSameOrigin(req)
       const params = await ctx.params
-      return await runWithRequestContext({ ip: clientAddress(req) }, () => handler(req, { params }))
+      return noStore(await runWithRequestContext({ ip: clientAddress(req) }, () => handler(req, { params })))
     } catch (e) {
-      return errorResponse(e)
+      return noStore(errorResponse(e))
     }
   }
   return Object.assign(route, { access: 'public' as const })
+}
+
+/**
+ * API answers carry private data and change with every save: no browser or proxy may keep a copy.
+ * A Response whose headers are frozen (Response.redirect) is copied.
+ */
+export function noStore(res: Response): Response {
+  try {
+    res.headers.set('cache-control', 'no-store')
+    return res
+  } catch {
+    const copy = new Response(res.body, res)
+    copy.headers.set('cache-control', 'no-store')
+    return copy
+  }
 }

@@ -45,7 +45,26 @@ export async function readJson<S extends z.ZodType>(req: Request, schema: S, opt
   } catch {
     throw new ValidationError('The request body must be valid JSON')
   }
+  assertWellFormedText(body)
   return schema.parse(body)
+}
+
+/**
+ * JSON's \uD800-style escapes can carry half a UTF-16 pair, which no database text or JSON column
+ * can hold: refuse it in any string or key, anywhere in the body, naming where.
+ */
+function assertWellFormedText(value: unknown, path: string[] = []): void {
+  const bad = (s: string) => /\p{Cs}/u.test(s) // in u-mode only an unpaired surrogate is a Cs code point
+  if (typeof value === 'string') {
+    if (bad(value)) throw new ValidationError(`${path.join('.') || 'body'}: text must be valid Unicode (it holds a lone surrogate)`)
+  } else if (Array.isArray(value)) {
+    value.forEach((v, i) => assertWellFormedText(v, [...path, String(i)]))
+  } else if (value && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value)) {
+      if (bad(k)) throw new ValidationError(`${[...path, '?'].join('.')}: a field name must be valid Unicode (it holds a lone surrogate)`)
+      assertWellFormedText(v, [...path, k])
+    }
+  }
 }
 
 /** A positive integer route parameter, or a 404-worthy 400. */

@@ -4,15 +4,15 @@ import { loadMap, saveOnMap } from '@/app/_lib/maps/access'
 import { readJson } from '@/app/_lib/http/request'
 import { createdResponse, createOnce } from '@/app/_lib/http/idempotency'
 import { saveRevisionSchema } from '@/app/_schemas/map'
+import { idFilter, limitParam, parseQuery } from '@/app/_schemas/query'
+import { z } from 'zod'
 import { countRevisions, getSavedRevision, listRevisions } from '@/db/queries/revisions'
 import { limitsFromVehicle, validate } from '@/maps'
 
 // GET /api/maps/:id/revisions?before=&limit= — the history, newest first, without tables
 export const GET = withRole<{ id: string }>('signed-in', async (req, { params }) => {
   const map = await loadMap(params.id)
-  const q = new URL(req.url).searchParams
-  const before = q.get('before') ? Number(q.get('before')) : undefined
-  const limit = q.get('limit') ? Number(q.get('limit')) : undefined
+  const { before, limit } = parseQuery(req, z.strictObject({ before: idFilter('before').optional(), limit: limitParam(500, 50) }))
   const [revisions, total] = await Promise.all([listRevisions(map.id, { before, limit }), countRevisions(map.id)])
   return Response.json({ revisions, total })
 })

@@ -52,6 +52,11 @@ export const reportInputSchema = z.object({
 
 export type ReportInput = z.infer<typeof reportInputSchema>
 
+/** A drive log's column mapping: our column name → the header in the driver's file. */
+export const logColumnMappingSchema = z
+  .record(z.string().max(100, atMost('A column name', 100)), z.string().max(200, atMost('A header name', 200)))
+  .refine((m) => Object.keys(m).length <= 40, 'At most 40 mapped columns')
+
 /** A comment on a drive report. */
 export const reportCommentSchema = z.object({ body: z.string().trim().min(1, 'The comment is empty').max(5000, atMost('The comment', 5000)) })
 

@@ -7,9 +7,8 @@ import { startLogAnalysis } from '@/app/_lib/reports/log-jobs'
 import { deleteObject, putObjectStream } from '@/app/_lib/storage/object-store'
 import { CsvUploadGuard, guardedBody, PayloadTooLargeError, UnsupportedFileError, uploadFailure } from '@/app/_lib/http/upload-guard'
 import { createLog, listLogs } from '@/db/queries/logs'
-import { z } from 'zod'
+import { logColumnMappingSchema } from '@/app/_schemas/report'
 
-const mappingSchema = z.record(z.string(), z.string().max(200)).refine((m) => Object.keys(m).length <= 40, 'At most 40 mapped columns')
 
 // GET /api/reports/:id/logs — the report's logs with status and progress
 export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }) => {
@@ -27,7 +26,7 @@ export const POST = withRole<{ id: string }>(['test_driver'], async (req, { user
   let mapping: Record<string, string> = {}
   if (q.get('mapping')) {
     try {
-      mapping = mappingSchema.parse(JSON.parse(q.get('mapping') ?? '{}'))
+      mapping = logColumnMappingSchema.parse(JSON.parse(q.get('mapping') ?? '{}'))
     } catch {
       throw new ValidationError('mapping must be a JSON object of our column name → your header name')
     }

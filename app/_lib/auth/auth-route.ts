@@ -1,7 +1,7 @@
 import 'server-only'
 import NextAuth from 'next-auth'
 import type { NextApiRequest, NextApiResponse } from 'next'
-import { errorResponse } from '../http/errors'
+import { errorResponse, ValidationError } from '../http/errors'
 import { readBodyText } from '../http/request'
 import { clientAddress } from '../http/client-address'
 import { noStore } from '../http/access'
@@ -23,7 +23,13 @@ async function parseBody(req: Request): Promise<Record<string, unknown> | undefi
   if (req.method !== 'POST') return undefined
   const text = await readBodyText(req, AUTH_BODY_LIMIT)
   const type = req.headers.get('content-type') ?? ''
-  if (type.includes('application/json')) return JSON.parse(text || '{}')
+  if (type.includes('application/json')) {
+    try {
+      return JSON.parse(text || '{}')
+    } catch {
+      throw new ValidationError('The request body must be valid JSON')
+    }
+  }
   if (type.includes('application/x-www-form-urlencoded')) return Object.fromEntries(new URLSearchParams(text))
   return undefined
 }

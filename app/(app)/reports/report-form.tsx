@@ -73,6 +73,9 @@ export function ReportForm(props: {
   }, [values, mapId, revisionNumber, formState.isDirty, reportId, draftId])
 
   const submit = useMutation({
+    // Not the default 'online' mode, which pauses a send while offline and leaves the button on
+    // "Sending…" with no word of why: send now, and say plainly that nothing went out.
+    networkMode: 'always',
     mutationFn: (body: ReportFormOut) => {
       setServerError(null)
       setNoAnswer(null)

@@ -58,6 +58,8 @@ export const users = pgTable(
     role: text('role').$type<Role>().notNull(),
     passwordHash: text('password_hash').notNull(),
     disabled: boolean('disabled').notNull().default(false),
+    /** Carried in every session token; raised on a password change, reset or disabling to end all sessions. */
+    sessionVersion: integer('session_version').notNull().default(1),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
@@ -356,4 +358,44 @@ export const authTokens = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex('auth_tokens_hash_idx').on(t.tokenHash), check('auth_tokens_kind_check', oneOf(t.kind, LINK_KINDS))],
+)
+
+/**
+ * Sessions ended by signing out, by the session id in the token. Kept until every token of that
+ * session has expired (the sign-out time plus the session lifetime), then pruned.
+ */
+export const revokedSessions = pgTable(
+  'revoked_sessions',
+  {
+    sid: text('sid').primaryKey(),
+    userId: integer('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+  },
+  (t) => [index('revoked_sessions_expires_idx').on(t.expiresAt)],
+)
+
+/**
+ * A creation a person may send twice (a dropped connection, a reload that restores the draft): the
+ * client's key (the draft's id) per user and kind of creation, what the first request created, and
+ * a hash of its content. Written in the creation's own transaction; the unique index lets only one
+ * of two concurrent repeats create.
+ */
+export const idempotencyKeys = pgTable(
+  'idempotency_keys',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    userId: integer('user_id')
+      .notNull()
+      .references(() => users.id),
+    /** What the key created: report, report-comment, review-comment, revision. */
+    scope: text('scope').notNull(),
+    key: text('key').notNull(),
+    requestHash: text('request_hash').notNull(),
+    /** The id of the created row (set in the same transaction as the claim). */
+    resultId: integer('result_id'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('idempotency_keys_user_scope_key_idx').on(t.userId, t.scope, t.key)],
 )

@@ -23,7 +23,7 @@ delete env.DATABASE_URL
 await buildIfStale()
 const seeded = await run(bin('tsx'), ['--conditions=react-server', 'scripts/seed.ts'], { env })
 if (seeded !== 0) process.exit(seeded)
-const code = await run(bin('next'), ['start', '-H', '127.0.0.1', '-p', port], { env })
+const code = await run(process.execPath, ['scripts/server.mjs', '-H', '127.0.0.1', '-p', port], { env })
 await services.close()
 fs.rmSync(dataDir, { recursive: true, force: true })
 process.exit(code)

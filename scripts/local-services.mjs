@@ -1,18 +1,37 @@
 // Local stand-ins the app uses by default: a fake S3 server (s3rver) for drive logs and an SMTP
 // capture server for e-mail, both on 127.0.0.1 only. Start them from a script with startLocalServices().
 import fs from 'node:fs'
+import http from 'node:http'
 import path from 'node:path'
 import S3rver from 's3rver'
 import { SMTPServer } from 'smtp-server'
+import { s3Gate, sweepStaleUploads } from './s3-gate.mjs'
 
 export const S3_DEFAULTS = { bucket: 'mapwright-logs', accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' }
 
-/** Start the fake S3 server on 127.0.0.1:port (0 = any free port) storing under dir; returns its URL. */
+/**
+ * Start the fake S3 server on 127.0.0.1:port (0 = any free port) storing under dir; returns its URL.
+ * s3rver answers only through the gate of s3-gate.mjs: signed requests only, aborted multipart
+ * uploads removed (see docs/security.md for what the stand-in guarantees).
+ */
 export async function startFakeS3(dir, port = 4569) {
   fs.mkdirSync(dir, { recursive: true })
-  const server = new S3rver({ address: '127.0.0.1', port, directory: dir, silent: true, configureBuckets: [{ name: S3_DEFAULTS.bucket }] })
-  const addr = await server.run()
-  return { url: `http://127.0.0.1:${addr.port}`, close: () => server.close() }
+  const s3rver = new S3rver({ directory: dir, silent: true, configureBuckets: [{ name: S3_DEFAULTS.bucket }] })
+  await s3rver.configureBuckets()
+  sweepStaleUploads(dir, S3_DEFAULTS.bucket)
+  const sweep = setInterval(() => sweepStaleUploads(dir, S3_DEFAULTS.bucket), 60 * 60 * 1000).unref()
+  const server = http.createServer(s3Gate({ root: dir, creds: S3_DEFAULTS, next: s3rver.callback() }))
+  await new Promise((resolve, reject) => {
+    server.once('error', reject)
+    server.listen(port, '127.0.0.1', resolve)
+  })
+  const close = () =>
+    new Promise((resolve) => {
+      clearInterval(sweep)
+      server.closeAllConnections()
+      server.close(() => resolve())
+    })
+  return { url: `http://127.0.0.1:${server.address().port}`, close }
 }
 
 /**

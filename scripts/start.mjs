@@ -1,7 +1,7 @@
 // Start the production server on 127.0.0.1 (PORT, default 3000) with a per-install auth secret and
 // the local stand-ins for object storage and e-mail (unless S3_ENDPOINT / SMTP_URL name real ones).
 import path from 'node:path'
-import { authSecret, bin, buildIfStale, root, run } from './lib.mjs'
+import { authSecret, buildIfStale, root, run } from './lib.mjs'
 import { startLocalServices } from './local-services.mjs'
 
 const port = process.env.PORT ?? '3000'
@@ -15,6 +15,6 @@ const env = {
   NEXTAUTH_URL: process.env.NEXTAUTH_URL ?? `http://${host}:${port}`,
 }
 console.log(`Mapwright on http://${host}:${port}`)
-const code = await run(bin('next'), ['start', '-H', host, '-p', port], { env })
+const code = await run(process.execPath, ['scripts/server.mjs', '-H', host, '-p', port], { env })
 await services.close()
 process.exit(code)

@@ -1,6 +1,7 @@
 import { z } from 'zod'
 import { FLAG_SEVERITIES, SEVERITY_LABELS } from '@/domain/report-safety'
 import { LOAD_CASE_IDS, SURFACE_IDS } from '@/physics'
+import { atMost } from './text'
 
 export { SEVERITY_LABELS }
 
@@ -21,18 +22,20 @@ const rating = (label: string) =>
 export const flagSchema = z.object({
   pedalPct: z.number({ error: 'Flag pedal must be a number (%)' }).min(0, 'Flag pedal must be 0–100 %').max(100, 'Flag pedal must be 0–100 %'),
   speedKmh: z.number({ error: 'Flag speed must be a number (km/h)' }).min(0, 'Flag speed must not be negative').max(200, 'Flag speed must be at most 200 km/h'),
-  what: z.string().trim().min(1, 'Say what happened at the flagged point').max(500),
+  what: z.string().trim().min(1, 'Say what happened at the flagged point').max(500, atMost('What happened', 500)),
   severity: z.literal(FLAG_SEVERITIES, { error: 'Severity must be 1, 2, 3 or 4' }),
 })
 
 /** One schema for the report form and the API, so both refuse the same input with the same words. */
 export const reportInputSchema = z.object({
   revisionId: z.number({ error: 'Choose the revision the vehicle was flashed with' }).int().positive().max(2_147_483_647, 'Choose the revision the vehicle was flashed with'),
-  drivenOn: z.iso.date('Date must be a calendar date (YYYY-MM-DD)'),
-  vehicleUnit: z.string().trim().min(1, 'Vehicle unit is required (e.g. its fleet number)').max(60),
-  route: z.string().trim().min(1, 'Route or course is required').max(200),
+  drivenOn: z.iso
+    .date('Date must be a calendar date (YYYY-MM-DD)')
+    .refine((d) => d >= '1970-01-01' && d <= '9999-12-31', 'Date must be from 1970-01-01 to 9999-12-31'),
+  vehicleUnit: z.string().trim().min(1, 'Vehicle unit is required (e.g. its fleet number)').max(60, atMost('Vehicle unit', 60)),
+  route: z.string().trim().min(1, 'Route or course is required').max(200, atMost('Route', 200)),
   surface: z.enum(SURFACE_IDS, { error: 'Choose a road surface' }),
-  weather: z.string().trim().min(1, 'Weather is required').max(120),
+  weather: z.string().trim().min(1, 'Weather is required').max(120, atMost('Weather', 120)),
   ambientC: z.number({ error: 'Ambient temperature must be a number (°C)' }).min(-50, 'Ambient temperature must be at least −50 °C').max(60, 'Ambient temperature must be at most 60 °C'),
   loadCase: z.enum(LOAD_CASE_IDS, { error: 'Choose a load case' }),
   payloadKg: z.number({ error: 'Payload must be a number (kg)' }).min(0, 'Payload must not be negative').max(60_000, 'Payload must be at most 60,000 kg'),
@@ -50,6 +53,14 @@ export const reportInputSchema = z.object({
 
 export type ReportInput = z.infer<typeof reportInputSchema>
 
+/** A drive log's column mapping: our column name → the header in the driver's file. */
+export const logColumnMappingSchema = z
+  .record(z.string().max(100, atMost('A column name', 100)), z.string().max(200, atMost('A header name', 200)))
+  .refine((m) => Object.keys(m).length <= 40, 'At most 40 mapped columns')
+
+/** A comment on a drive report. */
+export const reportCommentSchema = z.object({ body: z.string().trim().min(1, 'The comment is empty').max(5000, atMost('The comment', 5000)) })
+
 export const resolveSafetySchema = z.object({
-  comment: z.string().trim().min(1, 'Say how the safety concern was resolved').max(5000),
+  comment: z.string().trim().min(1, 'Say how the safety concern was resolved').max(5000, atMost('The comment', 5000)),
 })

@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, isNull, sql, type SQL } from 'drizzle-orm'
-import { getDb } from '../client'
+import { getDb, type Db } from '../client'
 import { SAFETY_SEVERITY } from '../../domain/report-safety'
 import type { SurfaceId } from '../../physics/surfaces'
 import type { LoadCase } from '../../physics/vehicle'
@@ -86,9 +86,9 @@ export async function listReports(filter: { revisionId?: number; mapId?: number;
   return selectReports(conds.length ? and(...conds) : undefined)
 }
 
-/** `safetyMail` is queued in the same transaction when the report opens a safety concern. */
-export async function createReport(input: ReportFields, driverId: number, safetyMail?: (id: number) => OutgoingMail): Promise<number> {
-  const db = await getDb()
+/** `safetyMail` is queued in the same transaction when the report opens a safety concern; `conn`: an enclosing transaction. */
+export async function createReport(input: ReportFields, driverId: number, safetyMail?: (id: number) => OutgoingMail, conn?: Db): Promise<number> {
+  const db = conn ?? (await getDb())
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(driveReports)
@@ -155,10 +155,17 @@ export async function markReportRead(id: number, leadId: number): Promise<void> 
   })
 }
 
-export async function addReportComment(reportId: number, authorId: number, body: string) {
-  const db = await getDb()
+export async function addReportComment(reportId: number, authorId: number, body: string, conn?: Db) {
+  const db = conn ?? (await getDb())
   const [row] = await db.insert(reportComments).values({ reportId, authorId, body }).returning()
   return row
+}
+
+/** One comment as addReportComment returned it (a repeated request answers with the first). */
+export async function getReportComment(id: number) {
+  const db = await getDb()
+  const [row] = await db.select().from(reportComments).where(eq(reportComments.id, id))
+  return row ?? null
 }
 
 export async function listReportComments(reportId: number) {

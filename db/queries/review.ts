@@ -106,10 +106,17 @@ export async function listRevisionEvents(filter: { revisionId?: number; mapId?: 
 
 export type RevisionEventRow = Awaited<ReturnType<typeof listRevisionEvents>>[number]
 
-export async function addReviewComment(c: { revisionId: number; authorId: number; row: number | null; col: number | null; body: string }) {
-  const db = await getDb()
+export async function addReviewComment(c: { revisionId: number; authorId: number; row: number | null; col: number | null; body: string }, conn?: Db) {
+  const db = conn ?? (await getDb())
   const [row] = await db.insert(reviewComments).values(c).returning()
   return row
+}
+
+/** One comment as addReviewComment returned it (a repeated request answers with the first). */
+export async function getReviewComment(id: number) {
+  const db = await getDb()
+  const [row] = await db.select().from(reviewComments).where(eq(reviewComments.id, id))
+  return row ?? null
 }
 
 export async function listReviewComments(filter: { revisionId?: number; mapId?: number }) {

@@ -62,8 +62,8 @@ export const STATS_EVERY = 100
  * PGlite runs no autovacuum, so the planner's idea of the table size goes stale as history grows
  * (PostgreSQL's autovacuum does the same on its own; running it there too is harmless).
  */
-export async function refreshRevisionStatistics(): Promise<void> {
-  const db = await getDb()
+export async function refreshRevisionStatistics(conn?: Db): Promise<void> {
+  const db = conn ?? (await getDb())
   await db.execute(sql`analyze map_revisions`)
 }
 
@@ -80,14 +80,15 @@ export async function saveRevision(input: {
   notes: string
   table: MapTable
   action?: string
-}): Promise<SaveResult> {
-  const result = await saveInTransaction(input)
-  if (result.ok && result.revision.number % STATS_EVERY === 0) await refreshRevisionStatistics()
+}, conn?: Db): Promise<SaveResult> {
+  const result = await saveInTransaction(input, conn)
+  if (result.ok && result.revision.number % STATS_EVERY === 0) await refreshRevisionStatistics(conn)
   return result
 }
 
-async function saveInTransaction(input: Parameters<typeof saveRevision>[0]): Promise<SaveResult> {
-  const db = await getDb()
+/** `conn`: an enclosing transaction (the save then runs in a savepoint of it). */
+async function saveInTransaction(input: Parameters<typeof saveRevision>[0], conn?: Db): Promise<SaveResult> {
+  const db = conn ?? (await getDb())
   return db.transaction(async (tx) => {
     const locked = await tx.select({ id: maps.id }).from(maps).where(eq(maps.id, input.mapId)).for('update')
     if (!locked[0]) return { ok: false, reason: 'no-map' } as const
@@ -155,5 +156,15 @@ export async function getRevision(mapId: number, number?: number): Promise<Revis
     .where(number === undefined ? eq(mapRevisions.mapId, mapId) : and(eq(mapRevisions.mapId, mapId), eq(mapRevisions.number, number)))
     .orderBy(desc(mapRevisions.mapId), desc(mapRevisions.number))
     .limit(1)
+  return rows[0] ?? null
+}
+
+/** A saved revision as saveRevision returned it (a repeated save answers with the first). */
+export async function getSavedRevision(id: number): Promise<{ id: number; number: number; checksum: string; createdAt: Date } | null> {
+  const db = await getDb()
+  const rows = await db
+    .select({ id: mapRevisions.id, number: mapRevisions.number, checksum: mapRevisions.checksum, createdAt: mapRevisions.createdAt })
+    .from(mapRevisions)
+    .where(eq(mapRevisions.id, id))
   return rows[0] ?? null
 }

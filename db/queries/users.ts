@@ -2,7 +2,7 @@ import { asc, eq, sql } from 'drizzle-orm'
 import { getDb } from '../client'
 import { recordAudit, type AuditEntry } from './audit'
 import type { Role } from '../../domain/roles'
-import { users } from '../schema'
+import { revokedSessions, users } from '../schema'
 
 /** The columns safe to return anywhere: never the password hash. */
 const publicColumns = {
@@ -34,26 +34,39 @@ export async function getUserById(id: number): Promise<PublicUser | null> {
   return rows[0] ?? null
 }
 
-// The session check re-reads a user at most once a second: a disabled account or a changed role
-// still takes effect on the next request, because changes made through updateUser clear the entry
-// at once (with several servers on one PostgreSQL, the others see it within the second).
+// The session check re-reads a user at most once a second: a disabled account, a changed role or an
+// ended session still takes effect on the next request, because changes made here and in sessions.ts
+// clear the entries at once (with several servers on one PostgreSQL, the others see it within the second).
 const SESSION_TTL_MS = 1000
-const sessionCache = new Map<number, { at: number; user: PublicUser | null }>()
+export type SessionRow = PublicUser & { sessionVersion: number; revoked: boolean }
+const sessionCache = new Map<string, { at: number; row: SessionRow | null }>()
 
-/** The user for a session check, read fresh at most once a second. */
-export async function getSessionUser(id: number): Promise<PublicUser | null> {
-  const hit = sessionCache.get(id)
-  if (hit && Date.now() - hit.at < SESSION_TTL_MS) return hit.user
-  const user = await getUserById(id)
-  sessionCache.set(id, { at: Date.now(), user })
-  return user
+/** The user behind a session id, with its session version and whether that session was signed out. */
+export async function getSessionUser(id: number, sid: string): Promise<SessionRow | null> {
+  const key = `${id}:${sid}`
+  const hit = sessionCache.get(key)
+  if (hit && Date.now() - hit.at < SESSION_TTL_MS) return hit.row
+  const db = await getDb()
+  const rows = await db
+    .select({ ...publicColumns, sessionVersion: users.sessionVersion, revoked: sql<boolean>`exists (select 1 from ${revokedSessions} where ${revokedSessions.sid} = ${sid})` })
+    .from(users)
+    .where(eq(users.id, id))
+  const row = rows[0] ?? null
+  if (sessionCache.size > 10_000) sessionCache.clear()
+  sessionCache.set(key, { at: Date.now(), row })
+  return row
+}
+
+/** Drop the cached session checks of one user, so a change applies on their next request. */
+export function forgetSessionChecks(userId: number): void {
+  for (const key of sessionCache.keys()) if (key.startsWith(`${userId}:`)) sessionCache.delete(key)
 }
 
 /** For sign-in only: the one query that reads the hash. */
 export async function getUserCredentials(email: string) {
   const db = await getDb()
   const rows = await db
-    .select({ ...publicColumns, passwordHash: users.passwordHash })
+    .select({ ...publicColumns, passwordHash: users.passwordHash, sessionVersion: users.sessionVersion })
     .from(users)
     .where(eq(sql`lower(${users.email})`, email.trim().toLowerCase()))
   return rows[0] ?? null
@@ -80,16 +93,18 @@ export async function updateUser(
   audit?: AuditEntry,
 ): Promise<PublicUser | null> {
   const db = await getDb()
+  // A new password or disabling ends every session the user has (a copied cookie stops working).
+  const endSessions = patch.passwordHash !== undefined || patch.disabled === true
   const rows = await db.transaction(async (tx) => {
     const updated = await tx
       .update(users)
-      .set({ ...patch, updatedAt: new Date() })
+      .set({ ...patch, updatedAt: new Date(), ...(endSessions ? { sessionVersion: sql`${users.sessionVersion} + 1` } : {}) })
       .where(eq(users.id, id))
       .returning(publicColumns)
     if (updated[0] && audit) await recordAudit(audit, tx)
     return updated
   })
-  sessionCache.delete(id)
+  forgetSessionChecks(id)
   return rows[0] ?? null
 }
 

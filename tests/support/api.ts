@@ -1,5 +1,7 @@
 // Helpers for integration tests: real users in the test database, real session cookies, real Requests.
+import { randomUUID } from 'node:crypto'
 import { encode } from 'next-auth/jwt'
+import { currentSessionVersion } from '@/db/queries/sessions'
 import { env } from '@/app/_lib/config/env'
 import { createUser, type PublicUser } from '@/db/queries/users'
 import type { Role } from '@/domain/roles'
@@ -19,7 +21,9 @@ export async function makeUser(role: Role, opts: { password?: string; email?: st
 
 /** The Cookie header a browser would send after signing in as `user`, minted with the app's own secret. */
 export async function sessionCookie(user: Pick<PublicUser, 'id' | 'role' | 'email' | 'name'>): Promise<string> {
-  const token = await encode({ token: { sub: String(user.id), role: user.role, email: user.email, name: user.name }, secret: env().authSecret })
+  // A session of its own (sid) at the account's current session version (sv), as a sign-in makes.
+  const sv = await currentSessionVersion(user.id)
+  const token = await encode({ token: { sub: String(user.id), role: user.role, email: user.email, name: user.name, sid: randomUUID(), sv }, secret: env().authSecret })
   return `next-auth.session-token=${encodeURIComponent(token)}`
 }
 
@@ -28,18 +32,23 @@ type Handler<P> = (req: Request, ctx: { params: Promise<P> }) => Promise<Respons
 /** Call a route handler as Next would, with a real Request. */
 export async function call<P = Record<string, string>>(
   handler: Handler<P>,
-  opts: { method?: string; path?: string; body?: unknown; rawBody?: string; cookie?: string; params?: P } = {},
+  opts: { method?: string; path?: string; body?: unknown; rawBody?: string | ReadableStream<Uint8Array>; cookie?: string; params?: P; headers?: Record<string, string> } = {},
   // Bodies are loose JSON here: each test asserts the fields it cares about.
   // eslint-disable-next-line @typescript-eslint/no-explicit-any
 ): Promise<{ status: number; body: any }> {
   const headers: Record<string, string> = {}
   if (opts.cookie) headers.cookie = opts.cookie
-  if (opts.body !== undefined || opts.rawBody !== undefined) headers['content-type'] = 'application/json'
+  // A browser's fetch through the app's api() client sends JSON for every state-changing call.
+  if (opts.body !== undefined || opts.rawBody !== undefined || !['GET', 'HEAD', undefined].includes(opts.method)) headers['content-type'] = 'application/json'
+  Object.assign(headers, opts.headers)
+  const body = opts.rawBody ?? (opts.body !== undefined ? JSON.stringify(opts.body) : undefined)
   const req = new Request(`http://127.0.0.1:3000${opts.path ?? '/api/test'}`, {
     method: opts.method ?? 'GET',
     headers,
-    body: opts.rawBody ?? (opts.body !== undefined ? JSON.stringify(opts.body) : undefined),
-  })
+    body,
+    // A streamed body needs half duplex (undici's rule for request streams).
+    ...(body instanceof ReadableStream ? { duplex: 'half' } : {}),
+  } as RequestInit)
   const res = await handler(req, { params: Promise.resolve((opts.params ?? {}) as P) })
   const text = await res.text()
   return { status: res.status, body: text ? JSON.parse(text) : null }

@@ -32,6 +32,8 @@ const draftValuesSchema = lenient({
 })
 
 export const reportDraftSchema = lenient({
+  /** Sent as the Idempotency-Key: filing the same draft twice files one report. */
+  id: z.string().max(100),
   values: draftValuesSchema,
   mapId: z.number().int().positive(),
   revisionNumber: z.number().int().positive(),

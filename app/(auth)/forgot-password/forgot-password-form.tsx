@@ -15,7 +15,7 @@ export function ForgotPasswordForm() {
     }
   }
   return (
-    <form onSubmit={onSubmit} className="card space-y-3">
+    <form method="post" onSubmit={onSubmit} className="card space-y-3">
       <div>
         <label htmlFor="email" className="label">Email</label>
         <input id="email" name="email" type="email" className="field" required />

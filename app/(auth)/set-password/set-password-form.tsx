@@ -23,7 +23,7 @@ export function SetPasswordForm({ token }: { token: string }) {
       </p>
     )
   return (
-    <form onSubmit={onSubmit} className="card space-y-3">
+    <form method="post" onSubmit={onSubmit} className="card space-y-3">
       <div>
         <label htmlFor="password" className="label">New password (at least 10 characters)</label>
         <input id="password" name="password" type="password" autoComplete="new-password" className="field" required minLength={10} />

@@ -28,7 +28,7 @@ export function SignInForm() {
   }
 
   return (
-    <form onSubmit={onSubmit} className="card space-y-4" noValidate>
+    <form method="post" onSubmit={onSubmit} className="card space-y-4" noValidate>
       <div>
         <label htmlFor="email" className="label">Email</label>
         <input id="email" name="email" type="email" autoComplete="username" required className="field" />

@@ -8,6 +8,8 @@ import { mapTableSchema } from '@/maps'
 
 /** What a stored map draft must be to be restored; anything else (an older app version) is dropped. */
 export const mapDraftSchema = z.object({
+  /** Sent as the Idempotency-Key of the save: saving the same draft twice makes one revision. */
+  id: z.string().max(100).optional(),
   baseNumber: z.number().int().min(0),
   /** The revision's table as it was when the draft began, to tell what changed. */
   baseTable: mapTableSchema,

@@ -6,19 +6,21 @@
 import { useMutation } from '@tanstack/react-query'
 import { useRouter } from 'next/navigation'
 import { useState } from 'react'
-import { api } from '@/app/_components/api-client'
+import { api, newDraftId } from '@/app/_components/api-client'
 import type { SaveAnswer } from './api-types'
 
 export function ImportPanel({ mapId, parentNumber, blocked }: { mapId: number; parentNumber: number; blocked: boolean }) {
   const router = useRouter()
   const [file, setFile] = useState<File | null>(null)
   const [message, setMessage] = useState('')
+  // One id per chosen file: pressing Import again after a lost answer makes one revision.
+  const [draftId, setDraftId] = useState(newDraftId)
   const upload = useMutation({
     mutationFn: async () => {
       if (!file) throw new Error('Choose a CSV file first')
       if (!message.trim()) throw new Error('A message saying why is required')
       const csv = await file.text()
-      return api<SaveAnswer>(`/api/maps/${mapId}/import`, { method: 'POST', json: { parentNumber, message: message.trim(), notes: `Imported from ${file.name}`, csv } })
+      return api<SaveAnswer>(`/api/maps/${mapId}/import`, { method: 'POST', json: { parentNumber, message: message.trim(), notes: `Imported from ${file.name}`, csv }, headers: { 'idempotency-key': draftId } })
     },
     onSuccess: (res) => router.push(`/maps/${mapId}?saved=${res.revision.number}`),
   })
@@ -33,6 +35,7 @@ export function ImportPanel({ mapId, parentNumber, blocked }: { mapId: number; p
         onChange={(e) => {
           const f = e.target.files?.[0] ?? null
           setFile(f)
+          setDraftId(newDraftId())
           if (f && !message) setMessage(`Import ${f.name}`)
         }}
       />

@@ -85,7 +85,7 @@ export default function MapEditor({ mapId, limits, vehicle = null, base: pageBas
       <MapWorkspace table={table} units={units} limits={limits} range={range} onSelect={setRange} onEdit={onEdit} onGridApi={onGridApi} cellShade={traction.shade} />
       <div className="grid gap-4 lg:grid-cols-2">
         {canSave && (
-          <SavePanel mapId={mapId} table={table} base={draft.base} dirty={draft.dirty} message={draft.message} notes={draft.notes} setMessage={draft.setMessage} setNotes={draft.setNotes} units={units} onSaved={draft.finish} onRebase={draft.rebase} />
+          <SavePanel mapId={mapId} draftId={draft.draftId} table={table} base={draft.base} dirty={draft.dirty} message={draft.message} notes={draft.notes} setMessage={draft.setMessage} setNotes={draft.setNotes} units={units} onSaved={draft.finish} onRebase={draft.rebase} />
         )}
         <div className="space-y-4">
           {canSave && <ImportPanel mapId={mapId} parentNumber={draft.base.number} blocked={draft.dirty} />}

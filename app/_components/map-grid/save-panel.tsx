@@ -26,6 +26,8 @@ type FieldsOut = z.output<typeof saveFieldsSchema>
 
 export interface SavePanelProps {
   mapId: number
+  /** The draft's id, sent as the Idempotency-Key. */
+  draftId: string
   table: MapTable
   base: Base
   dirty: boolean
@@ -53,7 +55,7 @@ export function SavePanel(p: SavePanelProps) {
   }, [p.message, p.notes, getValues, setValue])
 
   const save = useMutation({
-    mutationFn: (fields: FieldsOut) => api<SaveAnswer>(`/api/maps/${p.mapId}/revisions`, { method: 'POST', json: { parentNumber: p.base.number, ...fields, table: p.table } }),
+    mutationFn: (fields: FieldsOut) => api<SaveAnswer>(`/api/maps/${p.mapId}/revisions`, { method: 'POST', json: { parentNumber: p.base.number, ...fields, table: p.table }, headers: { 'idempotency-key': p.draftId } }),
     onSuccess: (res) => {
       p.onSaved()
       router.push(`/maps/${p.mapId}?saved=${res.revision.number}`)

@@ -5,6 +5,7 @@
  */
 import { useCallback, useEffect, useState } from 'react'
 import type { MapTable } from '@/maps'
+import { newDraftId } from '@/app/_components/api-client'
 import { useLocalDraft } from '../use-local-draft'
 import { mapDraftKey, mapDraftSchema } from './draft-storage'
 import { sameTable } from './same-table'
@@ -22,12 +23,14 @@ export function useMapDraft(mapId: number, pageBase: Base) {
   const [message, setMessage] = useState(restored?.message ?? '')
   const [notes, setNotes] = useState(restored?.notes ?? '')
   const [restoredAt, setRestoredAt] = useState<string | null>(restored?.savedAt ?? null)
+  // Kept with the draft across reloads, so a save sent again after a lost answer is recognised.
+  const [draftId, setDraftId] = useState(() => restored?.id ?? newDraftId())
   const dirty = !sameTable(history.table, base.table)
 
   useEffect(() => {
     if (!dirty && !message && !notes) return clear()
-    save({ baseNumber: base.number, baseTable: base.table, table: history.table, message, notes, savedAt: new Date().toISOString() })
-  }, [save, clear, base, history.table, message, notes, dirty])
+    save({ id: draftId, baseNumber: base.number, baseTable: base.table, table: history.table, message, notes, savedAt: new Date().toISOString() })
+  }, [save, clear, base, history.table, message, notes, dirty, draftId])
 
   const { reset } = history
   const discard = useCallback(() => {
@@ -37,13 +40,17 @@ export function useMapDraft(mapId: number, pageBase: Base) {
     setMessage('')
     setNotes('')
     setRestoredAt(null)
+    setDraftId(newDraftId())
   }, [clear, pageBase, reset])
 
   /** Put the edits on top of a newer revision: the edited table stays exactly as it is. */
   const rebase = useCallback((next: Base) => setBase(next), [])
 
   /** After a save the draft is done with. */
-  const finish = clear
+  const finish = useCallback(() => {
+    clear()
+    setDraftId(newDraftId())
+  }, [clear])
 
-  return { ...history, base, dirty, message, setMessage, notes, setNotes, restoredAt, dismissRestored: () => setRestoredAt(null), discard, rebase, finish }
+  return { ...history, draftId, base, dirty, message, setMessage, notes, setNotes, restoredAt, dismissRestored: () => setRestoredAt(null), discard, rebase, finish }
 }

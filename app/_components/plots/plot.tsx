@@ -1,10 +1,12 @@
 'use client'
 /**
  * The one way the app draws a Plotly figure: loaded in the browser only (`ssr: false`), with the
- * mode bar always on and its "download plot as PNG" button named after the figure.
+ * mode bar always on and its "download plot as PNG" button named after the figure. Titles and trace
+ * names are shown as text, never as Plotly's HTML subset (see plot-text.ts).
  */
 import dynamic from 'next/dynamic'
-import type { Config, Data, Layout } from 'plotly.js'
+import type { Data, Layout } from 'plotly.js'
+import { dataAsText, layoutAsText, plotConfig } from './plot-text'
 
 const PlotlyComponent = dynamic(() => import('./plotly-component'), {
   ssr: false,
@@ -35,18 +37,12 @@ const BASE_LAYOUT: Partial<Layout> = {
 }
 
 export function Plot({ data, layout, filename, height = 380, onRelayout, className = '' }: PlotProps) {
-  const config: Partial<Config> = {
-    displaylogo: false,
-    displayModeBar: true,
-    responsive: true,
-    toImageButtonOptions: { format: 'png', filename, scale: 2 },
-  }
   return (
     <div className={className} style={{ height }}>
       <PlotlyComponent
-        data={data}
-        layout={{ ...BASE_LAYOUT, ...layout }}
-        config={config}
+        data={dataAsText(data)}
+        layout={layoutAsText({ ...BASE_LAYOUT, ...layout })}
+        config={plotConfig(filename)}
         onRelayout={onRelayout}
         useResizeHandler
         style={{ width: '100%', height: '100%' }}

@@ -1,7 +1,8 @@
 import 'server-only'
 import { getUserCredentials } from '@/db/queries/users'
 import { recordAudit } from '@/db/queries/audit'
-import { verifyPassword } from './password'
+import { randomBytes } from 'node:crypto'
+import { hashPassword, verifyPassword } from './password'
 import type { SessionUser } from './session'
 import { checkAttempt, clearFailures, recordFailure } from './sign-in-limiter'
 
@@ -16,23 +17,36 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms))
 
 /**
  * Check an email and password against the stored argon2id hash. Disabled accounts never pass.
- * Repeated failures for the account or from the address are slowed down, then refused a while.
+ * Repeated failures are slowed down, then refused a while from the failing address.
  * Returns the user for the session, or null; failures are audited against the account.
  */
-export async function checkCredentials(email: string, password: string, ip: string | null = null): Promise<SessionUser | null> {
+export async function checkCredentials(email: string, password: string, ip: string | null = null): Promise<(SessionUser & { sessionVersion: number }) | null> {
   if (!email.trim() || !password) return null
-  const keys = [`account:${email.trim().toLowerCase()}`, ...(ip ? [`ip:${ip}`] : [])]
-  const verdict = checkAttempt(keys)
+  const account = email.trim().toLowerCase()
+  const address = ip ?? 'unknown'
+  // The account's own count only slows attempts down; the hard lock is per account × address and per
+  // address, so failures from elsewhere never lock the owner out (docs/security.md).
+  const slowOnly = [`account:${account}`]
+  const refusing = [`pair:${account}|${address}`, ...(ip ? [`ip:${ip}`] : [])]
+  const verdict = checkAttempt(refusing, Date.now(), slowOnly)
   if (!verdict.allowed) throw new SignInLockedError(verdict.retryAfterS)
   if (verdict.delayMs) await sleep(verdict.delayMs)
   const user = await getUserCredentials(email)
-  const ok = Boolean(user && !user.disabled && (await verifyPassword(user.passwordHash, password)))
-  if (!ok || !user) {
-    recordFailure(keys)
+  // Unknown and disabled accounts are checked against a dummy hash: every answer costs one argon2id verify.
+  const verified = await verifyPassword(user && !user.disabled ? user.passwordHash : await dummyHash(), password)
+  if (!verified || !user || user.disabled) {
+    recordFailure([...slowOnly, ...refusing])
     if (user) await recordAudit({ actorId: user.id, action: 'auth.failed', entityType: 'user', entityId: user.id, details: { ip } })
     return null
   }
-  clearFailures([keys[0]])
+  clearFailures([...slowOnly, refusing[0]])
   await recordAudit({ actorId: user.id, action: 'auth.signin', entityType: 'user', entityId: user.id, details: { ip } })
-  return { id: user.id, email: user.email, name: user.name, role: user.role }
+  return { id: user.id, email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion }
+}
+
+let dummy: Promise<string> | undefined
+/** A hash of a random password, made once, with the same parameters as real ones. */
+function dummyHash(): Promise<string> {
+  dummy ??= hashPassword(randomBytes(24).toString('base64url'))
+  return dummy
 }

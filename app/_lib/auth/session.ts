@@ -1,5 +1,5 @@
 import 'server-only'
-import { decode } from 'next-auth/jwt'
+import { decode, type JWT } from 'next-auth/jwt'
 import { getSessionUser, type PublicUser } from '@/db/queries/users'
 import { env } from '../config/env'
 
@@ -21,19 +21,25 @@ function readCookie(header: string | null, name: string): string | undefined {
 }
 
 /**
- * The signed-in user behind a Cookie header, or null. The user row is read on every request, so a
- * disabled account or a changed role takes effect at once, not when the token expires.
+ * The user a decoded session token still stands for, or null. Checked on every request, so a
+ * disabled account, a changed role, a sign-out (`sid` revoked) or a password change or reset (`sv`
+ * raised) takes effect at once, not when the token expires.
  */
+export async function userForToken(jwt: JWT | null): Promise<SessionUser | null> {
+  const id = Number(jwt?.sub)
+  if (!jwt || !Number.isInteger(id) || typeof jwt.sid !== 'string' || typeof jwt.sv !== 'number') return null
+  const row = await getSessionUser(id, jwt.sid)
+  if (!row || row.disabled || row.revoked || row.sessionVersion !== jwt.sv) return null
+  return { id: row.id, email: row.email, name: row.name, role: row.role }
+}
+
+/** The signed-in user behind a Cookie header, or null. */
 export async function userFromCookieHeader(cookieHeader: string | null): Promise<SessionUser | null> {
   for (const name of SESSION_COOKIES) {
     const token = readCookie(cookieHeader, name)
     if (!token) continue
     const jwt = await decode({ token, secret: env().authSecret }).catch(() => null)
-    const id = Number(jwt?.sub)
-    if (!jwt || !Number.isInteger(id)) continue
-    const user = await getSessionUser(id)
-    if (!user || user.disabled) return null
-    return { id: user.id, email: user.email, name: user.name, role: user.role }
+    if (jwt) return userForToken(jwt)
   }
   return null
 }

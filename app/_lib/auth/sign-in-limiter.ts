@@ -1,5 +1,7 @@
 /**
- * Slows down and then refuses repeated failed sign-ins, per account and per client address.
+ * Slows down and then refuses repeated failed sign-ins: the caller says which counts only slow down
+ * (the account's, so nobody elsewhere can lock its owner out) and which may refuse (one address on
+ * one account, and one address across accounts).
  * Kept in process memory: enough for one server; behind several servers, put the counts in the
  * shared database or the proxy in front (docs/security.md).
  */
@@ -28,18 +30,23 @@ function recent(key: string, now: number): number[] {
 
 export type Verdict = { allowed: true; delayMs: number } | { allowed: false; retryAfterS: number }
 
-/** May an attempt for these keys go ahead now, and after how long a pause? */
-export function checkAttempt(keys: string[], now = Date.now()): Verdict {
+/**
+ * May an attempt for these keys go ahead now, and after how long a pause? Every key's failures slow
+ * the attempt down; only `keys` can refuse it, `slowOnly` keys never do (see credentials.ts).
+ */
+export function checkAttempt(keys: string[], now = Date.now(), slowOnly: string[] = []): Verdict {
   let worst = 0
+  let worstRefusing = 0
   let oldest = now
   for (const k of keys) {
     const list = recent(k, now)
-    if (list.length > worst) {
-      worst = list.length
+    if (list.length > worstRefusing) {
+      worstRefusing = list.length
       oldest = list[0]
     }
   }
-  if (worst >= LIMITS.refuseAt) return { allowed: false, retryAfterS: Math.ceil((oldest + LIMITS.windowMs - now) / 1000) }
+  for (const k of [...keys, ...slowOnly]) worst = Math.max(worst, recent(k, now).length)
+  if (worstRefusing >= LIMITS.refuseAt) return { allowed: false, retryAfterS: Math.ceil((oldest + LIMITS.windowMs - now) / 1000) }
   return { allowed: true, delayMs: Math.min(LIMITS.maxDelayMs, Math.max(0, worst - LIMITS.slowAfter + 1) * LIMITS.stepMs) }
 }
 

@@ -18,9 +18,14 @@ const schema = z.object({
   MAIL_FROM: z.string().default('Mapwright <mapwright@localhost>'),
   MAIL_OUTBOX_FILE: z.string().optional(),
   LOG_MAX_BYTES: z.coerce.number().int().positive().default(200 * 1024 * 1024),
+  // Addresses of reverse proxies whose X-Forwarded-For is believed, comma-separated; unset: none.
+  TRUSTED_PROXIES: z
+    .string()
+    .default('')
+    .refine((v) => v.split(',').every((a) => !a.trim() || /^[0-9a-fA-F:.]+$/.test(a.trim())), 'TRUSTED_PROXIES must list IP addresses separated by commas, such as 127.0.0.1,::1'),
 })
 
-export type Env = z.infer<typeof schema> & { authSecret: string }
+export type Env = z.infer<typeof schema> & { authSecret: string; trustedProxies: string[] }
 
 let cached: Env | undefined
 
@@ -39,6 +44,7 @@ export function env(): Env {
     if (e.NODE_ENV === 'production') throw new Error('NEXTAUTH_SECRET is required in production (npm run start sets one up in .data/)')
     authSecret = 'mapwright-development-secret-not-for-production'
   }
-  cached = { ...e, authSecret }
+  const trustedProxies = e.TRUSTED_PROXIES.split(',').map((a) => a.trim()).filter(Boolean)
+  cached = { ...e, authSecret, trustedProxies }
   return cached
 }

@@ -3,6 +3,8 @@ import { roleLabel, type Role } from '@/domain/roles'
 import { errorResponse, ForbiddenError, UnauthorizedError } from './errors'
 import { userFromCookieHeader, type SessionUser } from '../auth/session'
 import { runWithRequestContext } from '@/db/request-context'
+import { assertSameOrigin } from './same-origin'
+import { clientAddress } from './client-address'
 
 /** Who may call an entry point: listed roles, any signed-in user, or anyone. */
 export type Access = readonly Role[] | 'signed-in' | 'public'
@@ -13,6 +15,11 @@ export interface RouteCtx<P> {
 }
 
 type NextCtx<P> = { params: Promise<P> }
+
+export interface RouteOptions {
+  /** Body types a state-changing call may send; JSON unless the route takes a file (see same-origin.ts). */
+  accepts?: readonly string[]
+}
 
 /** Check a user against a declared access rule; throws 401/403 errors. */
 export function assertAccess(user: SessionUser | null, access: Access): asserts user is SessionUser {
@@ -30,24 +37,20 @@ export function assertAccess(user: SessionUser | null, access: Access): asserts 
 export function withRole<P = Record<string, string>>(
   access: Exclude<Access, 'public'>,
   handler: (req: Request, ctx: RouteCtx<P>) => Promise<Response>,
+  opts: RouteOptions = {},
 ) {
   const route = async (req: Request, ctx: NextCtx<P>): Promise<Response> => {
     try {
       const user = await userFromCookieHeader(req.headers.get('cookie'))
       assertAccess(user, access)
+      assertSameOrigin(req, opts.accepts)
       const params = await ctx.params
-      return await runWithRequestContext({ ip: clientIp(req) }, () => handler(req, { user, params }))
+      return noStore(await runWithRequestContext({ ip: clientAddress(req) }, () => handler(req, { user, params })))
     } catch (e) {
-      return errorResponse(e)
+      return noStore(errorResponse(e))
     }
   }
   return Object.assign(route, { access })
-}
-
-/** The caller's address: the first X-Forwarded-For hop when a proxy sets it, else X-Real-IP. */
-export function clientIp(req: Request): string | null {
-  const fwd = req.headers.get('x-forwarded-for')
-  return fwd?.split(',')[0].trim() || req.headers.get('x-real-ip') || null
 }
 
 /**
@@ -57,11 +60,27 @@ export function clientIp(req: Request): string | null {
 export function publicRoute<P = Record<string, string>>(handler: (req: Request, ctx: { params: P }) => Promise<Response>) {
   const route = async (req: Request, ctx: NextCtx<P>): Promise<Response> => {
     try {
+      assertSameOrigin(req)
       const params = await ctx.params
-      return await runWithRequestContext({ ip: clientIp(req) }, () => handler(req, { params }))
+      return noStore(await runWithRequestContext({ ip: clientAddress(req) }, () => handler(req, { params })))
     } catch (e) {
-      return errorResponse(e)
+      return noStore(errorResponse(e))
     }
   }
   return Object.assign(route, { access: 'public' as const })
+}
+
+/**
+ * API answers carry private data and change with every save: no browser or proxy may keep a copy.
+ * A Response whose headers are frozen (Response.redirect) is copied.
+ */
+export function noStore(res: Response): Response {
+  try {
+    res.headers.set('cache-control', 'no-store')
+    return res
+  } catch {
+    const copy = new Response(res.body, res)
+    copy.headers.set('cache-control', 'no-store')
+    return copy
+  }
 }

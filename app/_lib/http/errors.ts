@@ -39,6 +39,12 @@ export class ValidationError extends HttpError {
   }
 }
 
+export class BodyTooLargeError extends HttpError {
+  constructor(limit: number) {
+    super(413, 'too_large', `The request body is larger than the limit of ${Math.round(limit / (1024 * 1024))} MB`)
+  }
+}
+
 export interface ErrorBody {
   error: { code: string; message: string; details?: unknown }
 }

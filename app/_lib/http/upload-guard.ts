@@ -1,5 +1,6 @@
 import 'server-only'
-import { Transform, type TransformCallback } from 'node:stream'
+import { pipeline, Readable, Transform, type TransformCallback } from 'node:stream'
+import type { ReadableStream as WebReadableStream } from 'node:stream/web'
 import { HttpError } from './errors'
 
 export class PayloadTooLargeError extends HttpError {
@@ -10,6 +11,12 @@ export class PayloadTooLargeError extends HttpError {
 export class UnsupportedFileError extends HttpError {
   constructor(message: string) {
     super(415, 'unsupported_file', message)
+  }
+}
+
+export class UploadInterruptedError extends HttpError {
+  constructor() {
+    super(400, 'upload_interrupted', 'The upload was interrupted before the whole file arrived; nothing was kept. Send the file again.')
   }
 }
 
@@ -46,4 +53,24 @@ export class CsvUploadGuard extends Transform {
     if (this.bytes === 0) return done(new UnsupportedFileError('The file is empty'))
     done()
   }
+}
+
+/**
+ * The request body through the guard. pipeline, not pipe: a client that drops the connection then
+ * ends the guard with an error (pipe would leave the upload waiting for bytes forever, and the
+ * body's error, with no listener, would be an uncaughtException); a refusal by the guard stops
+ * reading the client.
+ */
+export function guardedBody(body: WebReadableStream<Uint8Array>, guard: CsvUploadGuard): CsvUploadGuard {
+  pipeline(Readable.fromWeb(body), guard, () => {
+    /* the error, if any, is on the guard: see uploadFailure */
+  })
+  return guard
+}
+
+/** Why a guarded upload failed: the guard's own 413/415, an interrupted body, or the store's error. */
+export function uploadFailure(guard: CsvUploadGuard, storeError: unknown): unknown {
+  const e = guard.errored
+  if (e instanceof HttpError) return e
+  return e ? new UploadInterruptedError() : storeError
 }

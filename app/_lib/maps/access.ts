@@ -1,4 +1,5 @@
 import 'server-only'
+import type { Db } from '@/db/client'
 import { getMap, getMapWithRevision, type MapWithProgram } from '@/db/queries/maps'
 import { getRevision, saveRevision, type Revision } from '@/db/queries/revisions'
 import type { MapTable } from '@/maps'
@@ -46,9 +47,10 @@ function optionalInt(param: string | undefined): number | null {
 export async function saveOnMap(
   map: MapWithProgram,
   input: { parentNumber: number; message: string; notes: string; table: MapTable; authorId: number; action?: string },
+  conn?: Db,
 ) {
   if (input.table.kind !== map.kind) throw new ValidationError(`table.kind: this is a ${map.kind} map; the table is a ${input.table.kind} table`)
-  const result = await saveRevision({ mapId: map.id, ...input })
+  const result = await saveRevision({ mapId: map.id, ...input }, conn)
   if (result.ok) return result.revision
   if (result.reason === 'no-map') throw new NotFoundError(`Map ${map.id}`)
   throw new ConflictError(

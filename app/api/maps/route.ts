@@ -3,13 +3,15 @@ import { EDITORS } from '@/app/_lib/auth/roles'
 import { NotFoundError, ValidationError } from '@/app/_lib/http/errors'
 import { readJson } from '@/app/_lib/http/request'
 import { createMapSchema } from '@/app/_schemas/map'
+import { idFilter, parseQuery } from '@/app/_schemas/query'
+import { z } from 'zod'
 import { createMap, listMaps } from '@/db/queries/maps'
 import { getProgram } from '@/db/queries/programs'
 
 // GET /api/maps?programId= — the maps, with their latest revision number
 export const GET = withRole('signed-in', async (req) => {
-  const programId = new URL(req.url).searchParams.get('programId')
-  return Response.json({ maps: await listMaps(programId ? { programId: Number(programId) } : {}) })
+  const { programId } = parseQuery(req, z.strictObject({ programId: idFilter('programId').optional() }))
+  return Response.json({ maps: await listMaps(programId ? { programId } : {}) })
 })
 
 // POST /api/maps — create a map with its first revision

@@ -1,28 +1,40 @@
 import { withRole } from '@/app/_lib/http/access'
 import { checkReportTarget } from '@/app/_lib/reports/access'
 import { readJson } from '@/app/_lib/http/request'
+import { createdResponse, createOnce } from '@/app/_lib/http/idempotency'
 import { reportInputSchema } from '@/app/_schemas/report'
+import { flagParam, idFilter, parseQuery } from '@/app/_schemas/query'
+import { z } from 'zod'
 import { createReport, getReport, listReports } from '@/db/queries/reports'
 import { nudgeMail, safetyMailFor } from '@/app/_lib/reports/mail'
 
+const listSchema = z.strictObject({
+  revisionId: idFilter('revisionId').optional(),
+  mapId: idFilter('mapId').optional(),
+  driverId: idFilter('driverId').optional(),
+  mine: flagParam('mine'),
+  openSafety: flagParam('openSafety'),
+})
+
 // GET /api/reports?revisionId=&mapId=&mine=1&openSafety=1 — drive reports, newest first
 export const GET = withRole('signed-in', async (req, { user }) => {
-  const q = new URL(req.url).searchParams
-  const num = (k: string) => (q.get(k) ? Number(q.get(k)) : undefined)
+  const q = parseQuery(req, listSchema)
   const reports = await listReports({
-    revisionId: num('revisionId'),
-    mapId: num('mapId'),
-    driverId: q.get('mine') === '1' ? user.id : num('driverId'),
-    openSafety: q.get('openSafety') === '1',
+    revisionId: q.revisionId,
+    mapId: q.mapId,
+    driverId: q.mine === '1' ? user.id : q.driverId,
+    openSafety: q.openSafety === '1',
   })
   return Response.json({ reports })
 })
 
-// POST /api/reports — a test driver files a drive report against one exact revision
+// POST /api/reports — a test driver files a drive report against one exact revision.
+// Idempotency-Key (the draft's id): filing the same draft again answers with the first report.
 export const POST = withRole(['test_driver'], async (req, { user }) => {
   const input = await readJson(req, reportInputSchema)
   await checkReportTarget(input)
-  const id = await createReport(input, user.id, await safetyMailFor(input, user))
-  nudgeMail()
-  return Response.json({ report: await getReport(id) }, { status: 201 })
+  const mail = await safetyMailFor(input, user)
+  const { id, replayed } = await createOnce(req, { userId: user.id, scope: 'report', what: 'report', request: input }, (conn) => createReport(input, user.id, mail, conn))
+  if (!replayed) nudgeMail()
+  return createdResponse({ report: await getReport(id) }, replayed)
 })

@@ -66,9 +66,9 @@ function isAlive(pid: number): boolean {
 
 interface Server { child: ChildProcess; exited: Promise<void> }
 
-/** `next start` in its own process group, so one signal reaches it and anything it forks. */
+/** The production server (scripts/server.mjs) in its own process group, so one signal reaches it and anything it forks. */
 function startServer(env: NodeJS.ProcessEnv, port: number): Server {
-  const child = spawn(bin('next'), ['start', '-H', '127.0.0.1', '-p', String(port)], { cwd: root, env, detached: true, stdio: ['ignore', 'pipe', 'pipe'] })
+  const child = spawn(process.execPath, ['scripts/server.mjs', '-H', '127.0.0.1', '-p', String(port)], { cwd: root, env, detached: true, stdio: ['ignore', 'pipe', 'pipe'] })
   // Listen for the exit now: a killed server may be gone before anyone awaits it.
   const exited = new Promise<void>((resolve) => child.once('exit', () => resolve()))
   child.stdout?.on('data', () => {}) // drain, or a chatty server blocks on a full pipe

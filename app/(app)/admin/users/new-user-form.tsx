@@ -30,7 +30,7 @@ export function NewUserForm({ onCreated }: { onCreated: () => void }) {
   })
   const err = formState.errors
   return (
-    <form onSubmit={handleSubmit((v) => create.mutate(v))} className="card grid gap-4 md:grid-cols-2" noValidate>
+    <form method="post" onSubmit={handleSubmit((v) => create.mutate(v))} className="card grid gap-4 md:grid-cols-2" noValidate>
       <h2 className="font-semibold md:col-span-2">New user</h2>
       <div>
         <label htmlFor="nu-name" className="label">Name</label>

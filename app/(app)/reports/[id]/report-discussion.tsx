@@ -2,7 +2,7 @@
 import { useRouter } from 'next/navigation'
 import { useState } from 'react'
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query'
-import { api } from '@/app/_components/api-client'
+import { api, newDraftId } from '@/app/_components/api-client'
 import { formatTime } from '@/app/_components/format'
 
 interface CommentItem { id: number; body: string; createdAt: string; authorName: string }
@@ -14,10 +14,13 @@ export function ReportDiscussion(props: { reportId: number; canComment: boolean;
   const key = ['report-comments', props.reportId]
   const list = useQuery({ queryKey: key, queryFn: () => api<{ comments: CommentItem[] }>(`/api/reports/${props.reportId}/comments`) })
   const [body, setBody] = useState('')
+  // One id per comment being written: pressing Comment again after a lost answer adds it once.
+  const [draftId, setDraftId] = useState(newDraftId)
   const add = useMutation({
-    mutationFn: () => api(`/api/reports/${props.reportId}/comments`, { method: 'POST', json: { body } }),
+    mutationFn: () => api(`/api/reports/${props.reportId}/comments`, { method: 'POST', json: { body }, headers: { 'idempotency-key': draftId } }),
     onSuccess: () => {
       setBody('')
+      setDraftId(newDraftId())
       return qc.invalidateQueries({ queryKey: key })
     },
   })

@@ -1,7 +1,7 @@
 'use client'
 import { useState } from 'react'
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query'
-import { api } from '@/app/_components/api-client'
+import { api, newDraftId } from '@/app/_components/api-client'
 import { formatTime } from '@/app/_components/format'
 
 interface CommentItem {
@@ -20,13 +20,16 @@ export function ReviewComments(props: { revisionId: number; initial: CommentItem
   const list = useQuery({ queryKey: key, initialData: { comments: props.initial }, queryFn: () => api<{ comments: CommentItem[] }>(`/api/revisions/${props.revisionId}/comments`) })
   const [body, setBody] = useState('')
   const [cell, setCell] = useState('')
+  // One id per comment being written: pressing the button again after a lost answer adds it once.
+  const [draftId, setDraftId] = useState(newDraftId)
   const add = useMutation({
     mutationFn: () => {
       const [row, col] = cell ? cell.split(':').map(Number) : [null, null]
-      return api(`/api/revisions/${props.revisionId}/comments`, { method: 'POST', json: { body, row, col } })
+      return api(`/api/revisions/${props.revisionId}/comments`, { method: 'POST', json: { body, row, col }, headers: { 'idempotency-key': draftId } })
     },
     onSuccess: () => {
       setBody('')
+      setDraftId(newDraftId())
       return qc.invalidateQueries({ queryKey: key })
     },
   })

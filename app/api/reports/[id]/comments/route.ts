@@ -1,12 +1,11 @@
-import { z } from 'zod'
 import { withRole } from '@/app/_lib/http/access'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { loadReport } from '@/app/_lib/reports/access'
 import { readJson } from '@/app/_lib/http/request'
-import { addReportComment, listReportComments } from '@/db/queries/reports'
+import { createdResponse, createOnce } from '@/app/_lib/http/idempotency'
+import { addReportComment, getReportComment, listReportComments } from '@/db/queries/reports'
 import { recordAudit } from '@/db/queries/audit'
-
-const commentSchema = z.object({ body: z.string().trim().min(1, 'The comment is empty').max(5000) })
+import { reportCommentSchema } from '@/app/_schemas/report'
 
 // GET /api/reports/:id/comments — engineers' comments on a drive report
 export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }) => {
@@ -14,11 +13,14 @@ export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }
   return Response.json({ comments: await listReportComments(report.id) })
 })
 
-// POST /api/reports/:id/comments — an engineer comments on a drive report
+// POST /api/reports/:id/comments — an engineer comments on a drive report (Idempotency-Key: the draft's id)
 export const POST = withRole<{ id: string }>(EDITORS, async (req, { user, params }) => {
   const report = await loadReport(params.id)
-  const { body } = await readJson(req, commentSchema)
-  const comment = await addReportComment(report.id, user.id, body)
-  await recordAudit({ actorId: user.id, action: 'report.comment', entityType: 'drive_report', entityId: report.id })
-  return Response.json({ comment }, { status: 201 })
+  const { body } = await readJson(req, reportCommentSchema)
+  const { id, replayed } = await createOnce(req, { userId: user.id, scope: 'report-comment', what: 'comment', request: { reportId: report.id, body } }, async (conn) => {
+    const comment = await addReportComment(report.id, user.id, body, conn)
+    await recordAudit({ actorId: user.id, action: 'report.comment', entityType: 'drive_report', entityId: report.id }, conn)
+    return comment.id
+  })
+  return createdResponse({ comment: await getReportComment(id) }, replayed)
 })

@@ -1,16 +1,14 @@
 import { randomUUID } from 'node:crypto'
-import { Readable } from 'node:stream'
 import { withRole } from '@/app/_lib/http/access'
 import { env } from '@/app/_lib/config/env'
 import { ValidationError } from '@/app/_lib/http/errors'
 import { assertOwner, loadReport } from '@/app/_lib/reports/access'
 import { startLogAnalysis } from '@/app/_lib/reports/log-jobs'
 import { deleteObject, putObjectStream } from '@/app/_lib/storage/object-store'
-import { CsvUploadGuard, PayloadTooLargeError, UnsupportedFileError } from '@/app/_lib/http/upload-guard'
+import { CsvUploadGuard, guardedBody, PayloadTooLargeError, UnsupportedFileError, uploadFailure } from '@/app/_lib/http/upload-guard'
 import { createLog, listLogs } from '@/db/queries/logs'
-import { z } from 'zod'
+import { logColumnMappingSchema } from '@/app/_schemas/report'
 
-const mappingSchema = z.record(z.string(), z.string().max(200)).refine((m) => Object.keys(m).length <= 40, 'At most 40 mapped columns')
 
 // GET /api/reports/:id/logs — the report's logs with status and progress
 export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }) => {
@@ -28,7 +26,7 @@ export const POST = withRole<{ id: string }>(['test_driver'], async (req, { user
   let mapping: Record<string, string> = {}
   if (q.get('mapping')) {
     try {
-      mapping = mappingSchema.parse(JSON.parse(q.get('mapping') ?? '{}'))
+      mapping = logColumnMappingSchema.parse(JSON.parse(q.get('mapping') ?? '{}'))
     } catch {
       throw new ValidationError('mapping must be a JSON object of our column name → your header name')
     }
@@ -41,14 +39,15 @@ export const POST = withRole<{ id: string }>(['test_driver'], async (req, { user
 
   const objectKey = `logs/report-${report.id}/${randomUUID()}.csv`
   const guard = new CsvUploadGuard(limit)
-  const body = Readable.fromWeb(req.body as import('node:stream/web').ReadableStream<Uint8Array>).pipe(guard)
+  const body = guardedBody(req.body as import('node:stream/web').ReadableStream<Uint8Array>, guard)
   try {
+    // A failed multipart upload is aborted by the store client, which removes the parts stored so far.
     await putObjectStream(objectKey, body, 'text/csv')
   } catch (e) {
     await deleteObject(objectKey).catch(() => {})
-    throw guard.destroyed && guard.errored ? guard.errored : e
+    throw uploadFailure(guard, e)
   }
   const log = await createLog({ reportId: report.id, objectKey, fileName, sizeBytes: guard.bytes, mapping })
   startLogAnalysis(log.id)
   return Response.json({ log }, { status: 201 })
-})
+}, { accepts: ['text/csv'] })

@@ -47,10 +47,10 @@ export function useMapDraft(mapId: number, pageBase: Base) {
   const rebase = useCallback((next: Base) => setBase(next), [])
 
   /** After a save the draft is done with. */
-  const finish = useCallback(() => {
-    clear()
-    setDraftId(newDraftId())
-  }, [clear])
+  // The draft id is not renewed here: a new id would re-run the mirroring effect and store the
+  // just-saved edits again as a draft on the old base (the next visit then saved on a stale parent).
+  // The page navigates away after a save; the next editor gets a fresh id from the cleared storage.
+  const finish = clear
 
   return { ...history, draftId, base, dirty, message, setMessage, notes, setNotes, restoredAt, dismissRestored: () => setRestoredAt(null), discard, rebase, finish }
 }

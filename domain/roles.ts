@@ -17,3 +17,6 @@ export function roleLabel(role: Role): string {
 export function isRole(s: string): s is Role {
   return ROLES.some((r) => r === s)
 }
+
+/** Who may read the audit trail: the API route, the page and the navigation all take it from here. */
+export const AUDIT_READERS = ['admin', 'lead_engineer'] as const satisfies readonly Role[]

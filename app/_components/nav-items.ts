@@ -1,4 +1,4 @@
-import type { Role } from '@/domain/roles'
+import { AUDIT_READERS, type Role } from '@/domain/roles'
 
 export interface NavItem {
   href: string
@@ -15,7 +15,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/programs', label: 'Vehicle programs', roles: 'all' },
   { href: '/admin/users', label: 'Users', roles: ['admin'] },
   { href: '/admin/mail', label: 'E-mail', roles: ['admin'] },
-  { href: '/admin/audit', label: 'Audit trail', roles: ['admin', 'lead_engineer'] },
+  { href: '/admin/audit', label: 'Audit trail', roles: AUDIT_READERS },
 ]
 
 export function navFor(role: Role): NavItem[] {

@@ -1,16 +1,22 @@
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { formatTime } from '@/app/_components/format'
 import { listAudit } from '@/db/queries/audit'
-import { AUDIT_READERS } from './readers'
+import { auditFilterSchema } from '@/app/_schemas/audit'
+import { AUDIT_READERS } from '@/domain/roles'
 
 export const metadata = { title: 'Audit trail' }
 
 export default async function AuditPage(props: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   await requirePageUser(AUDIT_READERS)
   const q = await props.searchParams
-  const str = (k: string) => (typeof q[k] === 'string' && q[k] ? (q[k] as string) : undefined)
-  const filter = { entityType: str('entityType'), action: str('action'), since: str('since') ? new Date(str('since')!) : undefined, until: str('until') ? new Date(str('until')!) : undefined, limit: 500 }
-  const rows = await listAudit(filter)
+  // The API's own filter schema: a date out of range (year 0, 275760) or an unknown filter is said
+  // on the page, not a 500 and not silently ignored.
+  const given = Object.fromEntries(Object.entries(q).filter((e): e is [string, string] => typeof e[1] === 'string' && e[1] !== ''))
+  const parsed = auditFilterSchema.safeParse(given)
+  const problems = parsed.success ? [] : parsed.error.issues.map((i) => i.message)
+  const str = (k: string): string | undefined => given[k]
+  const filter = { entityType: str('entityType'), action: str('action') }
+  const rows = parsed.success ? await listAudit(parsed.data) : []
   const csvQuery = new URLSearchParams(Object.entries({ ...q, format: 'csv' }).filter((e): e is [string, string] => typeof e[1] === 'string' && e[1] !== '')).toString()
   return (
     <div className="space-y-4">
@@ -40,6 +46,12 @@ export default async function AuditPage(props: { searchParams: Promise<Record<st
           <a className="btn" href={`/api/audit?${csvQuery}`}>Export CSV</a>
         </div>
       </form>
+      {problems.length > 0 && (
+        <div role="alert" data-testid="audit-filter-problems" className="card border-red-300 bg-red-50 text-sm text-red-800">
+          <p className="font-medium">These filters cannot be used:</p>
+          <ul className="list-disc pl-5">{problems.map((m) => <li key={m}>{m}</li>)}</ul>
+        </div>
+      )}
       <div className="card overflow-x-auto p-0">
         <table className="w-full text-sm" data-testid="audit-table">
           <thead className="bg-slate-50 text-left text-xs uppercase text-slate-600">

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { MAX_ID } from './query'
 import { atMost } from './text'
 import { mapTableSchema } from '@/maps'
 
@@ -7,7 +8,7 @@ const notes = z.string().max(20_000, 'Notes must be at most 20,000 characters').
 const parentNumber = z.number({ error: 'parentNumber must be the number of the revision you started from' }).int().min(0)
 
 export const createMapSchema = z.object({
-  programId: z.number().int().positive('programId must name a vehicle program').max(2_147_483_647, 'programId must name a vehicle program'),
+  programId: z.number().int().positive('programId must name a vehicle program').max(MAX_ID, 'programId must name a vehicle program'),
   name: z.string().trim().min(1, 'Name is required').max(120, atMost('Name', 120)),
   kind: z.enum(['drive', 'regen'], { error: "kind must be 'drive' or 'regen'" }),
   description: z.string().max(2000, atMost('Description', 2000)).default(''),

@@ -1,12 +1,18 @@
 import { z } from 'zod'
 
+/** The largest row id the database's integer columns hold (2^31 - 1). */
+export const MAX_ID = 2_147_483_647
+
+/** A row id as text: plain digits only (Number() would also take " 1", "1e3" and "0x10"). */
+export const ID_DIGITS = /^[1-9][0-9]{0,9}$/
+
 /** Query-string values: each says what it accepts, and unknown names are refused (see parseQuery). */
 export const idFilter = (name: string) =>
   z
     .string()
-    .regex(/^[1-9][0-9]{0,9}$/, `${name} must be a positive whole number`)
+    .regex(ID_DIGITS, `${name} must be a positive whole number`)
     .transform(Number)
-    .refine((n) => n <= 2_147_483_647, `${name} must be a positive whole number below 2,147,483,648`)
+    .refine((n) => n <= MAX_ID, `${name} must be a positive whole number below 2,147,483,648`)
 
 export const limitParam = (max: number, fallback: number) =>
   z

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { MAX_ID } from './query'
 import { FLAG_SEVERITIES, SEVERITY_LABELS } from '@/domain/report-safety'
 import { LOAD_CASE_IDS, SURFACE_IDS } from '@/physics'
 import { atMost } from './text'
@@ -28,7 +29,7 @@ export const flagSchema = z.object({
 
 /** One schema for the report form and the API, so both refuse the same input with the same words. */
 export const reportInputSchema = z.object({
-  revisionId: z.number({ error: 'Choose the revision the vehicle was flashed with' }).int().positive().max(2_147_483_647, 'Choose the revision the vehicle was flashed with'),
+  revisionId: z.number({ error: 'Choose the revision the vehicle was flashed with' }).int().positive().max(MAX_ID, 'Choose the revision the vehicle was flashed with'),
   drivenOn: z.iso
     .date('Date must be a calendar date (YYYY-MM-DD)')
     .refine((d) => d >= '1970-01-01' && d <= '9999-12-31', 'Date must be from 1970-01-01 to 9999-12-31'),

@@ -1,3 +1,5 @@
+import 'server-only'
+
 /**
  * A fixed budget of requests per key within a sliding window, in process memory (one server; see
  * docs/security.md for several). Used for the forgot-password route, per account and per address.

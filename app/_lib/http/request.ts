@@ -1,5 +1,6 @@
 import 'server-only'
 import type { z } from 'zod'
+import { ID_DIGITS, MAX_ID } from '@/app/_schemas/query'
 import { BodyTooLargeError, ValidationError } from './errors'
 
 /** Every JSON body is capped at this unless a route says otherwise (the CSV import needs more). */
@@ -70,8 +71,7 @@ function assertWellFormedText(value: unknown, path: string[] = []): void {
 
 /** A positive integer route parameter, or a 404-worthy 400. */
 export function intParam(value: string | undefined, name: string): number {
-  // Plain digits only: Number() would also take " 1", "1e3" and "0x10".
-  const n = /^[1-9][0-9]{0,9}$/.test(value ?? '') ? Number(value) : NaN
-  if (!Number.isInteger(n) || n > 2_147_483_647) throw new ValidationError(`${name} must be a positive whole number`)
+  const n = ID_DIGITS.test(value ?? '') ? Number(value) : NaN
+  if (!Number.isInteger(n) || n > MAX_ID) throw new ValidationError(`${name} must be a positive whole number`)
   return n
 }

@@ -59,7 +59,7 @@ export function makeRenderer(store: RenderStore): Renderer {
     if (!isAxis && typeof value === 'number') {
       const nm = units.torqueIn(value)
       TD.style.backgroundColor = scale.colour(nm)
-      if (scale.dark(nm)) TD.style.color = '#fff'
+      TD.style.color = scale.text(nm)
       const shade = cellShade?.(row - 1, col - 1)
       // An inset shadow paints over the background without replacing it, so both stay readable.
       if (shade) TD.style.boxShadow = `inset 0 0 0 100px ${shade}`

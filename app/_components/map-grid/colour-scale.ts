@@ -18,11 +18,32 @@ export interface ColourScale {
   colour: (v: number) => string
   /** True when text on that background should be light. */
   dark: (v: number) => boolean
+  /** The text colour for a value's cell: white on dark colours, near black on light ones. */
+  text: (v: number) => string
   /** CSS gradient of the whole scale, for the legend. */
   gradient: string
 }
 
 const rgb = ([r, g, b]: [number, number, number]) => `rgb(${r}, ${g}, ${b})`
+
+/**
+ * Text on the light end of the scale. Black, because only black and white together guarantee 4.5:1
+ * on every background: where the two tie, the ratio is 4.58:1; any lighter dark text ties below 4.5.
+ */
+export const CELL_TEXT: [number, number, number] = [0, 0, 0]
+const WHITE: [number, number, number] = [255, 255, 255]
+
+/** Relative luminance of an sRGB colour (WCAG 2.1, "relative luminance"). */
+export function luminance([r, g, b]: [number, number, number]): number {
+  const lin = (c: number) => (c / 255 <= 0.04045 ? c / 255 / 12.92 : ((c / 255 + 0.055) / 1.055) ** 2.4)
+  return 0.2126 * lin(r) + 0.7152 * lin(g) + 0.0722 * lin(b)
+}
+
+/** Contrast ratio of two colours, 1 to 21 (WCAG 2.1, "contrast ratio"). */
+export function contrast(a: [number, number, number], b: [number, number, number]): number {
+  const [hi, lo] = [luminance(a), luminance(b)].sort((x, y) => y - x)
+  return (hi + 0.05) / (lo + 0.05)
+}
 
 function at(t: number): [number, number, number] {
   const x = Math.min(1, Math.max(0, t)) * (STOPS.length - 1)
@@ -44,11 +65,15 @@ export function colourScale(values: number[][], ceiling?: number): ColourScale {
   if (ceiling !== undefined && ceiling > 0) max = ceiling
   const span = max - min || 1
   const t = (v: number) => (v - min) / span
+  // White text only where it reads better than the dark text: a fixed cut-off put white on mid teal
+  // at 3.2:1, below the 4.5:1 that WCAG 2.1 AA asks for small text.
+  const dark = (v: number) => Number.isFinite(v) && contrast(at(t(v)), WHITE) > contrast(at(t(v)), CELL_TEXT)
   return {
     min,
     max,
     colour: (v) => (Number.isFinite(v) ? rgb(at(t(v))) : '#fde2e1'),
-    dark: (v) => Number.isFinite(v) && t(v) > 0.6,
+    dark,
+    text: (v) => rgb(dark(v) ? WHITE : CELL_TEXT),
     gradient: `linear-gradient(to right, ${STOPS.map(rgb).join(', ')})`,
   }
 }

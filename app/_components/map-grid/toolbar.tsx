@@ -18,7 +18,7 @@ export interface ToolbarProps extends Omit<OpInput, 'text'> {
 
 function Group({ children, label }: { children: ReactNode; label: string }) {
   return (
-    <div role="group" aria-label={label} className="flex items-center gap-1 rounded-md border border-line bg-slate-50 px-1.5 py-1">
+    <div role="group" aria-label={label} className="flex flex-wrap items-center gap-1 rounded-md border border-line bg-slate-50 px-1.5 py-1">
       {children}
     </div>
   )

@@ -1,6 +1,7 @@
 import 'server-only'
 import type { LinkKind } from '@/domain/one-time-links'
-import { createHash, randomBytes } from 'node:crypto'
+import { randomBytes } from 'node:crypto'
+import { sha256Hex } from '@/db/checksum'
 import { createAuthToken, consumeAuthToken } from '@/db/queries/auth-tokens'
 import { appUrl, nudgeMail } from '../mail/sender'
 import { hashPassword } from './password'
@@ -8,7 +9,7 @@ import { hashPassword } from './password'
 export const INVITE_HOURS = 72
 export const RESET_HOURS = 1
 
-const hashToken = (token: string) => createHash('sha256').update(token).digest('hex')
+const hashToken = (token: string) => sha256Hex(token)
 
 /** Make a one-time link for a user and e-mail it. Only the token's hash is stored. */
 export async function sendOneTimeLink(user: { id: number; email: string; name: string }, kind: LinkKind, actorId: number | null): Promise<void> {

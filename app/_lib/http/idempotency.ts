@@ -1,5 +1,5 @@
 import 'server-only'
-import { createHash } from 'node:crypto'
+import { sha256Hex } from '@/db/checksum'
 import type { Db } from '@/db/client'
 import { runOnce } from '@/db/queries/idempotency'
 import { HttpError, ValidationError } from './errors'
@@ -46,7 +46,7 @@ export async function createOnce(
 ): Promise<{ id: number; replayed: boolean }> {
   const key = idempotencyKeyOf(req)
   if (key === null) return { id: await create(undefined), replayed: false }
-  const requestHash = createHash('sha256').update(JSON.stringify(opts.request)).digest('hex')
+  const requestHash = sha256Hex(JSON.stringify(opts.request))
   const r = await runOnce({ userId: opts.userId, scope: opts.scope, key, requestHash }, create)
   if ('mismatch' in r) throw new IdempotencyKeyReusedError(opts.what, r.resultId)
   return { id: r.resultId, replayed: r.replayed }

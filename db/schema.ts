@@ -49,6 +49,19 @@ export interface Acknowledgement {
   reason: string
 }
 
+/** An acknowledgement as a set release keeps it: which exception, why, who and when. */
+export interface AcknowledgementRecord extends Acknowledgement {
+  mapKind: MapKind
+  revisionId: number
+  surface: SurfaceId
+  loadCase: LoadCase
+  /** Cells beyond the limit less the margin when the lead acknowledged it (absent in releases older than sets). */
+  cells?: number
+  byId: number
+  byName: string
+  at: string
+}
+
 export const users = pgTable(
   'users',
   {
@@ -85,6 +98,29 @@ export const vehiclePrograms = pgTable(
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex('vehicle_programs_name_idx').on(sql`lower(${t.name})`)],
+)
+
+/**
+ * One numbered, immutable version of a program's parameters and release conditions. Every change
+ * makes a new version (who, when, why); what the physics judges names the version it was judged
+ * with. The program row keeps a copy of the latest version for the editor's live physics.
+ */
+export const paramVersions = pgTable(
+  'param_versions',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    programId: integer('program_id')
+      .notNull()
+      .references(() => vehiclePrograms.id),
+    /** Per-program sequence number, 1, 2, 3 … */
+    number: integer('number').notNull(),
+    params: jsonb('params').$type<VehicleParams>().notNull(),
+    releaseConditions: jsonb('release_conditions').$type<ReleaseConditions>().notNull(),
+    reason: text('reason').notNull(),
+    createdBy: integer('created_by').references(() => users.id),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('param_versions_program_number_idx').on(t.programId, t.number)],
 )
 
 export const maps = pgTable(
@@ -160,6 +196,8 @@ export interface ReportRatings {
 
 /** A point on the map where something was wrong; severity 4 is a safety concern. */
 export interface ReportFlag {
+  /** Which map of the report's set the point is on. */
+  map: MapKind
   pedalPct: number
   speedKmh: number
   what: string
@@ -170,9 +208,10 @@ export const driveReports = pgTable(
   'drive_reports',
   {
     id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
-    revisionId: integer('revision_id')
+    /** The map set the truck ran: fixed when the report is filed; only a lead may correct it (audited). */
+    setId: integer('set_id')
       .notNull()
-      .references(() => mapRevisions.id),
+      .references(() => mapSets.id),
     driverId: integer('driver_id')
       .notNull()
       .references(() => users.id),
@@ -200,7 +239,7 @@ export const driveReports = pgTable(
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
-    index('drive_reports_revision_idx').on(t.revisionId),
+    index('drive_reports_set_idx').on(t.setId),
     index('drive_reports_driver_idx').on(t.driverId),
     check('drive_reports_safety_check', oneOf(t.safety, SAFETY_STATES)),
     check('drive_reports_surface_check', oneOf(t.surface, SURFACE_IDS)),
@@ -296,32 +335,74 @@ export const reviewComments = pgTable(
   (t) => [index('review_comments_revision_idx').on(t.revisionId)],
 )
 
-/** A revision released to the vehicles. At most one current release per map. */
-export const releases = pgTable(
-  'releases',
+/**
+ * What one truck is flashed with: a drive map revision, a regen map revision and the parameter
+ * version of the same program they are judged with. Immutable (a trigger refuses changes):
+ * changing anything makes a new set. More controller parts join later as more columns, each
+ * also written into parts_key, which makes one combination one set.
+ */
+export const mapSets = pgTable(
+  'map_sets',
   {
     id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
-    mapId: integer('map_id')
+    programId: integer('program_id')
       .notNull()
-      .references(() => maps.id),
-    revisionId: integer('revision_id')
+      .references(() => vehiclePrograms.id),
+    /** Per-program sequence number, 1, 2, 3 … */
+    number: integer('number').notNull(),
+    /** Null only in sets the 0006 migration made from data older than sets, where the program had no map of that kind. */
+    driveRevisionId: integer('drive_revision_id').references(() => mapRevisions.id),
+    regenRevisionId: integer('regen_revision_id').references(() => mapRevisions.id),
+    paramVersionId: integer('param_version_id')
       .notNull()
-      .references(() => mapRevisions.id),
+      .references(() => paramVersions.id),
+    /** "d<drive id>:r<regen id>:p<param version id>": one row per combination. */
+    partsKey: text('parts_key').notNull(),
+    note: text('note').notNull().default(''),
+    createdBy: integer('created_by').references(() => users.id),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex('map_sets_program_number_idx').on(t.programId, t.number),
+    uniqueIndex('map_sets_parts_idx').on(t.programId, t.partsKey),
+    check('map_sets_has_a_map', sql`${t.driveRevisionId} is not null or ${t.regenRevisionId} is not null`),
+  ],
+)
+
+/**
+ * A set released to a program's vehicles. The package is built once at release and its bytes
+ * kept in object storage; the row keeps their SHA-256, and a trigger refuses any change to what
+ * was released (only retiring and withdrawing are recorded later). At most one current per program.
+ */
+export const setReleases = pgTable(
+  'set_releases',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    setId: integer('set_id')
+      .notNull()
+      .references(() => mapSets.id),
+    programId: integer('program_id')
+      .notNull()
+      .references(() => vehiclePrograms.id),
     releasedBy: integer('released_by')
       .notNull()
       .references(() => users.id),
     releasedAt: timestamp('released_at', { withTimezone: true }).notNull().defaultNow(),
-    /** Gate exceptions the lead acknowledged, each with a reason. */
-    acknowledgements: jsonb('acknowledgements').$type<Acknowledgement[]>().notNull().default([]),
-    /** Set when a later release took its place. */
+    acknowledgements: jsonb('acknowledgements').$type<AcknowledgementRecord[]>().notNull().default([]),
+    /** Object key, file name, size and SHA-256 of the frozen package; null only for releases older than frozen packages. */
+    packageKey: text('package_key'),
+    packageName: text('package_name'),
+    packageBytes: integer('package_bytes'),
+    packageSha256: text('package_sha256'),
+    manifest: jsonb('manifest').$type<Record<string, unknown>>(),
     retiredAt: timestamp('retired_at', { withTimezone: true }),
     withdrawnAt: timestamp('withdrawn_at', { withTimezone: true }),
     withdrawnBy: integer('withdrawn_by').references(() => users.id),
     withdrawReason: text('withdraw_reason'),
   },
   (t) => [
-    index('releases_map_idx').on(t.mapId),
-    uniqueIndex('releases_one_current_per_map_idx').on(t.mapId).where(sql`${t.retiredAt} is null and ${t.withdrawnAt} is null`),
+    index('set_releases_set_idx').on(t.setId),
+    uniqueIndex('set_releases_one_current_per_program_idx').on(t.programId).where(sql`${t.retiredAt} is null and ${t.withdrawnAt} is null`),
   ],
 )
 

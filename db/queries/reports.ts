@@ -1,14 +1,15 @@
-import { and, asc, desc, eq, isNull, sql, type SQL } from 'drizzle-orm'
+import { and, asc, desc, eq, inArray, isNull, or, sql, type SQL } from 'drizzle-orm'
+import { alias } from 'drizzle-orm/pg-core'
 import { getDb, type Db } from '../client'
 import { SAFETY_SEVERITY } from '../../domain/report-safety'
 import type { SurfaceId } from '../../physics/surfaces'
 import type { LoadCase } from '../../physics/vehicle'
-import { driveReports, mapRevisions, maps, reportComments, users, vehiclePrograms, type ReportFlag, type ReportRatings } from '../schema'
+import { driveReports, mapRevisions, maps, mapSets, paramVersions, reportComments, users, vehiclePrograms, type ReportFlag, type ReportRatings } from '../schema'
 import { recordAudit } from './audit'
 import { enqueueMail, type OutgoingMail } from './mail'
 
+/** What a driver writes; the set is chosen at filing and is not among the fields an edit changes. */
 export interface ReportFields {
-  revisionId: number
   drivenOn: string
   vehicleUnit: string
   route: string
@@ -25,14 +26,25 @@ export interface ReportFields {
 
 const safetyFlags = (flags: ReportFlag[]) => flags.filter((f) => f.severity === SAFETY_SEVERITY).length
 
+const driveRev = alias(mapRevisions, 'drive_rev')
+const regenRev = alias(mapRevisions, 'regen_rev')
+const driveMap = alias(maps, 'drive_map')
+const regenMap = alias(maps, 'regen_map')
+
 const columns = {
   id: driveReports.id,
-  revisionId: driveReports.revisionId,
-  revisionNumber: mapRevisions.number,
-  revisionChecksum: mapRevisions.checksum,
-  mapId: maps.id,
-  mapName: maps.name,
-  mapKind: maps.kind,
+  setId: driveReports.setId,
+  setNumber: mapSets.number,
+  paramVersionId: mapSets.paramVersionId,
+  paramVersion: paramVersions.number,
+  driveRevisionId: mapSets.driveRevisionId,
+  driveNumber: driveRev.number,
+  driveMapId: driveMap.id,
+  driveMapName: driveMap.name,
+  regenRevisionId: mapSets.regenRevisionId,
+  regenNumber: regenRev.number,
+  regenMapId: regenMap.id,
+  regenMapName: regenMap.name,
   programId: vehiclePrograms.id,
   programName: vehiclePrograms.name,
   driverId: driveReports.driverId,
@@ -62,9 +74,13 @@ async function selectReports(where: SQL | undefined, limit = 200) {
   return db
     .select(columns)
     .from(driveReports)
-    .innerJoin(mapRevisions, eq(mapRevisions.id, driveReports.revisionId))
-    .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
-    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .innerJoin(mapSets, eq(mapSets.id, driveReports.setId))
+    .innerJoin(paramVersions, eq(paramVersions.id, mapSets.paramVersionId))
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, mapSets.programId))
+    .leftJoin(driveRev, eq(driveRev.id, mapSets.driveRevisionId))
+    .leftJoin(driveMap, eq(driveMap.id, driveRev.mapId))
+    .leftJoin(regenRev, eq(regenRev.id, mapSets.regenRevisionId))
+    .leftJoin(regenMap, eq(regenMap.id, regenRev.mapId))
     .innerJoin(users, eq(users.id, driveReports.driverId))
     .where(where)
     .orderBy(desc(driveReports.drivenOn), desc(driveReports.id))
@@ -77,24 +93,27 @@ export async function getReport(id: number): Promise<ReportRow | null> {
   return (await selectReports(eq(driveReports.id, id), 1))[0] ?? null
 }
 
-export async function listReports(filter: { revisionId?: number; mapId?: number; driverId?: number; openSafety?: boolean } = {}) {
+/** Reports filtered by set, by a revision or map their set holds, by driver or by an open safety concern. */
+export async function listReports(filter: { setId?: number; revisionId?: number; mapId?: number; programId?: number; driverId?: number; openSafety?: boolean } = {}) {
   const conds: SQL[] = []
-  if (filter.revisionId) conds.push(eq(driveReports.revisionId, filter.revisionId))
-  if (filter.mapId) conds.push(eq(maps.id, filter.mapId))
+  if (filter.setId) conds.push(eq(driveReports.setId, filter.setId))
+  if (filter.revisionId) conds.push(or(eq(mapSets.driveRevisionId, filter.revisionId), eq(mapSets.regenRevisionId, filter.revisionId))!)
+  if (filter.mapId) conds.push(or(eq(driveMap.id, filter.mapId), eq(regenMap.id, filter.mapId))!)
+  if (filter.programId) conds.push(eq(mapSets.programId, filter.programId))
   if (filter.driverId) conds.push(eq(driveReports.driverId, filter.driverId))
   if (filter.openSafety) conds.push(eq(driveReports.safety, 'open'))
   return selectReports(conds.length ? and(...conds) : undefined)
 }
 
 /** `safetyMail` is queued in the same transaction when the report opens a safety concern; `conn`: an enclosing transaction. */
-export async function createReport(input: ReportFields, driverId: number, safetyMail?: (id: number) => OutgoingMail, conn?: Db): Promise<number> {
+export async function createReport(input: ReportFields & { setId: number }, driverId: number, safetyMail?: (id: number) => OutgoingMail, conn?: Db): Promise<number> {
   const db = conn ?? (await getDb())
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(driveReports)
       .values({ ...input, driverId, safety: safetyFlags(input.flags) > 0 ? 'open' : 'none' })
       .returning({ id: driveReports.id })
-    await recordAudit({ actorId: driverId, action: 'report.create', entityType: 'drive_report', entityId: row.id, details: { revisionId: input.revisionId, safety: safetyFlags(input.flags) > 0 } }, tx)
+    await recordAudit({ actorId: driverId, action: 'report.create', entityType: 'drive_report', entityId: row.id, details: { setId: input.setId, safety: safetyFlags(input.flags) > 0 } }, tx)
     if (safetyFlags(input.flags) > 0 && safetyMail) await enqueueMail([safetyMail(row.id)], tx)
     return row.id
   })
@@ -131,19 +150,40 @@ export async function resolveSafety(id: number, leadId: number, comment: string)
   })
 }
 
-/** Reports per revision, and how many have an open safety concern (for notebook and release gate). */
+/** Per revision of the map: reports on sets holding it, and how many have an open safety concern (for the notebook). */
 export async function reportCountsByRevision(mapId: number) {
   const db = await getDb()
-  return db
-    .select({
-      revisionId: driveReports.revisionId,
-      reports: sql<number>`count(*)::int`,
-      openSafety: sql<number>`count(*) filter (where ${driveReports.safety} = 'open')::int`,
-    })
+  const revs = db.select({ id: mapRevisions.id }).from(mapRevisions).where(eq(mapRevisions.mapId, mapId))
+  const rows = await db
+    .select({ driveRevisionId: mapSets.driveRevisionId, regenRevisionId: mapSets.regenRevisionId, safety: driveReports.safety })
     .from(driveReports)
-    .innerJoin(mapRevisions, eq(mapRevisions.id, driveReports.revisionId))
-    .where(eq(mapRevisions.mapId, mapId))
-    .groupBy(driveReports.revisionId)
+    .innerJoin(mapSets, eq(mapSets.id, driveReports.setId))
+    .where(or(inArray(mapSets.driveRevisionId, revs), inArray(mapSets.regenRevisionId, revs)))
+  const counts = new Map<number, { revisionId: number; reports: number; openSafety: number }>()
+  for (const r of rows)
+    for (const id of [r.driveRevisionId, r.regenRevisionId]) {
+      if (id === null) continue
+      const c = counts.get(id) ?? { revisionId: id, reports: 0, openSafety: 0 }
+      c.reports++
+      if (r.safety === 'open') c.openSafety++
+      counts.set(id, c)
+    }
+  return [...counts.values()]
+}
+
+/**
+ * A lead corrects the set a report was filed against (the driver chose wrongly); audited with
+ * the reason. The report's logs are analysed again against the new set by the caller.
+ */
+export async function correctReportSet(id: number, setId: number, leadId: number, reason: string): Promise<{ from: number } | null> {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const [cur] = await tx.select({ setId: driveReports.setId }).from(driveReports).where(eq(driveReports.id, id)).for('update')
+    if (!cur) return null
+    await tx.update(driveReports).set({ setId, updatedAt: new Date() }).where(eq(driveReports.id, id))
+    await recordAudit({ actorId: leadId, action: 'report.set-corrected', entityType: 'drive_report', entityId: id, details: { fromSetId: cur.setId, toSetId: setId, reason } }, tx)
+    return { from: cur.setId }
+  })
 }
 
 /** A lead engineer has read the report: from now on the driver can no longer edit it. */

@@ -1,8 +1,8 @@
-import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm'
+import { and, asc, desc, eq } from 'drizzle-orm'
 import type { ReviewAction } from '../../domain/review-actions'
 import type { RevisionState } from '../../domain/revision-states'
 import { getDb, type Db } from '../client'
-import { mapRevisions, maps, releases, reviewComments, revisionEvents, users, vehiclePrograms } from '../schema'
+import { mapRevisions, maps, reviewComments, revisionEvents, users, vehiclePrograms } from '../schema'
 import { recordAudit } from './audit'
 import { enqueueMail, type OutgoingMail } from './mail'
 
@@ -42,55 +42,6 @@ export async function transitionRevision(input: {
     await enqueueMail(input.mail ?? [], tx)
     return { ok: true } as const
   })
-}
-
-/** The current (neither retired nor withdrawn) release of a map, if any. */
-export async function currentRelease(mapId: number) {
-  const db = await getDb()
-  const rows = await db
-    .select({ id: releases.id, revisionId: releases.revisionId, number: mapRevisions.number, checksum: mapRevisions.checksum, releasedAt: releases.releasedAt, releasedBy: releases.releasedBy, releasedByName: users.name, acknowledgements: releases.acknowledgements })
-    .from(releases)
-    .innerJoin(mapRevisions, eq(mapRevisions.id, releases.revisionId))
-    .innerJoin(users, eq(users.id, releases.releasedBy))
-    .where(and(eq(releases.mapId, mapId), isNull(releases.retiredAt), isNull(releases.withdrawnAt)))
-  return rows[0] ?? null
-}
-
-export async function getReleaseById(id: number) {
-  const db = await getDb()
-  const rows = await db.select().from(releases).where(eq(releases.id, id))
-  return rows[0] ?? null
-}
-
-/** Inside a release transition: retire the map's current release and record the new one. */
-export async function recordRelease(tx: Tx, r: { mapId: number; revisionId: number; releasedBy: number; acknowledgements: { key: string; reason: string }[] }) {
-  const now = new Date()
-  const prior = await tx
-    .update(releases)
-    .set({ retiredAt: now })
-    .where(and(eq(releases.mapId, r.mapId), isNull(releases.retiredAt), isNull(releases.withdrawnAt)))
-    .returning({ revisionId: releases.revisionId })
-  for (const p of prior) await tx.update(mapRevisions).set({ state: 'retired' }).where(and(eq(mapRevisions.id, p.revisionId), eq(mapRevisions.state, 'released')))
-  const [row] = await tx.insert(releases).values({ ...r, releasedAt: now }).returning({ id: releases.id })
-  return row.id
-}
-
-/** Inside a withdraw transition: close the release and bring back the one it replaced, if any. */
-export async function recordWithdrawal(tx: Tx, w: { mapId: number; revisionId: number; actorId: number; reason: string }): Promise<number | null> {
-  await tx
-    .update(releases)
-    .set({ withdrawnAt: new Date(), withdrawnBy: w.actorId, withdrawReason: w.reason })
-    .where(and(eq(releases.mapId, w.mapId), eq(releases.revisionId, w.revisionId), isNull(releases.retiredAt), isNull(releases.withdrawnAt)))
-  const [previous] = await tx
-    .select({ id: releases.id, revisionId: releases.revisionId })
-    .from(releases)
-    .where(and(eq(releases.mapId, w.mapId), isNull(releases.withdrawnAt), sql`${releases.retiredAt} is not null`))
-    .orderBy(desc(releases.releasedAt), desc(releases.id))
-    .limit(1)
-  if (!previous) return null
-  await tx.update(releases).set({ retiredAt: null }).where(eq(releases.id, previous.id))
-  await tx.update(mapRevisions).set({ state: 'released' }).where(eq(mapRevisions.id, previous.revisionId))
-  return previous.revisionId
 }
 
 export async function listRevisionEvents(filter: { revisionId?: number; mapId?: number }) {

@@ -1,30 +1,28 @@
-import { and, desc, eq, inArray, isNull } from 'drizzle-orm'
+import { and, desc, eq, isNull, sql } from 'drizzle-orm'
 import { getDb } from '../client'
-import { driveReports, mapRevisions, maps, vehiclePrograms } from '../schema'
+import { driveReports, mapSets, vehiclePrograms } from '../schema'
 
-/**
- * Revisions that wait for a test drive: submitted or approved, with no drive report filed on them.
- */
-export async function revisionsAwaitingDrive() {
+/** Sets that wait for a test drive: never released, no drive report filed on them yet. */
+export async function setsAwaitingDrive() {
   const db = await getDb()
   return db
-    .select({ id: mapRevisions.id, mapId: maps.id, mapName: maps.name, programName: vehiclePrograms.name, number: mapRevisions.number, state: mapRevisions.state })
-    .from(mapRevisions)
-    .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
-    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
-    .leftJoin(driveReports, eq(driveReports.revisionId, mapRevisions.id))
-    .where(and(inArray(mapRevisions.state, ['in_review', 'approved']), isNull(driveReports.id)))
-    .orderBy(desc(mapRevisions.createdAt))
+    .select({ id: mapSets.id, number: mapSets.number, programName: vehiclePrograms.name, note: mapSets.note, createdAt: mapSets.createdAt })
+    .from(mapSets)
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, mapSets.programId))
+    .leftJoin(driveReports, eq(driveReports.setId, mapSets.id))
+    .where(and(isNull(driveReports.id), sql`not exists (select 1 from set_releases sr where sr.set_id = ${mapSets.id})`))
+    .orderBy(desc(mapSets.createdAt))
+    .limit(50)
 }
 
 /** A driver's reports that a lead has not read yet (still editable). */
 export async function unreadReportsOf(driverId: number) {
   const db = await getDb()
   return db
-    .select({ id: driveReports.id, drivenOn: driveReports.drivenOn, mapName: maps.name, number: mapRevisions.number })
+    .select({ id: driveReports.id, drivenOn: driveReports.drivenOn, programName: vehiclePrograms.name, setNumber: mapSets.number })
     .from(driveReports)
-    .innerJoin(mapRevisions, eq(mapRevisions.id, driveReports.revisionId))
-    .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
+    .innerJoin(mapSets, eq(mapSets.id, driveReports.setId))
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, mapSets.programId))
     .where(and(eq(driveReports.driverId, driverId), isNull(driveReports.leadReadAt)))
     .orderBy(desc(driveReports.drivenOn))
 }

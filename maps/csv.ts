@@ -55,10 +55,14 @@ function splitCsv(text: string): { delimiter: ',' | ';'; lines: CsvLine[] } {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text
   const raw = body.split(/\r\n|\n|\r/)
   while (raw.length > 0 && raw[raw.length - 1].trim() === '') raw.pop()
-  if (raw.length === 0) throw new MapFormatError('empty-file', 'the file is empty', 1, 1)
-  const fields = (d: ',' | ';') => Papa.parse<string[]>(raw[0], { delimiter: d, quoteChar: '"', newline: '\n' }).data[0]?.length ?? 0
+  // Leading lines starting with '#' are notes for the reader (a test package marks its files so); line numbers still count them.
+  let skip = 0
+  while (skip < raw.length && raw[skip].startsWith('#')) skip++
+  if (raw.length === skip) throw new MapFormatError('empty-file', 'the file is empty', skip + 1, 1)
+  const fields = (d: ',' | ';') => Papa.parse<string[]>(raw[skip], { delimiter: d, quoteChar: '"', newline: '\n' }).data[0]?.length ?? 0
   const delimiter = fields(';') > fields(',') ? ';' : ','
-  const lines = raw.map((t, i) => {
+  const lines = raw.slice(skip).map((t, j) => {
+    const i = j + skip
     if (t.trim() === '') throw new MapFormatError('empty-line', 'the line is empty; a map is one block of rows', i + 1, 1)
     return { line: i + 1, cells: cellsOf(t, delimiter, i + 1) }
   })
@@ -82,7 +86,7 @@ function checkIncreasing(prev: number | undefined, v: number, what: string, line
 }
 
 /**
- * Read a map from CSV. Accepts `,` or `;` delimiters, CRLF, a BOM and trailing blank lines.
+ * Read a map from CSV. Accepts `,` or `;` delimiters, CRLF, a BOM, leading `#` note lines and trailing blank lines.
  * Throws MapFormatError (with 1-based line and column) for anything else: a non-number,
  * a ragged row, non-increasing breakpoints, an empty file, too few or too many rows or columns.
  * The corner cell is free text, but a corner that names the other kind is refused.
@@ -93,11 +97,11 @@ export function fromCsv(text: string, kind: MapKind): MapTable {
   const [header, ...body] = lines
   const other: MapKind = kind === 'drive' ? 'regen' : 'drive'
   if (header.cells[0].trim() === CSV_CORNER[other])
-    throw new MapFormatError('kind-mismatch', `the corner cell says this is a ${other} map, but a ${kind} map was asked for`, 1, 1)
-  const colAxis = header.cells.slice(1).map((t, i) => number(t, delimiter, 1, i + 2))
-  colAxis.forEach((v, i) => checkIncreasing(colAxis[i - 1], v, 'speed', 1, i + 2))
+    throw new MapFormatError('kind-mismatch', `the corner cell says this is a ${other} map, but a ${kind} map was asked for`, header.line, 1)
+  const colAxis = header.cells.slice(1).map((t, i) => number(t, delimiter, header.line, i + 2))
+  colAxis.forEach((v, i) => checkIncreasing(colAxis[i - 1], v, 'speed', header.line, i + 2))
   if (colAxis.length < MIN_BREAKPOINTS || colAxis.length > MAX_BREAKPOINTS)
-    throw new MapFormatError('column-count', `the first row has ${colAxis.length} speed breakpoints; ${MIN_BREAKPOINTS} to ${MAX_BREAKPOINTS} are needed after the corner cell`, 1, Math.min(colAxis.length, MAX_BREAKPOINTS) + 2)
+    throw new MapFormatError('column-count', `the first row has ${colAxis.length} speed breakpoints; ${MIN_BREAKPOINTS} to ${MAX_BREAKPOINTS} are needed after the corner cell`, header.line, Math.min(colAxis.length, MAX_BREAKPOINTS) + 2)
   if (body.length < MIN_BREAKPOINTS || body.length > MAX_BREAKPOINTS) {
     const lastLine = lines[lines.length - 1].line
     throw new MapFormatError('row-count', `the file has ${body.length} pedal rows; ${MIN_BREAKPOINTS} to ${MAX_BREAKPOINTS} are needed below the speed row`, body.length > MAX_BREAKPOINTS ? body[MAX_BREAKPOINTS].line : lastLine + 1, 1)

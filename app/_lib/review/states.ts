@@ -23,6 +23,9 @@ const RULES: Record<ReviewAction, Rule> = {
   withdraw: { from: 'released', to: 'withdrawn', roles: ['lead_engineer'], needsComment: true },
 }
 
+/** Actions taken on a set, never on one revision: a truck runs a drive and a regen map together. */
+const SET_ACTIONS: readonly ReviewAction[] = ['release', 'withdraw']
+
 export type TransitionCheck =
   | { ok: true; to: RevisionState }
   | { ok: false; status: 403 | 409 | 400; reason: string }
@@ -34,6 +37,7 @@ export type TransitionCheck =
  */
 export function checkTransition(action: ReviewAction, state: RevisionState, actor: { id: number; role: Role }, authorId: number, comment = ''): TransitionCheck {
   const rule = RULES[action]
+  if (SET_ACTIONS.includes(action)) return { ok: false, status: 409, reason: `${ACTION_LABELS[action]} is done on a map set (a drive map, a regen map and a parameter version together), not on one revision` }
   if (!rule.roles.includes(actor.role)) return { ok: false, status: 403, reason: `${ACTION_LABELS[action]} needs the role ${rule.roles.join(' or ').replace(/_/g, ' ')}` }
   if (state !== rule.from) return { ok: false, status: 409, reason: `${ACTION_LABELS[action]} is possible only from “${STATE_LABELS[rule.from]}”; this revision is “${STATE_LABELS[state]}”` }
   if (action === 'submit' && actor.id !== authorId) return { ok: false, status: 403, reason: 'Only the author of a revision submits it for review' }

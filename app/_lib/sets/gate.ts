@@ -1,0 +1,131 @@
+/**
+ * The release gate of a set: it goes to the vehicles only when (a) it holds a drive and a regen
+ * map, each revision approved; (b) validation finds no error in either map under the set's
+ * parameter version; (c) no cell of either map asks for more than the traction limit less the
+ * version's margin in any of its release conditions — or the lead acknowledges each exception
+ * (map × surface × load case) with a reason; (d) at least one drive report was filed on this
+ * exact set; (e) no open safety concern sits on any of its revisions, whichever set it was
+ * found in. Pure: the caller loads the data.
+ */
+import 'server-only'
+import type { Acknowledgement, ReleaseConditions } from '@/db/schema'
+import type { RevisionState } from '@/domain/revision-states'
+import { STATE_LABELS } from '@/domain/revision-states'
+import { limitsFromVehicle, validate, type MapKind, type MapTable } from '@/maps'
+import { surfaceLabel, type SurfaceId } from '@/physics/surfaces'
+import { loadCaseLabel } from '@/physics/load-cases'
+import type { LoadCase, VehicleParams } from '@/physics/vehicle'
+import { LOW_FRICTION, tractionExceptions } from '../review/gate'
+
+/** Review states in which a revision has been approved by a lead (released and replaced ones were). */
+export const APPROVED_STATES: readonly RevisionState[] = ['approved', 'released', 'retired']
+
+export interface SetGatePart {
+  kind: MapKind
+  revisionId: number
+  number: number
+  mapName: string
+  state: RevisionState
+  table: MapTable
+}
+
+export interface SetTractionException {
+  key: string
+  mapKind: MapKind
+  revisionId: number
+  surface: SurfaceId
+  loadCase: LoadCase
+  cells: { row: number; col: number; pedalPct: number; speedKmh: number; torqueNm: number; allowedNm: number }[]
+}
+
+export interface SetGateCondition {
+  id: 'parts' | 'approved' | 'validation' | 'traction' | 'drive-report' | 'safety'
+  met: boolean
+  summary: string
+  details: string[]
+}
+
+export interface SetGateResult {
+  ok: boolean
+  conditions: SetGateCondition[]
+  exceptions: SetTractionException[]
+  /** Keys of exceptions without an acknowledgement. */
+  unacknowledged: string[]
+}
+
+export const exceptionKey = (kind: MapKind, surface: SurfaceId, loadCase: LoadCase) => `traction:${kind}:${surface}:${loadCase}`
+
+export function setTractionExceptions(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetTractionException[] {
+  return parts.flatMap((p) =>
+    tractionExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase), mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
+  )
+}
+
+export function setGate(input: {
+  parts: SetGatePart[]
+  vehicle: VehicleParams
+  conditions: ReleaseConditions
+  /** Reports filed on this set. */
+  reports: number
+  /** Open safety concerns on any revision of the set: report id and the set it was filed on. */
+  concerns: { reportId: number; setNumber: number }[]
+  acknowledgements: Acknowledgement[]
+}): SetGateResult {
+  const { parts, vehicle, conditions } = input
+  const kinds = new Set(parts.map((p) => p.kind))
+  const partsMet = kinds.has('drive') && kinds.has('regen')
+  const unapproved = parts.filter((p) => !APPROVED_STATES.includes(p.state))
+  const limits = limitsFromVehicle(vehicle)
+  const errors = parts.flatMap((p) => validate(p.table, limits).filter((f) => f.severity === 'error').map((f) => `${p.mapName} r${p.number}: ${f.message}`))
+  const exceptions = setTractionExceptions(parts, vehicle, conditions)
+  const acked = new Set(input.acknowledgements.filter((a) => a.reason.trim()).map((a) => a.key))
+  const unacknowledged = exceptions.filter((e) => !acked.has(e.key)).map((e) => e.key)
+  const lowMu = conditions.surfaces.some((s) => LOW_FRICTION.includes(s))
+  const bothLoads = conditions.loadCases.includes('empty') && conditions.loadCases.includes('laden')
+  const declared = lowMu && bothLoads
+  const cells = exceptions.reduce((n, e) => n + e.cells.length, 0)
+
+  const all: SetGateCondition[] = [
+    {
+      id: 'parts',
+      met: partsMet,
+      summary: partsMet ? 'The set holds a drive map and a regen map' : `The set holds no ${kinds.has('drive') ? 'regen' : 'drive'} map`,
+      details: [],
+    },
+    {
+      id: 'approved',
+      met: unapproved.length === 0,
+      summary: unapproved.length === 0 ? 'Every map revision in the set is approved' : `${unapproved.length} map revision(s) not approved`,
+      details: unapproved.map((p) => `${p.mapName} r${p.number} is “${STATE_LABELS[p.state]}”`),
+    },
+    {
+      id: 'validation',
+      met: errors.length === 0,
+      summary: errors.length === 0 ? 'Validation finds no error in either map' : `Validation finds ${errors.length} error(s)`,
+      details: errors.slice(0, 20),
+    },
+    {
+      id: 'traction',
+      met: declared && unacknowledged.length === 0,
+      summary: !declared
+        ? 'The parameter version’s release conditions must include a low-friction surface and both the empty and laden load cases'
+        : exceptions.length === 0
+          ? `No cell above the traction limit less ${conditions.marginPct} % (${conditions.surfaces.length} surfaces × ${conditions.loadCases.length} load cases, both maps)`
+          : `${cells} cell(s) above the traction limit less ${conditions.marginPct} %; ${unacknowledged.length} of ${exceptions.length} exception(s) not acknowledged`,
+      details: exceptions.map((e) => `${e.mapKind} map, ${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} cell(s), first at ${e.cells[0].pedalPct} % / ${e.cells[0].speedKmh} km/h`),
+    },
+    {
+      id: 'drive-report',
+      met: input.reports > 0,
+      summary: input.reports === 0 ? 'No drive report has been filed on this set' : `${input.reports} drive report(s) on this set`,
+      details: [],
+    },
+    {
+      id: 'safety',
+      met: input.concerns.length === 0,
+      summary: input.concerns.length === 0 ? 'No open safety concern on any of its revisions' : `${input.concerns.length} open safety concern(s) on its revisions`,
+      details: input.concerns.map((c) => `drive report ${c.reportId} (set ${c.setNumber})`),
+    },
+  ]
+  return { ok: all.every((c) => c.met), conditions: all, exceptions, unacknowledged }
+}

@@ -4,7 +4,22 @@ import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { afterAll, describe, expect, it } from 'vitest'
 import { checksum, verifiedChecksum } from '@/db/checksum'
-import { cIdentifier, commentText, crc32, int32LeBytes, MapInputError, SAFETY_CAUTION, toCHeader, type CHeaderMeta, type MapTable } from '../../../maps'
+import {
+  cIdentifier,
+  commentText,
+  crc32,
+  decimalPlaces,
+  fixedAxis,
+  int32LeBytes,
+  largestLookupDifference,
+  MapInputError,
+  SAFETY_CAUTION,
+  toCHeader,
+  toFixedTable,
+  type CHeaderMeta,
+  type MapTable,
+} from '../../../maps'
+import { upperBound3 } from '../../../maps/c-header'
 import { insideTable, small } from '@/tests/support/fixtures'
 
 const table: MapTable = {
@@ -35,10 +50,15 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }))
 describe('toCHeader', () => {
   const h = toCHeader(table, meta)
 
-  it('holds the breakpoints and values as int32 tenths, with the right counts', () => {
+  it('holds breakpoints on the 0.1 grid and the values as int32 tenths, with the right counts', () => {
     expect(define(h, 'DRIVE_MAIN_ROWS')).toBe('4')
     expect(define(h, 'DRIVE_MAIN_COLS')).toBe('5')
-    expect(define(h, 'DRIVE_MAIN_SCALE')).toBe('10')
+    // 12.5 % needs one decimal, so both axes keep the smallest scale, 10.
+    expect(define(h, 'DRIVE_MAIN_PEDAL_SCALE')).toBe('10')
+    expect(define(h, 'DRIVE_MAIN_SPEED_SCALE')).toBe('10')
+    expect(define(h, 'DRIVE_MAIN_VALUE_SCALE')).toBe('10')
+    // The single scale is gone on purpose: firmware using it must not compile against new headers.
+    expect(define(h, 'DRIVE_MAIN_SCALE')).toBeUndefined()
     expect(define(h, 'DRIVE_MAIN_REVISION')).toBe('7u')
     expect(define(h, 'DRIVE_MAIN_IS_REGEN')).toBe('0')
     expect(arrayNumbers(h, 'drive_main_pedal_axis')).toEqual([0, 125, 500, 1000])
@@ -122,7 +142,7 @@ int main(void) {
     expect(r.status).toBe(0)
   })
 
-  it('refuses invalid maps, bad revisions, a wrong checksum and breakpoints finer than 0.1', () => {
+  it('refuses invalid maps, bad revisions, a wrong checksum and numbers beyond int32', () => {
     const bad = { ...table, values: table.values.map((r, i) => (i === 3 ? r.map(() => 0) : r)) }
     expect(() => toCHeader(bad, meta)).toThrow(expect.objectContaining({ code: 'invalid-table' }))
     expect(() => toCHeader(table, { ...meta, revision: 1.5 })).toThrow(MapInputError)
@@ -130,8 +150,100 @@ int main(void) {
     expect(() => toCHeader(table, { ...meta, checksum: '00' })).toThrow(expect.objectContaining({ code: 'bad-checksum' }))
     expect(() => verifiedChecksum(table, checksum(small()))).toThrow(expect.objectContaining({ code: 'checksum-mismatch' }))
     expect(toCHeader(table, { ...meta, checksum: verifiedChecksum(table, checksum(table).toUpperCase()) })).toBe(h)
-    expect(() => toCHeader({ ...table, colAxis: [0, 10.01, 10.04, 40, 80] }, meta)).toThrow(expect.objectContaining({ code: 'axis-resolution' }))
     expect(() => toCHeader({ ...table, values: table.values.map((r) => r.map((v) => v * 1e9)) }, meta)).toThrow(expect.objectContaining({ code: 'out-of-range' }))
+  })
+})
+
+/** A map whose breakpoints are off the 0.1 grid; values have at most 2 decimals. */
+const frac: MapTable = {
+  kind: 'drive',
+  rowAxis: [0, 12.75, 37.5, 100],
+  colAxis: [0, 0.125, 10, 40.5, 80],
+  values: [
+    [0, 0, 0, 0, 0],
+    [300, 280.25, 250, 200, 100],
+    [900, 850, 700.04, 500, 250],
+    [1800, 1700, 1400, 1000, 500],
+  ],
+}
+const fracMeta: CHeaderMeta = { name: 'frac', revision: 2, mapName: 'Fractional breakpoints', vehicleProgram: 'Test', checksum: checksum(frac) }
+
+/** The "Largest difference ..." figure a header states, N·m. */
+function statedDifference(header: string): number {
+  const m = /Largest difference from the app's lookup over all cell corners and centres: (\S+) N\*m\./.exec(header)
+  if (!m) throw new Error('no stated difference')
+  return Number(m[1])
+}
+
+describe('exact breakpoints and the stated largest difference', () => {
+  const h = toCHeader(frac, fracMeta)
+  const fixed = toFixedTable(frac)
+
+  it('keeps 12.75 % as 12.75 % (the old header wrote 128 tenths, i.e. 12.8 %)', () => {
+    expect(arrayNumbers(h, 'frac_pedal_axis')).toEqual([0, 1275, 3750, 10000])
+    const scale = Number(define(h, 'FRAC_PEDAL_SCALE'))
+    expect(scale).toBe(100)
+    expect(arrayNumbers(h, 'frac_pedal_axis')[1] / scale).toBe(12.75)
+  })
+
+  it('picks the smallest scale of 10, 100, 1000 per axis and stores every breakpoint exactly', () => {
+    expect(define(h, 'FRAC_SPEED_SCALE')).toBe('1000')
+    expect(define(h, 'FRAC_VALUE_SCALE')).toBe('10')
+    expect(arrayNumbers(h, 'frac_speed_axis')).toEqual([0, 125, 10000, 40500, 80000])
+    expect(arrayNumbers(h, 'frac_speed_axis').map((v) => v / 1000)).toEqual(frac.colAxis)
+    // Two breakpoints 0.03 km/h apart (once refused as closer than 0.1) now export exactly at 0.01.
+    const close = toCHeader({ ...table, colAxis: [0, 10.01, 10.04, 40, 80] }, meta)
+    expect(define(close, 'DRIVE_MAIN_SPEED_SCALE')).toBe('100')
+    expect(arrayNumbers(close, 'drive_main_speed_axis')).toEqual([0, 1001, 1004, 4000, 8000])
+  })
+
+  it('counts decimals on the shortest decimal form, so float error is not taken for an exact value', () => {
+    expect(decimalPlaces(12.75)).toBe(2)
+    expect(decimalPlaces(100)).toBe(0)
+    expect(decimalPlaces(1e-7)).toBe(7)
+    expect(decimalPlaces(1e21)).toBe(0)
+    expect(decimalPlaces(0.1 + 0.2)).toBe(17)
+    // 1.005 × 1000 is 1004.9999999999999 in doubles; the stored integer is still 1005.
+    expect(fixedAxis([0, 1.005, 2], 'speed', 'km/h')).toEqual({ points: [0, 1005, 2000], scale: 1000 })
+  })
+
+  it('refuses a breakpoint no scale holds, naming it and the nearest exportable value', () => {
+    const third = { ...frac, rowAxis: [0, 12.75, 33.3333, 100] }
+    expect(() => toCHeader(third, { ...fracMeta, checksum: checksum(third) })).toThrow(
+      expect.objectContaining({ code: 'axis-resolution', message: expect.stringContaining('pedal breakpoint 3 (33.3333 %)') }),
+    )
+    expect(() => toCHeader(third, { ...fracMeta, checksum: checksum(third) })).toThrow(/nearest exportable value is 33\.333 %/)
+    expect(() => fixedAxis([0, 0.0625, 10], 'speed', 'km/h')).toThrow(/speed breakpoint 2 \(0\.0625 km\/h\).*0\.001 km\/h.*nearest exportable value is 0\.063 km\/h/)
+    expect(() => fixedAxis([0, 0.1 + 0.2, 10], 'speed', 'km/h')).toThrow(/speed breakpoint 2 \(0\.30000000000000004 km\/h\).*nearest exportable value is 0\.3 km\/h/)
+    expect(() => fixedAxis([0, 0.1 + 0.2, 10], 'speed', 'km/h')).toThrow(MapInputError)
+  })
+
+  it('states the largest difference from lookup over corners and centres; with exact axes that is the value rounding', () => {
+    // 280.25 N·m is stored as 2803 tenths: 0.05 N·m, the most a value with 2 decimals can lose.
+    expect(fixed.maxLookupDiffNm).toBeCloseTo(0.05, 12)
+    expect(fixed.maxLookupDiffNm).toBeCloseTo(fixed.maxRoundingNm, 12)
+    expect(statedDifference(h)).toBe(0.05)
+    expect(statedDifference(h)).toBe(Number(upperBound3(fixed.maxLookupDiffNm)))
+    // A map whose values are on the 0.1 grid loses nothing.
+    const onGrid = { ...frac, values: frac.values.map((r) => r.map((v) => Math.round(v))) }
+    expect(statedDifference(toCHeader(onGrid, { ...fracMeta, checksum: checksum(onGrid) }))).toBe(0)
+  })
+
+  it('counts a moved breakpoint in the figure, not only the value rounding', () => {
+    // The old header's pedal axis: 12.75 % and 37.5 % written as 128 and 375 tenths.
+    const old = { ...fixed, rowAxis: [0, 128, 375, 1000], pedalScale: 10 }
+    // Worst at 12.75 %, 0 km/h: the old axis reads 300 N·m × 12.75 / 12.8 there, 300 × 0.05 / 12.8 short.
+    expect(largestLookupDifference(frac, old)).toBeCloseTo((300 * 0.05) / 12.8, 12)
+    expect(largestLookupDifference(frac, fixed)).toBeLessThan(0.0501)
+  })
+
+  it('rounds the stated figure up to 3 significant digits', () => {
+    expect(upperBound3(0)).toBe('0')
+    expect(upperBound3(0.05000000000001137)).toBe('0.05')
+    expect(upperBound3(0.012346)).toBe('0.0124')
+    expect(upperBound3(0.09994)).toBe('0.1')
+    expect(upperBound3(1.171875)).toBe('1.18')
+    expect(upperBound3(1234.5)).toBe('1240')
   })
 })
 

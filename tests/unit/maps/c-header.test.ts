@@ -1,5 +1,5 @@
 import { spawnSync } from 'node:child_process'
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs'
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { afterAll, describe, expect, it } from 'vitest'
@@ -10,8 +10,10 @@ import {
   crc32,
   decimalPlaces,
   fixedAxis,
+  fixedLookup,
   int32LeBytes,
   largestLookupDifference,
+  lookup,
   MapInputError,
   SAFETY_CAUTION,
   toCHeader,
@@ -175,6 +177,25 @@ function statedDifference(header: string): number {
   return Number(m[1])
 }
 
+/** Every breakpoint and every midpoint of adjacent breakpoints. */
+const cornersAndCentres = (axis: number[]) => axis.flatMap((v, i) => (i + 1 < axis.length ? [v, (v + axis[i + 1]) / 2] : [v]))
+
+/**
+ * Deterministic pseudo-random numbers in [0, 1): a 32-bit linear congruential generator with the
+ * constants 1664525 and 1013904223 from Press et al., "Numerical Recipes", §7.1.
+ */
+function lcg(seed: number): () => number {
+  let x = seed >>> 0
+  return () => {
+    x = (Math.imul(x, 1664525) + 1013904223) >>> 0
+    return x / 2 ** 32
+  }
+}
+
+const gcc = spawnSync('gcc', ['--version'], { encoding: 'utf8' })
+const haveGcc = gcc.error === undefined && gcc.status === 0
+if (!haveGcc) console.warn('c-header.test: gcc not found on PATH; the compiled reference lookup test is skipped')
+
 describe('exact breakpoints and the stated largest difference', () => {
   const h = toCHeader(frac, fracMeta)
   const fixed = toFixedTable(frac)
@@ -244,6 +265,57 @@ describe('exact breakpoints and the stated largest difference', () => {
     expect(upperBound3(0.09994)).toBe('0.1')
     expect(upperBound3(1.171875)).toBe('1.18')
     expect(upperBound3(1234.5)).toBe('1240')
+  })
+
+  it.skipIf(!haveGcc)('agrees with the reference C lookup of docs/map-formats.md, compiled with gcc, within the stated figure', () => {
+    // The C function is taken from the docs, so the documented code is the tested code.
+    const docs = readFileSync(path.join(__dirname, '../../../docs/map-formats.md'), 'utf8')
+    const ref = /```c\n([^`]*static double name_lookup\(double pedal_pct, double speed_kmh\)[^`]*)```/.exec(docs)
+    expect(ref, 'reference lookup in docs/map-formats.md').not.toBeNull()
+    const fn = ref![1].replace(/\bNAME_/g, 'FRAC_').replace(/\bname_/g, 'frac_')
+
+    const rnd = lcg(20240611)
+    const points: [number, number][] = []
+    for (const p of cornersAndCentres(frac.rowAxis)) for (const s of cornersAndCentres(frac.colAxis)) points.push([p, s])
+    for (let i = 0; i < 300; i++) points.push([-10 + 120 * rnd(), -5 + 95 * rnd()]) // some outside both axes
+    points.push([12.75, 0.125], [12.7499, 0.1249], [100, 80], [150, 1000], [-1, -1])
+
+    // String(x) is the shortest decimal that reads back as x, and gcc rounds decimal literals
+    // correctly, so the C program sees the same doubles.
+    const program = `#include <stdio.h>
+#include "frac.h"
+${fn}
+static const double points[][2] = {
+${points.map(([p, s]) => `  { ${String(p)}, ${String(s)} }`).join(',\n')}
+};
+int main(void) {
+  for (size_t i = 0; i < sizeof points / sizeof points[0]; i++) printf("%.17g\\n", frac_lookup(points[i][0], points[i][1]));
+  return 0;
+}
+`
+    writeFileSync(path.join(dir, 'frac.h'), h)
+    writeFileSync(path.join(dir, 'lookup.c'), program)
+    const exe = path.join(dir, 'lookup')
+    const cc = spawnSync('gcc', ['-std=c99', '-Wall', '-Werror', '-ffp-contract=off', '-o', exe, path.join(dir, 'lookup.c')], { encoding: 'utf8' })
+    expect(cc.stderr).toBe('')
+    expect(cc.status).toBe(0)
+    const run = spawnSync(exe, { encoding: 'utf8' })
+    expect(run.status).toBe(0)
+    const got = run.stdout.trim().split('\n').map(Number)
+    expect(got.length).toBe(points.length)
+
+    const stated = statedDifference(h)
+    expect(stated).toBeLessThanOrEqual(0.05)
+    let worst = 0
+    points.forEach(([p, s], i) => {
+      // The TypeScript mirror gives the same double as the compiled C (no fused multiply-adds).
+      expect(got[i], `fixedLookup at ${p} %, ${s} km/h`).toBe(fixedLookup(fixed, p, s))
+      const d = Math.abs(got[i] - lookup(frac, p, s))
+      expect(d, `C vs lookup at ${p} %, ${s} km/h`).toBeLessThanOrEqual(stated + 1e-9)
+      worst = Math.max(worst, d)
+    })
+    // The corners reach the stated figure, so it is not a loose bound.
+    expect(worst).toBeGreaterThan(stated - 1e-9)
   })
 })
 

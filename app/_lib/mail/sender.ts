@@ -34,7 +34,13 @@ export async function deliverPending(): Promise<{ sent: number; failed: number }
   return run
 }
 
-async function sendDue(transport: Transporter): Promise<{ sent: number; failed: number }> {
+/** What sendDue needs of a transport: nodemailer's, or a stand-in in tests. */
+export interface MailTransport {
+  sendMail(message: { from?: string; to: string[]; subject: string; text: string }): Promise<unknown>
+}
+
+/** One unchained run over the due mail; deliverPending is the entry point (exported for tests). */
+export async function sendDue(transport: MailTransport): Promise<{ sent: number; failed: number }> {
   let sent = 0
   let failed = 0
   for (const m of await dueMail()) {

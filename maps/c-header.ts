@@ -2,7 +2,7 @@
  * A map as a self-contained C header for controller firmware: data only, no code.
  * Layout and CRC definition are described in docs/map-formats.md.
  */
-import { C_SCALE, headerCrcs, toFixedTable } from './c-fixed-point'
+import { AXIS_SCALES, headerCrcs, toFixedTable } from './c-fixed-point'
 import { cIdentifier, commentText } from './c-identifier'
 import { SAFETY_CAUTION } from './caution'
 import { MapInputError } from './errors'
@@ -36,11 +36,28 @@ function rows(nums: number[], per: number, indent: string): string {
 }
 
 /**
- * The header text. Values are int32 in 0.1 N·m (and axes in 0.1 % and 0.1 km/h): stored =
- * round(physical × 10), halves away from zero. Defines <NAME>_ROWS, _COLS, _SCALE, _REVISION,
- * _IS_REGEN, _VALUES_CRC32 and _TABLE_CRC32; arrays <name>_pedal_axis, _speed_axis, _values.
+ * x rounded up to 3 significant digits, as text without trailing zeros, so the stated figure is
+ * an upper bound; float noise in the 12th digit (280.3 − 280.25 = 0.05000000000001137) is dropped first.
+ * @example upperBound3(0.012346) // '0.0124';  upperBound3(0.05000000000001137) // '0.05'
+ */
+export function upperBound3(x: number): string {
+  const clean = Number(x.toPrecision(12))
+  if (clean === 0) return '0'
+  let s = clean.toPrecision(3)
+  if (Number(s) < clean) s = (Number(s) + 10 ** (Math.floor(Math.log10(Number(s))) - 2)).toPrecision(3)
+  return String(Number(s))
+}
+
+/**
+ * The header text. Arrays are int32: pedal breakpoints × <NAME>_PEDAL_SCALE and speed
+ * breakpoints × <NAME>_SPEED_SCALE, both exact (10, 100 or 1000, the smallest that holds the
+ * axis), values round(N·m × <NAME>_VALUE_SCALE = 10), halves away from zero. Defines <NAME>_ROWS,
+ * _COLS, _PEDAL_SCALE, _SPEED_SCALE, _VALUE_SCALE, _REVISION, _IS_REGEN, _VALUES_CRC32 and
+ * _TABLE_CRC32; arrays <name>_pedal_axis, _speed_axis, _values. The comment documents the
+ * firmware lookup and states its largest difference from the app's lookup (FixedTable.maxLookupDiffNm).
  * Throws MapInputError for a map with validate errors (structure, pedal order, negative regen),
- * a revision that is not a whole number, a checksum that is not 64 hex digits, or a value that cannot be stored.
+ * a breakpoint with more than 3 decimals, a revision that is not a whole number, a checksum
+ * that is not 64 hex digits, or a number that does not fit an int32.
  * @example toCHeader(t, { name: 'drive main', revision: 3, mapName: 'Drive main', vehicleProgram: '6x4 tractor', checksum: checksum(t) })
  *          // contains "static const int32_t drive_main_values[DRIVE_MAIN_ROWS][DRIVE_MAIN_COLS]"
  */
@@ -71,12 +88,20 @@ export function toCHeader(table: MapTable, meta: CHeaderMeta): string {
     '',
     ...SAFETY_CAUTION,
     '',
-    'Layout (all int32_t, stored = round(physical x 10), halves away from zero):',
-    `  ${id}_pedal_axis[${ID}_ROWS]  ${table.kind === 'regen' ? 'brake pedal' : 'accelerator pedal'} breakpoints, 0.1 %, increasing`,
-    `  ${id}_speed_axis[${ID}_COLS]  road speed breakpoints, 0.1 km/h, increasing`,
-    `  ${id}_values[${ID}_ROWS][${ID}_COLS]  ${what} at the motor shaft, 0.1 N*m`,
-    `  Largest rounding loss in the values: ${fixed.maxRoundingNm.toPrecision(3)} N*m.`,
-    'Between breakpoints interpolate bilinearly; outside the axes hold the edge value.',
+    'Layout (all int32_t, stored = physical x scale):',
+    `  ${id}_pedal_axis[${ID}_ROWS]  ${table.kind === 'regen' ? 'brake pedal' : 'accelerator pedal'} breakpoints, % x ${ID}_PEDAL_SCALE, increasing`,
+    `  ${id}_speed_axis[${ID}_COLS]  road speed breakpoints, km/h x ${ID}_SPEED_SCALE, increasing`,
+    `  ${id}_values[${ID}_ROWS][${ID}_COLS]  ${what} at the motor shaft,`,
+    `    N*m x ${ID}_VALUE_SCALE, rounded to the nearest integer, halves away from zero`,
+    `Breakpoints are stored exactly, never rounded; a breakpoint finer than ${1 / AXIS_SCALES[AXIS_SCALES.length - 1]} stops the export.`,
+    '',
+    `Lookup at pedal P % and speed S km/h, all arithmetic in double, v = ${id}_values:`,
+    '  p = P x PEDAL_SCALE; s = S x SPEED_SCALE;',
+    '  r = largest index <= ROWS - 2 with pedal_axis[r] <= p, else 0; c likewise on the speed axis;',
+    '  u = (p - pedal_axis[r]) / (pedal_axis[r+1] - pedal_axis[r]), t likewise for s; clamp u, t to [0, 1];',
+    '  torque N*m = (v[r][c](1-t)(1-u) + v[r][c+1]t(1-u) + v[r+1][c](1-t)u + v[r+1][c+1]tu) / VALUE_SCALE.',
+    'The clamping holds the edge values outside the axes; nothing is extrapolated.',
+    `Largest difference from the app's lookup over all cell corners and centres: ${upperBound3(fixed.maxLookupDiffNm)} N*m.`,
     '',
     'CRC-32/ISO-HDLC: poly 0x04C11DB7 (reflected 0xEDB88320), init 0xFFFFFFFF,',
     'reflected input and output, xorout 0xFFFFFFFF; check("123456789") = 0xCBF43926.',
@@ -100,7 +125,9 @@ export function toCHeader(table: MapTable, meta: CHeaderMeta): string {
     '',
     `#define ${ID}_ROWS ${R}`,
     `#define ${ID}_COLS ${C}`,
-    `#define ${ID}_SCALE ${C_SCALE}`,
+    `#define ${ID}_PEDAL_SCALE ${fixed.pedalScale}`,
+    `#define ${ID}_SPEED_SCALE ${fixed.speedScale}`,
+    `#define ${ID}_VALUE_SCALE ${fixed.valueScale}`,
     `#define ${ID}_REVISION ${meta.revision}u`,
     `#define ${ID}_IS_REGEN ${table.kind === 'regen' ? 1 : 0}`,
     `#define ${ID}_VALUES_CRC32 ${hex(crc.values)}`,

@@ -17,15 +17,41 @@ export async function enqueueMail(mails: OutgoingMail[], tx?: Pick<Db, 'insert'>
   await db.insert(mailOutbox).values(list)
 }
 
-/** Pending mail whose next attempt is due, oldest first. */
+/**
+ * Pending mail whose next attempt is due, oldest first: candidates only — a sender claims each one
+ * (claimMail) before sending it. Times here are the database's clock, as the claim's are.
+ */
 export async function dueMail(limit = 20) {
   const db = await getDb()
   return db
     .select()
     .from(mailOutbox)
-    .where(and(eq(mailOutbox.status, 'pending'), lte(mailOutbox.nextAttemptAt, new Date())))
+    .where(and(eq(mailOutbox.status, 'pending'), lte(mailOutbox.nextAttemptAt, sql`now()`)))
     .orderBy(asc(mailOutbox.id))
     .limit(limit)
+}
+
+/**
+ * How long a claim holds a message: longer than one send can take (nodemailer's own timeouts: 2 min
+ * to connect, 10 min of silence on the socket), so a claim never runs out while its send is under
+ * way. A process that dies holding a claim leaves its message to be tried again when the lease ends.
+ */
+export const MAIL_CLAIM_LEASE_MINUTES = 15
+
+/**
+ * Claim a due message for one send: a single conditional UPDATE that pushes its next attempt past
+ * the lease. Of several senders (processes, or runs in one process) that try at once exactly one gets
+ * the row back; the others get null and must not send. PostgreSQL re-checks the WHERE on the row a
+ * concurrent claim has just changed, so the loser sees next_attempt_at in the future.
+ */
+export async function claimMail(id: number, leaseMinutes = MAIL_CLAIM_LEASE_MINUTES) {
+  const db = await getDb()
+  const [row] = await db
+    .update(mailOutbox)
+    .set({ nextAttemptAt: sql`now() + make_interval(mins => ${leaseMinutes})` })
+    .where(and(eq(mailOutbox.id, id), eq(mailOutbox.status, 'pending'), lte(mailOutbox.nextAttemptAt, sql`now()`)))
+    .returning()
+  return row ?? null
 }
 
 export async function markSent(id: number): Promise<void> {
@@ -43,9 +69,25 @@ export async function markFailed(id: number, attempts: number, error: string, ma
     .where(eq(mailOutbox.id, id))
 }
 
-export async function retryMail(id: number): Promise<void> {
+/**
+ * Send a failed message again (the admin's retry): only a 'failed' message goes back to pending, due
+ * now, in one conditional UPDATE — a message already sent, or still pending, is left alone and
+ * null is returned (see mailById for why).
+ */
+export async function retryMail(id: number) {
   const db = await getDb()
-  await db.update(mailOutbox).set({ status: 'pending', nextAttemptAt: new Date() }).where(eq(mailOutbox.id, id))
+  const [row] = await db
+    .update(mailOutbox)
+    .set({ status: 'pending', nextAttemptAt: sql`now()` })
+    .where(and(eq(mailOutbox.id, id), eq(mailOutbox.status, 'failed')))
+    .returning()
+  return row ?? null
+}
+
+export async function mailById(id: number) {
+  const db = await getDb()
+  const [row] = await db.select().from(mailOutbox).where(eq(mailOutbox.id, id))
+  return row ?? null
 }
 
 export async function listOutbox(limit = 200) {

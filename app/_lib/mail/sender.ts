@@ -1,6 +1,6 @@
 import 'server-only'
 import nodemailer, { type Transporter } from 'nodemailer'
-import { dueMail, markFailed, markSent } from '@/db/queries/mail'
+import { claimMail, dueMail, markFailed, markSent } from '@/db/queries/mail'
 import { env } from '../config/env'
 
 const key = Symbol.for('mapwright.mail')
@@ -27,17 +27,30 @@ function state() {
 export async function deliverPending(): Promise<{ sent: number; failed: number }> {
   const s = state()
   if (!s) return { sent: 0, failed: 0 }
-  // Runs are chained, never concurrent, so one message is never sent twice; a caller waits for
-  // the run in flight and then for its own.
+  // Runs in this process are chained, a caller waiting for the run in flight and then for its own;
+  // across processes (several servers on one PostgreSQL) the claim in sendDue keeps a message to
+  // one sender.
   const run = s.queue.then(() => sendDue(s.transport))
   s.queue = run.catch(() => {})
   return run
 }
 
-async function sendDue(transport: Transporter): Promise<{ sent: number; failed: number }> {
+/** What sendDue needs of a transport: nodemailer's, or a stand-in in tests. */
+export interface MailTransport {
+  sendMail(message: { from?: string; to: string[]; subject: string; text: string }): Promise<unknown>
+}
+
+/**
+ * One unchained run over the due mail; deliverPending is the entry point (exported for tests). Each
+ * message is claimed first and sent only by the run whose claim succeeded, so runs in other
+ * processes at the same time never send it too.
+ */
+export async function sendDue(transport: MailTransport): Promise<{ sent: number; failed: number }> {
   let sent = 0
   let failed = 0
-  for (const m of await dueMail()) {
+  for (const due of await dueMail()) {
+    const m = await claimMail(due.id)
+    if (!m) continue
     try {
       await transport.sendMail({ from: env().MAIL_FROM, to: m.to, subject: m.subject, text: m.text })
       await markSent(m.id)

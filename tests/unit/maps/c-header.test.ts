@@ -1,10 +1,27 @@
 import { spawnSync } from 'node:child_process'
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs'
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import path from 'node:path'
 import { afterAll, describe, expect, it } from 'vitest'
 import { checksum, verifiedChecksum } from '@/db/checksum'
-import { cIdentifier, commentText, crc32, int32LeBytes, MapInputError, SAFETY_CAUTION, toCHeader, type CHeaderMeta, type MapTable } from '../../../maps'
+import {
+  cIdentifier,
+  commentText,
+  crc32,
+  decimalPlaces,
+  fixedAxis,
+  fixedLookup,
+  int32LeBytes,
+  largestLookupDifference,
+  lookup,
+  MapInputError,
+  SAFETY_CAUTION,
+  toCHeader,
+  toFixedTable,
+  type CHeaderMeta,
+  type MapTable,
+} from '../../../maps'
+import { upperBound3 } from '../../../maps/c-header'
 import { insideTable, small } from '@/tests/support/fixtures'
 
 const table: MapTable = {
@@ -35,10 +52,15 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }))
 describe('toCHeader', () => {
   const h = toCHeader(table, meta)
 
-  it('holds the breakpoints and values as int32 tenths, with the right counts', () => {
+  it('holds breakpoints on the 0.1 grid and the values as int32 tenths, with the right counts', () => {
     expect(define(h, 'DRIVE_MAIN_ROWS')).toBe('4')
     expect(define(h, 'DRIVE_MAIN_COLS')).toBe('5')
-    expect(define(h, 'DRIVE_MAIN_SCALE')).toBe('10')
+    // 12.5 % needs one decimal, so both axes keep the smallest scale, 10.
+    expect(define(h, 'DRIVE_MAIN_PEDAL_SCALE')).toBe('10')
+    expect(define(h, 'DRIVE_MAIN_SPEED_SCALE')).toBe('10')
+    expect(define(h, 'DRIVE_MAIN_VALUE_SCALE')).toBe('10')
+    // The single scale is gone on purpose: firmware using it must not compile against new headers.
+    expect(define(h, 'DRIVE_MAIN_SCALE')).toBeUndefined()
     expect(define(h, 'DRIVE_MAIN_REVISION')).toBe('7u')
     expect(define(h, 'DRIVE_MAIN_IS_REGEN')).toBe('0')
     expect(arrayNumbers(h, 'drive_main_pedal_axis')).toEqual([0, 125, 500, 1000])
@@ -122,7 +144,7 @@ int main(void) {
     expect(r.status).toBe(0)
   })
 
-  it('refuses invalid maps, bad revisions, a wrong checksum and breakpoints finer than 0.1', () => {
+  it('refuses invalid maps, bad revisions, a wrong checksum and numbers beyond int32', () => {
     const bad = { ...table, values: table.values.map((r, i) => (i === 3 ? r.map(() => 0) : r)) }
     expect(() => toCHeader(bad, meta)).toThrow(expect.objectContaining({ code: 'invalid-table' }))
     expect(() => toCHeader(table, { ...meta, revision: 1.5 })).toThrow(MapInputError)
@@ -130,8 +152,170 @@ int main(void) {
     expect(() => toCHeader(table, { ...meta, checksum: '00' })).toThrow(expect.objectContaining({ code: 'bad-checksum' }))
     expect(() => verifiedChecksum(table, checksum(small()))).toThrow(expect.objectContaining({ code: 'checksum-mismatch' }))
     expect(toCHeader(table, { ...meta, checksum: verifiedChecksum(table, checksum(table).toUpperCase()) })).toBe(h)
-    expect(() => toCHeader({ ...table, colAxis: [0, 10.01, 10.04, 40, 80] }, meta)).toThrow(expect.objectContaining({ code: 'axis-resolution' }))
     expect(() => toCHeader({ ...table, values: table.values.map((r) => r.map((v) => v * 1e9)) }, meta)).toThrow(expect.objectContaining({ code: 'out-of-range' }))
+  })
+})
+
+/** A map whose breakpoints are off the 0.1 grid; values have at most 2 decimals. */
+const frac: MapTable = {
+  kind: 'drive',
+  rowAxis: [0, 12.75, 37.5, 100],
+  colAxis: [0, 0.125, 10, 40.5, 80],
+  values: [
+    [0, 0, 0, 0, 0],
+    [300, 280.25, 250, 200, 100],
+    [900, 850, 700.04, 500, 250],
+    [1800, 1700, 1400, 1000, 500],
+  ],
+}
+const fracMeta: CHeaderMeta = { name: 'frac', revision: 2, mapName: 'Fractional breakpoints', vehicleProgram: 'Test', checksum: checksum(frac) }
+
+/** The "Largest difference ..." figure a header states, N·m. */
+function statedDifference(header: string): number {
+  const m = /Largest difference from the app's lookup over all cell corners and centres: (\S+) N\*m\./.exec(header)
+  if (!m) throw new Error('no stated difference')
+  return Number(m[1])
+}
+
+/** Every breakpoint and every midpoint of adjacent breakpoints. */
+const cornersAndCentres = (axis: number[]) => axis.flatMap((v, i) => (i + 1 < axis.length ? [v, (v + axis[i + 1]) / 2] : [v]))
+
+/**
+ * Deterministic pseudo-random numbers in [0, 1): a 32-bit linear congruential generator with the
+ * constants 1664525 and 1013904223 from Press et al., "Numerical Recipes", §7.1.
+ */
+function lcg(seed: number): () => number {
+  let x = seed >>> 0
+  return () => {
+    x = (Math.imul(x, 1664525) + 1013904223) >>> 0
+    return x / 2 ** 32
+  }
+}
+
+const gcc = spawnSync('gcc', ['--version'], { encoding: 'utf8' })
+const haveGcc = gcc.error === undefined && gcc.status === 0
+if (!haveGcc) console.warn('c-header.test: gcc not found on PATH; the compiled reference lookup test is skipped')
+
+describe('exact breakpoints and the stated largest difference', () => {
+  const h = toCHeader(frac, fracMeta)
+  const fixed = toFixedTable(frac)
+
+  it('keeps 12.75 % as 12.75 % (the old header wrote 128 tenths, i.e. 12.8 %)', () => {
+    expect(arrayNumbers(h, 'frac_pedal_axis')).toEqual([0, 1275, 3750, 10000])
+    const scale = Number(define(h, 'FRAC_PEDAL_SCALE'))
+    expect(scale).toBe(100)
+    expect(arrayNumbers(h, 'frac_pedal_axis')[1] / scale).toBe(12.75)
+  })
+
+  it('picks the smallest scale of 10, 100, 1000 per axis and stores every breakpoint exactly', () => {
+    expect(define(h, 'FRAC_SPEED_SCALE')).toBe('1000')
+    expect(define(h, 'FRAC_VALUE_SCALE')).toBe('10')
+    expect(arrayNumbers(h, 'frac_speed_axis')).toEqual([0, 125, 10000, 40500, 80000])
+    expect(arrayNumbers(h, 'frac_speed_axis').map((v) => v / 1000)).toEqual(frac.colAxis)
+    // Two breakpoints 0.03 km/h apart (once refused as closer than 0.1) now export exactly at 0.01.
+    const close = toCHeader({ ...table, colAxis: [0, 10.01, 10.04, 40, 80] }, meta)
+    expect(define(close, 'DRIVE_MAIN_SPEED_SCALE')).toBe('100')
+    expect(arrayNumbers(close, 'drive_main_speed_axis')).toEqual([0, 1001, 1004, 4000, 8000])
+  })
+
+  it('counts decimals on the shortest decimal form, so float error is not taken for an exact value', () => {
+    expect(decimalPlaces(12.75)).toBe(2)
+    expect(decimalPlaces(100)).toBe(0)
+    expect(decimalPlaces(1e-7)).toBe(7)
+    expect(decimalPlaces(1e21)).toBe(0)
+    expect(decimalPlaces(0.1 + 0.2)).toBe(17)
+    // 1.005 × 1000 is 1004.9999999999999 in doubles; the stored integer is still 1005.
+    expect(fixedAxis([0, 1.005, 2], 'speed', 'km/h')).toEqual({ points: [0, 1005, 2000], scale: 1000 })
+  })
+
+  it('refuses a breakpoint no scale holds, naming it and the nearest exportable value', () => {
+    const third = { ...frac, rowAxis: [0, 12.75, 33.3333, 100] }
+    expect(() => toCHeader(third, { ...fracMeta, checksum: checksum(third) })).toThrow(
+      expect.objectContaining({ code: 'axis-resolution', message: expect.stringContaining('pedal breakpoint 3 (33.3333 %)') }),
+    )
+    expect(() => toCHeader(third, { ...fracMeta, checksum: checksum(third) })).toThrow(/nearest exportable value is 33\.333 %/)
+    expect(() => fixedAxis([0, 0.0625, 10], 'speed', 'km/h')).toThrow(/speed breakpoint 2 \(0\.0625 km\/h\).*0\.001 km\/h.*nearest exportable value is 0\.063 km\/h/)
+    expect(() => fixedAxis([0, 0.1 + 0.2, 10], 'speed', 'km/h')).toThrow(/speed breakpoint 2 \(0\.30000000000000004 km\/h\).*nearest exportable value is 0\.3 km\/h/)
+    expect(() => fixedAxis([0, 0.1 + 0.2, 10], 'speed', 'km/h')).toThrow(MapInputError)
+  })
+
+  it('states the largest difference from lookup over corners and centres; with exact axes that is the value rounding', () => {
+    // 280.25 N·m is stored as 2803 tenths: 0.05 N·m, the most a value with 2 decimals can lose.
+    expect(fixed.maxLookupDiffNm).toBeCloseTo(0.05, 12)
+    expect(fixed.maxLookupDiffNm).toBeCloseTo(fixed.maxRoundingNm, 12)
+    expect(statedDifference(h)).toBe(0.05)
+    expect(statedDifference(h)).toBe(Number(upperBound3(fixed.maxLookupDiffNm)))
+    // A map whose values are on the 0.1 grid loses nothing.
+    const onGrid = { ...frac, values: frac.values.map((r) => r.map((v) => Math.round(v))) }
+    expect(statedDifference(toCHeader(onGrid, { ...fracMeta, checksum: checksum(onGrid) }))).toBe(0)
+  })
+
+  it('counts a moved breakpoint in the figure, not only the value rounding', () => {
+    // The old header's pedal axis: 12.75 % and 37.5 % written as 128 and 375 tenths.
+    const old = { ...fixed, rowAxis: [0, 128, 375, 1000], pedalScale: 10 }
+    // Worst at 12.75 %, 0 km/h: the old axis reads 300 N·m × 12.75 / 12.8 there, 300 × 0.05 / 12.8 short.
+    expect(largestLookupDifference(frac, old)).toBeCloseTo((300 * 0.05) / 12.8, 12)
+    expect(largestLookupDifference(frac, fixed)).toBeLessThan(0.0501)
+  })
+
+  it('rounds the stated figure up to 3 significant digits', () => {
+    expect(upperBound3(0)).toBe('0')
+    expect(upperBound3(0.05000000000001137)).toBe('0.05')
+    expect(upperBound3(0.012346)).toBe('0.0124')
+    expect(upperBound3(0.09994)).toBe('0.1')
+    expect(upperBound3(1.171875)).toBe('1.18')
+    expect(upperBound3(1234.5)).toBe('1240')
+  })
+
+  it.skipIf(!haveGcc)('agrees with the reference C lookup of docs/map-formats.md, compiled with gcc, within the stated figure', () => {
+    // The C function is taken from the docs, so the documented code is the tested code.
+    const docs = readFileSync(path.join(__dirname, '../../../docs/map-formats.md'), 'utf8')
+    const ref = /```c\n([^`]*static double name_lookup\(double pedal_pct, double speed_kmh\)[^`]*)```/.exec(docs)
+    expect(ref, 'reference lookup in docs/map-formats.md').not.toBeNull()
+    const fn = ref![1].replace(/\bNAME_/g, 'FRAC_').replace(/\bname_/g, 'frac_')
+
+    const rnd = lcg(20240611)
+    const points: [number, number][] = []
+    for (const p of cornersAndCentres(frac.rowAxis)) for (const s of cornersAndCentres(frac.colAxis)) points.push([p, s])
+    for (let i = 0; i < 300; i++) points.push([-10 + 120 * rnd(), -5 + 95 * rnd()]) // some outside both axes
+    points.push([12.75, 0.125], [12.7499, 0.1249], [100, 80], [150, 1000], [-1, -1])
+
+    // String(x) is the shortest decimal that reads back as x, and gcc rounds decimal literals
+    // correctly, so the C program sees the same doubles.
+    const program = `#include <stdio.h>
+#include "frac.h"
+${fn}
+static const double points[][2] = {
+${points.map(([p, s]) => `  { ${String(p)}, ${String(s)} }`).join(',\n')}
+};
+int main(void) {
+  for (size_t i = 0; i < sizeof points / sizeof points[0]; i++) printf("%.17g\\n", frac_lookup(points[i][0], points[i][1]));
+  return 0;
+}
+`
+    writeFileSync(path.join(dir, 'frac.h'), h)
+    writeFileSync(path.join(dir, 'lookup.c'), program)
+    const exe = path.join(dir, 'lookup')
+    const cc = spawnSync('gcc', ['-std=c99', '-Wall', '-Werror', '-ffp-contract=off', '-o', exe, path.join(dir, 'lookup.c')], { encoding: 'utf8' })
+    expect(cc.stderr).toBe('')
+    expect(cc.status).toBe(0)
+    const run = spawnSync(exe, { encoding: 'utf8' })
+    expect(run.status).toBe(0)
+    const got = run.stdout.trim().split('\n').map(Number)
+    expect(got.length).toBe(points.length)
+
+    const stated = statedDifference(h)
+    expect(stated).toBeLessThanOrEqual(0.05)
+    let worst = 0
+    points.forEach(([p, s], i) => {
+      // The TypeScript mirror gives the same double as the compiled C (no fused multiply-adds).
+      expect(got[i], `fixedLookup at ${p} %, ${s} km/h`).toBe(fixedLookup(fixed, p, s))
+      const d = Math.abs(got[i] - lookup(frac, p, s))
+      expect(d, `C vs lookup at ${p} %, ${s} km/h`).toBeLessThanOrEqual(stated + 1e-9)
+      worst = Math.max(worst, d)
+    })
+    // The corners reach the stated figure, so it is not a loose bound.
+    expect(worst).toBeGreaterThan(stated - 1e-9)
   })
 })
 

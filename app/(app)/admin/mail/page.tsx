@@ -23,7 +23,7 @@ export default async function MailPage() {
                 <td className="px-3 py-1.5">{m.to.join(', ')}</td>
                 <td className="px-3 py-1.5">{m.subject}</td>
                 <td className="px-3 py-1.5">{m.status}{m.attempts > 1 ? ` after ${m.attempts} attempts` : ''}{m.lastError ? ` — ${m.lastError}` : ''}</td>
-                <td className="px-3 py-1.5">{m.status !== 'sent' && <RetryButton id={m.id} />}</td>
+                <td className="px-3 py-1.5">{m.status === 'failed' && <RetryButton id={m.id} />}</td>
               </tr>
             ))}
           </tbody>

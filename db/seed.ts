@@ -1,7 +1,7 @@
 import { and, eq, sql } from 'drizzle-orm'
 import type { Db } from './client'
 import type { Role } from '../domain/roles'
-import { maps, users, vehiclePrograms } from './schema'
+import { maps, paramVersions, users, vehiclePrograms } from './schema'
 import { demoTipper, demoTractor } from './demo/programs'
 import { demoMapHistories } from './demo/maps'
 import { insertRevision } from './queries/revisions'
@@ -48,7 +48,10 @@ export async function seedDemo(db: Db, hashPassword: (p: string) => Promise<stri
     .insert(vehiclePrograms)
     .values(DEMO_PROGRAMS.map((p) => ({ ...p, createdBy: admin?.id ?? null })))
     .onConflictDoNothing()
-    .returning({ id: vehiclePrograms.id })
+    .returning({ id: vehiclePrograms.id, params: vehiclePrograms.params, releaseConditions: vehiclePrograms.releaseConditions })
+  // Every program has its parameters as version 1 (what sets are judged with).
+  if (addedPrograms.length)
+    await db.insert(paramVersions).values(addedPrograms.map((p) => ({ programId: p.id, number: 1, params: p.params, releaseConditions: p.releaseConditions, reason: 'First version (demo data)', createdBy: admin?.id ?? null })))
   const mapsAdded = await seedMaps(db)
   return { usersAdded: addedUsers.length, programsAdded: addedPrograms.length, mapsAdded }
 }

@@ -1,22 +1,28 @@
-// Demo: put the invented scenario through the workflow — a released revision with a drive report and
-// its log, one revision waiting for approval with a report, one sent back — so every role has something
-// to look at. Runs once: skipped when any demo drive report exists.
+// Demo: put the invented scenario through the workflow so every role has something to look at —
+// on the tipper, set 1 released and then withdrawn, set 2 released with drive reports and logs, set 3
+// (a new drive revision and parameter version 2) under test with a report; on the tractor, a regen
+// revision sent back. Runs once: skipped when any demo drive report exists.
 import { Readable } from 'node:stream'
 import { and, eq, sql } from 'drizzle-orm'
 import type { Db } from '../db/client'
 import type { ReviewAction } from '../domain/review-actions'
 import type { RevisionState } from '../domain/revision-states'
-import { driveReports, maps, mapRevisions, users } from '../db/schema'
+import { driveReports, maps, mapRevisions, users, vehiclePrograms } from '../db/schema'
 import { createReport } from '../db/queries/reports'
-import { recordRelease, transitionRevision } from '../db/queries/review'
+import { transitionRevision } from '../db/queries/review'
 import { createLog } from '../db/queries/logs'
+import { getProgram, updateProgram } from '../db/queries/programs'
+import { createSet, getSet } from '../db/queries/sets'
+import { latestParamVersion } from '../db/queries/param-versions'
 import { analyse } from '../app/_lib/reports/log-jobs'
 import { putObjectStream } from '../app/_lib/storage/object-store'
+import { releaseSet, setGateFor, withdrawSet } from '../app/_lib/sets/service'
+import type { SessionUser } from '../app/_lib/auth/session'
 import { generateLog } from '../tests/support/log-generator'
 
-async function userId(db: Db, email: string): Promise<number> {
-  const [u] = await db.select({ id: users.id }).from(users).where(eq(users.email, email))
-  return u.id
+async function user(db: Db, email: string): Promise<SessionUser> {
+  const [u] = await db.select({ id: users.id, email: users.email, name: users.name, role: users.role }).from(users).where(eq(users.email, email))
+  return u
 }
 
 async function revision(db: Db, mapName: string, number: number) {
@@ -34,10 +40,10 @@ async function step(revisionId: number, actorId: number, action: ReviewAction, f
 }
 
 /** A drive report with a generated log (invented data), analysed like an upload. */
-async function reportWithLog(db: Db, revisionId: number, driverId: number, fields: Partial<Parameters<typeof createReport>[0]>, seed: number) {
+async function reportWithLog(setId: number, driverId: number, fields: Partial<Parameters<typeof createReport>[0]>, seed: number | null) {
   const id = await createReport(
     {
-      revisionId,
+      setId,
       drivenOn: '2026-11-24',
       vehicleUnit: 'BX-07',
       route: 'Demo quarry haul road, loop 2',
@@ -54,6 +60,7 @@ async function reportWithLog(db: Db, revisionId: number, driverId: number, field
     },
     driverId,
   )
+  if (seed === null) return id
   const { csv } = generateLog({ seed, durationS: 600, rateHz: 50 })
   const objectKey = `logs/report-${id}/demo-${seed}.csv`
   await putObjectStream(objectKey, Readable.from([Buffer.from(csv)]), 'text/csv')
@@ -62,33 +69,67 @@ async function reportWithLog(db: Db, revisionId: number, driverId: number, field
   return id
 }
 
+/** Make a set of the two revisions and the program's latest parameter version. */
+async function makeSet(programId: number, drive: number, regen: number, by: number, note: string) {
+  const pv = await latestParamVersion(programId)
+  return (await createSet({ programId, driveRevisionId: drive, regenRevisionId: regen, paramVersionId: pv!.id, note, createdBy: by })).id
+}
+
+/** Release a demo set, acknowledging each traction exception the gate finds with a demo reason. */
+async function release(setId: number, lead: SessionUser) {
+  const set = (await getSet(setId))!
+  const gate = await setGateFor(set)
+  const reason = 'Demo: snow and ice running are not planned for this program this season; drivers are briefed'
+  await releaseSet(set, lead, gate.exceptions.map((e) => ({ key: e.key, reason })))
+}
+
 export async function seedWorkflow(db: Db): Promise<boolean> {
   const [{ n }] = await db.select({ n: sql<number>`count(*)::int` }).from(driveReports)
   if (Number(n) > 0) return false
-  const lead = await userId(db, 'lead@brackwater.example')
-  const lead2 = await userId(db, 'lead2@brackwater.example')
-  const dara = await userId(db, 'driver@brackwater.example')
-  const mika = await userId(db, 'driver2@brackwater.example')
+  const lead = await user(db, 'lead@brackwater.example')
+  const lead2 = await user(db, 'lead2@brackwater.example')
+  const calib = await user(db, 'calib@brackwater.example')
+  const dara = await user(db, 'driver@brackwater.example')
+  const mika = await user(db, 'driver2@brackwater.example')
+  const [tipper] = await db.select({ id: vehiclePrograms.id }).from(vehiclePrograms).where(eq(vehiclePrograms.name, 'BX-64 Tipper'))
+  const reviewer = (authorId: number) => (authorId === lead.id ? lead2.id : lead.id)
+  const approve = async (r: { id: number; authorId: number }) => {
+    await step(r.id, r.authorId, 'submit', 'draft', 'in_review')
+    await step(r.id, reviewer(r.authorId), 'approve', 'in_review', 'approved')
+  }
 
-  // Site drive r2: reviewed, driven, approved and released.
-  const r2 = await revision(db, 'Site drive', 2)
-  const approver = r2.authorId === lead ? lead2 : lead
-  await step(r2.id, r2.authorId, 'submit', 'draft', 'in_review')
-  await reportWithLog(db, r2.id, dara, { comments: 'Smooth tip-in; the empty truck still spins the tandem on wet gravel above half pedal.', flags: [{ pedalPct: 60, speedKmh: 3, what: 'wheel spin on launch, empty', severity: 3 }] }, 11)
-  await step(r2.id, approver, 'approve', 'in_review', 'approved')
-  await transitionRevision({
-    revisionId: r2.id, actorId: approver, action: 'release', from: 'approved', to: 'released', comment: '',
-    extra: async (tx) => void (await recordRelease(tx, { mapId: r2.mapId, revisionId: r2.id, releasedBy: approver, acknowledgements: [{ key: 'traction:packed-snow:empty', reason: 'Demo: snow running is not planned for this program this season' }] })),
-  })
+  // Set 1: the first drive and regen revisions, approved, driven, released — then withdrawn.
+  const d1 = await revision(db, 'Site drive', 1)
+  const g1 = await revision(db, 'Site regen', 1)
+  await approve(d1)
+  await approve(g1)
+  const set1 = await makeSet(tipper.id, d1.id, g1.id, d1.authorId, 'First road-legal candidate')
+  await reportWithLog(set1, dara.id, { drivenOn: '2026-11-10', comments: 'Strong lift-off regen; the empty truck steps out on wet gravel at launch.', flags: [{ map: 'drive', pedalPct: 80, speedKmh: 2, what: 'tandem spins at launch, empty, wet gravel', severity: 3 }] }, null)
+  await release(set1, lead)
+  await withdrawSet((await getSet(set1))!, lead2, 'Launch spin on wet gravel when empty is worse than the model showed; set 2 softens the launch')
 
-  // Site drive r3: submitted, driven, waiting for a lead's approval.
-  const r3 = await revision(db, 'Site drive', 3)
-  await step(r3.id, r3.authorId, 'submit', 'draft', 'in_review')
-  await reportWithLog(db, r3.id, mika, { drivenOn: '2026-11-28', surface: 'wet-asphalt', weather: 'rain', comments: 'Launch cap works; no spin on the wet pad.' }, 23)
-
-  // Site regen r2: sent back with a comment.
+  // Set 2: softer tip-in and less lift-off regen, approved, driven with logs, released (current).
+  const d2 = await revision(db, 'Site drive', 2)
   const g2 = await revision(db, 'Site regen', 2)
-  await step(g2.id, g2.authorId, 'submit', 'draft', 'in_review')
-  await step(g2.id, g2.authorId === lead ? lead2 : lead, 'send_back', 'in_review', 'returned', 'Lift-off regen still too strong above 60 km/h on loose surfaces')
+  await approve(d2)
+  await approve(g2)
+  const set2 = await makeSet(tipper.id, d2.id, g2.id, d2.authorId, 'Softer tip-in, gentler lift-off on loose surfaces')
+  await reportWithLog(set2, dara.id, { comments: 'Smooth tip-in; the empty truck still spins the tandem on wet gravel above half pedal.', flags: [{ map: 'drive', pedalPct: 60, speedKmh: 3, what: 'wheel spin on launch, empty', severity: 3 }] }, 11)
+  await release(set2, lead)
+
+  // Parameter version 2: the laden centre of gravity measured after the body change.
+  const program = (await getProgram(tipper.id))!
+  await updateProgram(tipper.id, { name: program.name, description: program.description, params: { ...program.params, ladenCgHeightM: program.params.ladenCgHeightM + 0.05 }, releaseConditions: program.releaseConditions, reason: 'Laden CG height measured on the tilt table after the body change (+5 cm)' }, calib.id)
+
+  // Set 3: the launch-capped drive revision with set 2's regen, judged with version 2, under test.
+  const d3 = await revision(db, 'Site drive', 3)
+  await step(d3.id, d3.authorId, 'submit', 'draft', 'in_review')
+  const set3 = await makeSet(tipper.id, d3.id, g2.id, d3.authorId, 'Launch cap for wet gravel, empty')
+  await reportWithLog(set3, mika.id, { drivenOn: '2026-11-28', surface: 'wet-asphalt', weather: 'rain', comments: 'Launch cap works; no spin on the wet pad.' }, 23)
+
+  // Tractor: Road regen r1 sent back with a comment.
+  const rr = await revision(db, 'Road regen', 1)
+  await step(rr.id, rr.authorId, 'submit', 'draft', 'in_review')
+  await step(rr.id, reviewer(rr.authorId), 'send_back', 'in_review', 'returned', 'Lift-off regen still too strong above 60 km/h on loose surfaces')
   return true
 }

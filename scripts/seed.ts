@@ -8,7 +8,7 @@ async function main() {
   const { db, kind } = await getHandle()
   const result = await seedDemo(db, hashPassword)
   console.log(`Demo data on ${kind}: ${result.usersAdded} users, ${result.programsAdded} vehicle programs and ${result.mapsAdded} maps added (existing rows kept).`)
-  if (process.env.S3_ENDPOINT && (await seedWorkflow(db))) console.log('Demo workflow: a released revision, one waiting for approval, one sent back, drive reports with logs.')
+  if (process.env.S3_ENDPOINT && (await seedWorkflow(db))) console.log('Demo workflow: map sets (one released, one withdrawn, one under test), drive reports with logs, a parameter version 2, a revision sent back.')
   console.log(`\nDemo accounts (password for all: ${DEMO_PASSWORD}):`)
   for (const u of DEMO_USERS) console.log(`  ${u.role.padEnd(21)} ${u.email}`)
   await closeDb()

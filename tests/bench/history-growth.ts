@@ -18,13 +18,14 @@ export async function runHistoryGrowth(): Promise<BenchResult> {
   const { getDb, closeDb } = await import('@/db/client')
   const { createUser } = await import('@/db/queries/users')
   const { createProgram } = await import('@/db/queries/programs')
+  const { DEFAULT_RELEASE_CONDITIONS } = await import('@/app/_schemas/program')
   const { createMap } = await import('@/db/queries/maps')
   const { countRevisions, getRevision, listRevisions, refreshRevisionStatistics, STATS_EVERY } = await import('@/db/queries/revisions')
   const { mapRevisions } = await import('@/db/schema')
   try {
     const db = await getDb()
     const user = await createUser({ email: 'bench@example.invalid', name: 'Bench', role: 'calibration_engineer', passwordHash: 'not-a-hash' })
-    const program = await createProgram({ name: 'Bench tractor', description: '', params: demoTractor }, user.id)
+    const program = await createProgram({ name: 'Bench tractor', description: '', params: demoTractor, releaseConditions: DEFAULT_RELEASE_CONDITIONS, reason: '' }, user.id)
     const table = seededDriveMap(demoTractor, 24, 24)
     const mapIds: number[] = []
     const t0 = now()

@@ -3,7 +3,7 @@
  * map, each revision approved; (b) validation finds no error in either map under the set's
  * parameter version; (c) no cell of either map asks for more than the traction limit less the
  * version's margin in any of its release conditions — or the lead acknowledges each exception
- * (map × surface × load case) with a reason; (d) at least one drive report was filed on this
+ * (map × surface × load case) with a reason; (c′) both maps export exactly to the C header; (d) at least one drive report was filed on this
  * exact set; (e) no open safety concern sits on any of its revisions, whichever set it was
  * found in. Pure: the caller loads the data.
  */
@@ -11,7 +11,7 @@ import 'server-only'
 import type { Acknowledgement, ReleaseConditions } from '@/db/schema'
 import type { RevisionState } from '@/domain/revision-states'
 import { STATE_LABELS } from '@/domain/revision-states'
-import { limitsFromVehicle, validate, type MapKind, type MapTable } from '@/maps'
+import { limitsFromVehicle, MapError, toFixedTable, validate, type MapKind, type MapTable } from '@/maps'
 import { surfaceLabel, type SurfaceId } from '@/physics/surfaces'
 import { loadCaseLabel } from '@/physics/load-cases'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
@@ -39,7 +39,7 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'traction' | 'drive-report' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'drive-report' | 'safety'
   met: boolean
   summary: string
   details: string[]
@@ -77,6 +77,16 @@ export function setGate(input: {
   const unapproved = parts.filter((p) => !APPROVED_STATES.includes(p.state))
   const limits = limitsFromVehicle(vehicle)
   const errors = parts.flatMap((p) => validate(p.table, limits).filter((f) => f.severity === 'error').map((f) => `${p.mapName} r${p.number}: ${f.message}`))
+  // The package is built at release: a map the C header cannot hold exactly must stop the gate, not the build.
+  const unexportable = parts.flatMap((p) => {
+    try {
+      toFixedTable(p.table)
+      return []
+    } catch (e) {
+      if (e instanceof MapError) return [`${p.mapName} r${p.number}: ${e.message}`]
+      throw e
+    }
+  })
   const exceptions = setTractionExceptions(parts, vehicle, conditions)
   const acked = new Set(input.acknowledgements.filter((a) => a.reason.trim()).map((a) => a.key))
   const unacknowledged = exceptions.filter((e) => !acked.has(e.key)).map((e) => e.key)
@@ -103,6 +113,12 @@ export function setGate(input: {
       met: errors.length === 0,
       summary: errors.length === 0 ? 'Validation finds no error in either map' : `Validation finds ${errors.length} error(s)`,
       details: errors.slice(0, 20),
+    },
+    {
+      id: 'exportable',
+      met: unexportable.length === 0,
+      summary: unexportable.length === 0 ? 'Both maps export exactly to the C header' : `${unexportable.length} map(s) cannot be exported exactly`,
+      details: unexportable,
     },
     {
       id: 'traction',

@@ -1,13 +1,11 @@
 import fs from 'node:fs'
 import * as actionsRoute from '@/app/api/revisions/[revisionId]/actions/route'
 import * as revisionsRoute from '@/app/api/maps/[id]/revisions/route'
-import * as reportsRoute from '@/app/api/reports/route'
 import { getRevision } from '@/db/queries/revisions'
 import { deliverPending } from '@/app/_lib/mail/sender'
 import type { MapTable } from '@/maps'
 import { call, makeUser, sessionCookie } from './api'
 import { programAndMap, SMALL_DRIVE } from './fixtures'
-import { reportBody } from './report-fixtures'
 
 /** A gentle table that passes the traction check on every surface of the default release conditions. */
 export const GENTLE: MapTable = { ...SMALL_DRIVE, values: [[20, 0, 0], [60, 50, 40], [120, 100, 80]] }
@@ -26,12 +24,6 @@ export async function reviewSetup(table: MapTable = GENTLE) {
   const driver = await makeUser('test_driver')
   const driverCookie = await sessionCookie(driver)
   return { ...ctx, revisionId, lead, leadCookie, driver, driverCookie }
-}
-
-export async function fileReport(revisionId: number, driverCookie: string, over: Record<string, unknown> = {}) {
-  const res = await call(reportsRoute.POST, { method: 'POST', cookie: driverCookie, body: reportBody(revisionId, over) })
-  if (res.status !== 201) throw new Error(JSON.stringify(res.body))
-  return res.body.report.id as number
 }
 
 export async function stateOf(mapId: number, number: number) {

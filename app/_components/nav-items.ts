@@ -10,6 +10,7 @@ export interface NavItem {
 export const NAV_ITEMS: NavItem[] = [
   { href: '/', label: 'Overview', roles: 'all' },
   { href: '/maps', label: 'Maps', roles: 'all' },
+  { href: '/sets', label: 'Map sets', roles: 'all' },
   { href: '/review', label: 'Review', roles: ['lead_engineer', 'calibration_engineer'] },
   { href: '/reports', label: 'Drive reports', roles: 'all' },
   { href: '/programs', label: 'Vehicle programs', roles: 'all' },

@@ -1,0 +1,43 @@
+'use client'
+import { useRouter } from 'next/navigation'
+import { useState, type FormEvent } from 'react'
+import { useMutation } from '@tanstack/react-query'
+import { api } from '@/app/_components/api-client'
+
+/** A lead withdraws the set's current release, with the reason; the release it replaced comes back. */
+export function WithdrawPanel({ setId, setNumber }: { setId: number; setNumber: number }) {
+  const router = useRouter()
+  const [reason, setReason] = useState('')
+  const [error, setError] = useState<string | null>(null)
+  const withdraw = useMutation({
+    mutationFn: () => api<{ restoredSetId: number | null }>(`/api/sets/${setId}/withdraw`, { method: 'POST', json: { reason: reason.trim() } }),
+    onSuccess: () => {
+      setError(null)
+      router.refresh()
+    },
+    onError: (e) => setError(e.message),
+  })
+
+  function onSubmit(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault()
+    if (!reason.trim()) return setError('Say why the release is withdrawn')
+    withdraw.mutate()
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="card space-y-3 border-danger/40" aria-labelledby="withdraw-heading" data-testid="withdraw-panel">
+      <h3 id="withdraw-heading" className="font-semibold">Withdraw the release of Set {setNumber}</h3>
+      <p className="text-sm text-slate-600">
+        Everyone who opens this set or its package is told it was withdrawn, with your reason. The release it replaced, if any, becomes the released set again.
+      </p>
+      <div>
+        <label htmlFor="withdraw-reason" className="label">Reason (required)</label>
+        <textarea id="withdraw-reason" rows={3} required maxLength={5000} className="field" value={reason} onChange={(e) => setReason(e.target.value)} />
+      </div>
+      {error && <p role="alert" className="error-text text-sm">{error}</p>}
+      <button type="submit" className="btn border-danger text-danger" disabled={withdraw.isPending}>
+        {withdraw.isPending ? 'Withdrawing…' : 'Withdraw the release'}
+      </button>
+    </form>
+  )
+}

@@ -108,3 +108,15 @@ function row(path: string, from: unknown, to: unknown): DiffRow {
   const info = fieldInfo(path)
   return { path, label: info.label, unit: info.unit, from: formatValue(from, info), to: formatValue(to, info) }
 }
+
+/**
+ * Which two versions to compare: the ones asked for, else the newest (or the `to` asked for) against
+ * the version before it; null where there is none.
+ * @example chooseVersions([3, 2, 1], null, null) // { from: 2, to: 3 }
+ */
+export function chooseVersions(numbers: number[], from: number | null, to: number | null): { from: number | null; to: number | null } {
+  const newest = numbers.length ? Math.max(...numbers) : null
+  const t = to ?? newest
+  const before = numbers.filter((n) => t !== null && n < t)
+  return { from: from ?? (before.length ? Math.max(...before) : null), to: t }
+}

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { fieldInfo, formatValue, versionDiff } from '@/app/(app)/programs/param-diff'
+import { chooseVersions, fieldInfo, formatValue, versionDiff } from '@/app/(app)/programs/param-diff'
 
 const params = { axleLayout: '6x4', motorPeakPowerW: 350_000, drivelineEfficiency: 0.93, gearRatios: [3.5, 1], trailer: null }
 const rc = { surfaces: ['wet-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'], marginPct: 10 }
@@ -46,5 +46,17 @@ describe('parameter version diff', () => {
   it('keeps an unknown path as its own label', () => {
     expect(fieldInfo('params.somethingNew')).toEqual({ label: 'params.somethingNew', unit: '', scale: 1 })
     expect(formatValue(null, fieldInfo('params.somethingNew'))).toBe('—')
+  })
+})
+
+describe('choosing the versions to compare', () => {
+  it('takes the newest and the one before it by default', () => {
+    expect(chooseVersions([3, 2, 1], null, null)).toEqual({ from: 2, to: 3 })
+    expect(chooseVersions([1], null, null)).toEqual({ from: null, to: 1 })
+  })
+  it('takes what was asked for, and the version before `to` when only `to` was', () => {
+    expect(chooseVersions([4, 3, 2, 1], 1, 4)).toEqual({ from: 1, to: 4 })
+    expect(chooseVersions([4, 3, 2, 1], null, 3)).toEqual({ from: 2, to: 3 })
+    expect(chooseVersions([4, 3, 2, 1], 2, null)).toEqual({ from: 2, to: 4 })
   })
 })

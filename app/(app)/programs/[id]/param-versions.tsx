@@ -66,7 +66,8 @@ export function ParamVersionDiff(props: { programId: number; versions: ParamVers
       {versions.length < 2 ? (
         <p className="text-sm text-slate-600">There is only one version so far; nothing to compare.</p>
       ) : (
-        <form method="get" action={`/programs/${props.programId}#changes`} className="flex flex-wrap items-end gap-3">
+        // Keyed by the choice, so the selects show it again after a client-side navigation (a history link).
+        <form key={`${props.from}-${props.to}`} method="get" action={`/programs/${props.programId}#changes`} className="flex flex-wrap items-end gap-3">
           {select('from', 'From', a ? a.number : null)}
           {select('to', 'To', b ? b.number : null)}
           <button type="submit" className="btn">Show changes</button>

@@ -1,45 +1,84 @@
 'use client'
 import { useRouter } from 'next/navigation'
-import { useForm, useWatch, Controller } from 'react-hook-form'
+import { useForm, useWatch, Controller, type Control } from 'react-hook-form'
 import { zodResolver } from '@hookform/resolvers/zod'
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { useState } from 'react'
 import { z } from 'zod'
 import { api, ApiError } from '@/app/_components/api-client'
-import { programInputSchema } from '@/app/_schemas/program'
+import { DEFAULT_RELEASE_CONDITIONS, programInputSchema } from '@/app/_schemas/program'
+import { jsonChanges } from '@/domain/json-changes'
+import { LOAD_CASES } from '@/physics/load-cases'
+import { SURFACE_IDS, surfaceLabel } from '@/physics/surfaces'
 import { ScaledNumberInput } from './scaled-number-input'
 import { TRAILER_FIELDS, TRAILER_START, VEHICLE_FIELDS } from './program-fields'
 
 type FormIn = z.input<typeof programInputSchema>
 type FormOut = z.output<typeof programInputSchema>
+type SaveAnswer = { program: { id: number; paramVersion: number }; newParamVersion?: number | null }
 
-export function ProgramForm(props: { programId?: number; initial?: FormIn; readOnly?: boolean }) {
+const REASON_NEEDED = 'Say why the parameters or release conditions change: the change makes a new parameter version.'
+
+/**
+ * The vehicle program form: name, parameters and release conditions. On an existing program a
+ * change to the parameters or release conditions makes a new numbered parameter version, so the
+ * form then asks for the reason (the server refuses the change without one).
+ */
+export function ProgramForm(props: { programId?: number; paramVersion?: number; initial?: FormIn; readOnly?: boolean }) {
   const router = useRouter()
   const qc = useQueryClient()
   const [serverError, setServerError] = useState<string | null>(null)
+  // The server asked for a reason the form did not see coming: keep the field shown from then on.
+  const [reasonAsked, setReasonAsked] = useState(false)
+  const initial: FormIn = props.initial ?? {
+    name: '',
+    description: '',
+    params: { axleLayout: '6x4', gearRatios: [1], trailer: null } as FormIn['params'],
+    releaseConditions: DEFAULT_RELEASE_CONDITIONS,
+    reason: '',
+  }
   const form = useForm<FormIn, unknown, FormOut>({
     resolver: zodResolver(programInputSchema),
-    defaultValues: props.initial ?? { name: '', description: '', params: { axleLayout: '6x4', gearRatios: [1], trailer: null } as FormIn['params'] },
+    defaultValues: { ...initial, releaseConditions: initial.releaseConditions ?? DEFAULT_RELEASE_CONDITIONS, reason: '' },
     mode: 'onBlur',
   })
-  const { register, control, handleSubmit, setValue, formState } = form
+  const { register, control, handleSubmit, setValue, getValues, setError, formState } = form
   const hasTrailer = Boolean(useWatch({ control, name: 'params.trailer' }))
+  const params = useWatch({ control, name: 'params' })
+  const releaseConditions = useWatch({ control, name: 'releaseConditions' })
+  const changed =
+    props.programId !== undefined &&
+    jsonChanges({ params: initial.params, releaseConditions: initial.releaseConditions }, { params, releaseConditions }).length > 0
+  const askReason = props.programId !== undefined && (changed || reasonAsked)
 
   const save = useMutation({
     mutationFn: (input: FormOut) =>
       props.programId
-        ? api<{ program: { id: number } }>(`/api/programs/${props.programId}`, { method: 'PUT', json: input })
-        : api<{ program: { id: number } }>('/api/programs', { method: 'POST', json: input }),
-    onSuccess: async ({ program }) => {
+        ? api<SaveAnswer>(`/api/programs/${props.programId}`, { method: 'PUT', json: input })
+        : api<SaveAnswer>('/api/programs', { method: 'POST', json: input }),
+    onSuccess: async ({ program, newParamVersion }) => {
       await qc.invalidateQueries({ queryKey: ['programs'] })
-      router.push(`/programs/${program.id}?saved=1`)
+      const version = props.programId ? newParamVersion : program.paramVersion
+      router.push(`/programs/${program.id}?saved=1${version ? `&version=${version}` : ''}`)
       router.refresh()
     },
-    onError: (e) => setServerError(e instanceof ApiError ? e.message : String(e)),
+    onError: (e) => {
+      if (e instanceof ApiError && e.status === 400 && e.message.startsWith('reason:')) setReasonAsked(true)
+      setServerError(e instanceof ApiError ? e.message : String(e))
+    },
+  })
+
+  const submit = handleSubmit((v) => {
+    setServerError(null)
+    if (askReason && !v.reason.trim()) {
+      setError('reason', { type: 'required', message: REASON_NEEDED }, { shouldFocus: true })
+      return
+    }
+    save.mutate({ ...v, reason: askReason ? v.reason : '' })
   })
 
   return (
-    <form onSubmit={handleSubmit((v) => save.mutate(v))} className="space-y-5" noValidate>
+    <form onSubmit={submit} className="space-y-5" noValidate>
       <fieldset disabled={props.readOnly} className="space-y-5">
         <div className="card grid gap-4 md:grid-cols-2">
           <div>
@@ -75,7 +114,15 @@ export function ProgramForm(props: { programId?: number; initial?: FormIn; readO
             <input
               type="checkbox"
               checked={hasTrailer}
-              onChange={(e) => setValue('params.trailer', e.target.checked ? TRAILER_START : null, { shouldDirty: true })}
+              onChange={(e) => {
+                setValue('params.trailer', e.target.checked ? TRAILER_START : null, { shouldDirty: true })
+                // Without a semitrailer its load cases cannot be checked; take them out of the release conditions.
+                if (!e.target.checked) {
+                  const cases = getValues('releaseConditions.loadCases') ?? []
+                  const kept = cases.filter((c) => !LOAD_CASES.some((l) => l.id === c && l.trailer))
+                  if (kept.length !== cases.length) setValue('releaseConditions.loadCases', kept, { shouldDirty: true })
+                }
+              }}
             />
             Tractor with a semitrailer
           </label>
@@ -87,6 +134,49 @@ export function ProgramForm(props: { programId?: number; initial?: FormIn; readO
             </div>
           )}
         </section>
+        <section className="card space-y-4" aria-labelledby="release-conditions-title">
+          <div>
+            <h2 id="release-conditions-title" className="font-semibold">Release conditions</h2>
+            <p className="text-sm text-slate-600">
+              What the release check of a map set runs both maps over: each surface with each load case, and how far below the
+              traction limit every cell must stay. The check refuses conditions without a low-friction surface or without both
+              the empty and laden cases.
+            </p>
+          </div>
+          <CheckboxGroup
+            control={control}
+            name="releaseConditions.surfaces"
+            legend="Surfaces"
+            options={SURFACE_IDS.map((id) => ({ id, label: surfaceLabel(id) }))}
+          />
+          <CheckboxGroup
+            control={control}
+            name="releaseConditions.loadCases"
+            legend="Load cases"
+            options={LOAD_CASES.filter((c) => !c.trailer || hasTrailer || (releaseConditions?.loadCases ?? []).includes(c.id)).map((c) => ({ id: c.id, label: c.label }))}
+          />
+          <div className="max-w-xs">
+            <ScaledNumberInput control={control} name="releaseConditions.marginPct" label="Traction margin (cells stay this far below the limit)" unit="%" />
+          </div>
+        </section>
+        {askReason && (
+          <section className="card border-amber-300 bg-amber-50">
+            <label htmlFor="reason" className="label">Reason for this change</label>
+            <p id="reason-hint" className="mb-1 text-sm text-slate-700">
+              Required: saving makes parameter version {(props.paramVersion ?? 0) + 1}. Sets made before keep the version they were made with.
+            </p>
+            <textarea
+              id="reason"
+              rows={2}
+              className="field"
+              aria-describedby="reason-hint"
+              aria-invalid={Boolean(formState.errors.reason)}
+              aria-required
+              {...register('reason')}
+            />
+            {formState.errors.reason && <p className="error-text">{formState.errors.reason.message}</p>}
+          </section>
+        )}
       </fieldset>
       {serverError && <p role="alert" className="error-text text-sm">{serverError}</p>}
       {Object.keys(formState.errors).length > 0 && (
@@ -101,7 +191,46 @@ export function ProgramForm(props: { programId?: number; initial?: FormIn; readO
   )
 }
 
-function GearRatiosInput({ control }: { control: ReturnType<typeof useForm<FormIn, unknown, FormOut>>['control'] }) {
+type FormControl = Control<FormIn, unknown, FormOut>
+
+function CheckboxGroup(props: { control: FormControl; name: 'releaseConditions.surfaces' | 'releaseConditions.loadCases'; legend: string; options: { id: string; label: string }[] }) {
+  return (
+    <Controller
+      control={props.control}
+      name={props.name}
+      render={({ field, fieldState }) => {
+        const value = (field.value ?? []) as string[]
+        return (
+          <fieldset>
+            <legend className="label">{props.legend}</legend>
+            <div className="flex flex-wrap gap-x-5 gap-y-1">
+              {props.options.map((o) => (
+                <label key={o.id} className="flex items-center gap-2 text-sm">
+                  <input
+                    type="checkbox"
+                    name={props.name}
+                    value={o.id}
+                    checked={value.includes(o.id)}
+                    onBlur={field.onBlur}
+                    onChange={(e) => {
+                      const next = e.target.checked ? [...value, o.id] : value.filter((v) => v !== o.id)
+                      // In the list's own order, so ticking a box off and on again is no change.
+                      field.onChange(props.options.map((x) => x.id).filter((id) => next.includes(id)))
+                    }}
+                  />
+                  {o.label}
+                </label>
+              ))}
+            </div>
+            {fieldState.error && <p className="error-text">{fieldState.error.message ?? fieldState.error.root?.message}</p>}
+          </fieldset>
+        )
+      }}
+    />
+  )
+}
+
+function GearRatiosInput({ control }: { control: FormControl }) {
   return (
     <Controller
       control={control}

@@ -33,12 +33,20 @@ export function ScaledNumberInput<T extends FieldValues>(props: {
         onChange={(e) => {
           setText(e.target.value)
           const t = e.target.value.trim()
-          field.onChange(t === '' ? undefined : Number(t) * scale)
+          field.onChange(t === '' ? undefined : toStored(Number(t), scale))
         }}
       />
       {fieldState.error && <p className="error-text">{fieldState.error.message}</p>}
     </div>
   )
+}
+
+/**
+ * Typed value × scale without float noise (93 × 0.01 is 0.9300000000000001): retyping the shown
+ * value must store exactly what was there, or the program would count a change that is none.
+ */
+function toStored(shown: number, scale: number): number {
+  return scale === 1 || !Number.isFinite(shown) ? shown : Number((shown * scale).toPrecision(12))
 }
 
 function round(v: number): number {

@@ -32,6 +32,10 @@ export default async function ReviewQueuePage() {
       <h1 className="text-2xl font-bold">Review queue</h1>
       {section('Waiting for review', waiting, 'Nothing is waiting for review.')}
       {section('Approved, not yet released', approved, 'No approved revision is waiting to be released.')}
+      <p className="text-sm text-slate-600">
+        An approved revision reaches the trucks in a map set — a drive revision, a regen revision and a parameter version of
+        the program — which is checked and released as a whole. A revision’s review page lists the sets holding it.
+      </p>
     </div>
   )
 }

@@ -7,6 +7,8 @@ import { getMap } from '@/db/queries/maps'
 import { countRevisions, listRevisions } from '@/db/queries/revisions'
 import { listReviewComments, listRevisionEvents } from '@/db/queries/review'
 import { listReports } from '@/db/queries/reports'
+import { formatTime } from '@/app/_components/format'
+import { releasedRevisionOfMap } from './released-set'
 import { HistoryTable } from './history-table'
 import { NotebookEntries } from './notebook-entries'
 
@@ -20,12 +22,13 @@ export default async function MapNotebookPage(props: {
   const map = await getMap(pageId((await props.params).id, 'Map id'))
   if (!map) notFound()
   const { saved } = await props.searchParams
-  const [revisions, total, events, comments, reports] = await Promise.all([
+  const [revisions, total, events, comments, reports, released] = await Promise.all([
     listRevisions(map.id, { limit: 50 }),
     countRevisions(map.id),
     listRevisionEvents({ mapId: map.id }),
     listReviewComments({ mapId: map.id }),
     listReports({ mapId: map.id }),
+    releasedRevisionOfMap(map),
   ])
   const latest = revisions[0]
   return (
@@ -39,6 +42,16 @@ export default async function MapNotebookPage(props: {
           <p className="text-sm text-slate-600">
             {map.kind === 'drive' ? 'Drive map: accelerator pedal × road speed → torque request' : 'Regen map: brake pedal × road speed → regen torque (0 % row is lift-off)'}
             {map.description ? ` — ${map.description}` : ''}
+          </p>
+          <p className="text-sm" data-testid="released-set">
+            {released ? (
+              <>
+                In the trucks now: <Link href={`/maps/${map.id}/revisions/${released.revision.number}`} className="text-accent hover:underline">r{released.revision.number}</Link>, in the released{' '}
+                <Link href={`/sets/${released.setId}`} className="text-accent hover:underline">set {released.setNumber}</Link> ({formatTime(released.releasedAt)}, {released.releasedByName})
+              </>
+            ) : (
+              <span className="text-slate-600">No released map set of {map.programName} holds a revision of this map.</span>
+            )}
           </p>
         </div>
         <div className="ml-auto flex gap-2">

@@ -1,29 +1,40 @@
 import Link from 'next/link'
 import type { MapDiff } from '@/maps'
 
-/** What this revision changes against the one in the trucks now, largest changes first. */
-export function ChangesSummary(props: { mapId: number; number: number; base: { number: number } | null; changes: MapDiff | null }) {
-  if (!props.base || !props.changes) return <section className="card text-sm">No revision of this map has been released yet; there is nothing to compare with.</section>
+/** What this revision changes against the one of this map in the program's released set, largest changes first. */
+export function ChangesSummary(props: {
+  mapId: number
+  number: number
+  released: { number: number; setId: number; setNumber: number } | null
+  changes: MapDiff | null
+}) {
+  const rel = props.released
+  const setLink = rel && <Link href={`/sets/${rel.setId}`} className="text-accent hover:underline">set {rel.setNumber}</Link>
+  if (!rel) return <section className="card text-sm">No released map set holds a revision of this map; there is nothing in the trucks to compare with.</section>
+  if (rel.number === props.number) return <section className="card text-sm">This revision is in the trucks now, in the released {setLink}.</section>
+  if (!props.changes) return null
   const c = props.changes
   return (
     <section className="card space-y-2">
       <h2 className="font-semibold">
-        Changes against the released r{props.base.number}{' '}
-        <Link href={`/maps/compare?a=${props.mapId}:${props.base.number}&b=${props.mapId}:${props.number}`} className="text-sm font-normal text-accent hover:underline">compare surfaces</Link>
+        Changes against r{rel.number}, in the trucks now in {setLink}{' '}
+        <Link href={`/maps/compare?a=${props.mapId}:${rel.number}&b=${props.mapId}:${props.number}`} className="text-sm font-normal text-accent hover:underline">compare surfaces</Link>
       </h2>
       <p className="text-sm">
         {c.changed.length} of {c.cellCount} cells changed{c.axesDiffer ? ' (breakpoints differ; compared on the released breakpoints)' : ''}
         {c.largestAbsolute && `; largest ${c.largestAbsolute.delta > 0 ? '+' : ''}${c.largestAbsolute.delta.toFixed(0)} N·m at ${c.largestAbsolute.pedalPct} % / ${c.largestAbsolute.speedKmh} km/h`}
       </p>
       {c.changed.length > 0 && (
-        <table className="text-sm" data-testid="review-change-table">
-          <thead className="text-left text-xs uppercase text-slate-500"><tr><th className="pr-4">Pedal %</th><th className="pr-4">km/h</th><th className="pr-4">Released N·m</th><th className="pr-4">This N·m</th><th>Change</th></tr></thead>
-          <tbody>
-            {c.changed.slice(0, 10).map((x) => (
-              <tr key={`${x.row}:${x.col}`}><td>{x.pedalPct}</td><td>{x.speedKmh}</td><td>{x.before.toFixed(0)}</td><td>{x.after.toFixed(0)}</td><td>{x.delta > 0 ? '+' : ''}{x.delta.toFixed(0)}</td></tr>
-            ))}
-          </tbody>
-        </table>
+        <div className="overflow-x-auto">
+          <table className="text-sm" data-testid="review-change-table">
+            <thead className="text-left text-xs uppercase text-slate-500"><tr><th className="pr-4">Pedal %</th><th className="pr-4">km/h</th><th className="pr-4">Released N·m</th><th className="pr-4">This N·m</th><th>Change</th></tr></thead>
+            <tbody>
+              {c.changed.slice(0, 10).map((x) => (
+                <tr key={`${x.row}:${x.col}`}><td>{x.pedalPct}</td><td>{x.speedKmh}</td><td>{x.before.toFixed(0)}</td><td>{x.after.toFixed(0)}</td><td>{x.delta > 0 ? '+' : ''}{x.delta.toFixed(0)}</td></tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       )}
     </section>
   )

@@ -4,20 +4,21 @@ import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { formatTime, shortChecksum } from '@/app/_components/format'
 import { MarkdownNotes } from '@/app/_components/markdown-notes'
-import { SafetyCaution } from '@/app/_components/safety-caution'
-import { gateFor, loadRevisionContext } from '@/app/_lib/review/service'
+import { EDITORS } from '@/app/_lib/auth/roles'
+import { loadRevisionContext } from '@/app/_lib/review/service'
 import { availableActions } from '@/app/_lib/review/states'
 import { STATE_LABELS } from '@/domain/revision-states'
 import { NotFoundError } from '@/app/_lib/http/errors'
-import { currentRelease, listReviewComments, listRevisionEvents } from '@/db/queries/review'
+import { listReviewComments, listRevisionEvents } from '@/db/queries/review'
 import { listReports } from '@/db/queries/reports'
-import { getRevision } from '@/db/queries/revisions'
+import { listSets } from '@/db/queries/sets'
 import { diff, limitsFromVehicle, validate } from '@/maps'
 import { ReportTable } from '@/app/(app)/reports/report-table'
-import { GateChecklist } from './gate-checklist'
+import { releasedRevisionOfMap } from '@/app/(app)/maps/[id]/released-set'
 import { ReviewActions } from './review-actions'
 import { ReviewComments } from './review-comments'
 import { ChangesSummary } from './changes-summary'
+import { SetsHolding } from './sets-holding'
 
 export const metadata = { title: 'Review' }
 
@@ -27,16 +28,16 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
   const ctx = await loadRevisionContext(id).catch((e) => (e instanceof NotFoundError ? null : Promise.reject(e)))
   if (!ctx) notFound()
   const { revision: r, map } = ctx
-  const [gate, reports, comments, events, released] = await Promise.all([
-    gateFor(ctx),
+  const [sets, reports, comments, events, released] = await Promise.all([
+    listSets({ revisionId: r.id }),
     listReports({ revisionId: r.id }),
     listReviewComments({ revisionId: r.id }),
     listRevisionEvents({ revisionId: r.id }),
-    currentRelease(map.id),
+    releasedRevisionOfMap(map),
   ])
-  const base = released && released.revisionId !== r.id ? await getRevision(map.id, released.number) : null
-  const changes = base ? diff(base.table, r.table) : null
+  const changes = released && released.revision.id !== r.id ? diff(released.revision.table, r.table) : null
   const findings = validate(r.table, limitsFromVehicle(map.programParams))
+  const errors = findings.filter((f) => f.severity === 'error').length
   const state = r.state
   const actions = availableActions(state, user, r.authorId)
   return (
@@ -53,18 +54,27 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
           <Link href={`/maps/${map.id}/revisions/${r.number}`} className="text-accent hover:underline">open the map</Link>
         </p>
         <MarkdownNotes text={r.notes} />
+        <p className="text-sm" data-testid="validation-count">
+          {findings.length === 0 ? (
+            'Validation finds nothing.'
+          ) : (
+            <>
+              Validation: {errors} error(s), {findings.length - errors} warning(s) —{' '}
+              <Link href={`/maps/${map.id}/revisions/${r.number}`} className="text-accent hover:underline">see them on the map</Link>
+            </>
+          )}
+        </p>
       </div>
-      <ChangesSummary mapId={map.id} number={r.number} base={released && base ? { number: released.number } : null} changes={changes} />
-      <GateChecklist gate={gate} findingsCount={findings.length} mapId={map.id} number={r.number} programId={map.programId} />
-      {actions.length > 0 && <ReviewActions revisionId={r.id} actions={actions} exceptions={gate.exceptions.map((e) => ({ key: e.key, label: `${e.surface}, ${e.loadCase}: ${e.cells.length} cell(s)` }))} />}
-      {['released', 'retired', 'withdrawn'].includes(state) && (
-        <section className="card space-y-2">
-          <a className="btn-primary" href={`/api/revisions/${r.id}/package`} data-testid="package-link">Download the release package</a>
-          <SafetyCaution />
-        </section>
-      )}
+      <ChangesSummary
+        mapId={map.id}
+        number={r.number}
+        released={released && { number: released.revision.number, setId: released.setId, setNumber: released.setNumber }}
+        changes={changes}
+      />
+      {actions.length > 0 && <ReviewActions revisionId={r.id} actions={actions} />}
+      <SetsHolding revisionId={r.id} kind={map.kind} sets={sets} canMake={EDITORS.includes(user.role)} />
       <section id="reports">
-        <h2 className="mb-2 text-lg font-semibold">Drive reports on this revision</h2>
+        <h2 className="mb-2 text-lg font-semibold">Drive reports on sets holding this revision</h2>
         <ReportTable reports={reports} />
       </section>
       <ReviewComments revisionId={r.id} initial={comments.map((c) => ({ ...c, createdAt: c.createdAt.toISOString() }))} canComment={user.role === 'lead_engineer' || user.role === 'calibration_engineer'} rowAxis={r.table.rowAxis} colAxis={r.table.colAxis} />

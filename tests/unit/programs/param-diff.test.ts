@@ -1,0 +1,62 @@
+import { describe, expect, it } from 'vitest'
+import { chooseVersions, fieldInfo, formatValue, versionDiff } from '@/app/(app)/programs/param-diff'
+
+const params = { axleLayout: '6x4', motorPeakPowerW: 350_000, drivelineEfficiency: 0.93, gearRatios: [3.5, 1], trailer: null }
+const rc = { surfaces: ['wet-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'], marginPct: 10 }
+
+describe('parameter version diff', () => {
+  it('is empty for equal versions', () => {
+    expect(versionDiff({ params, releaseConditions: rc }, { params: { ...params }, releaseConditions: { ...rc } })).toEqual([])
+  })
+
+  it('labels a field from the form definitions and shows it in its display unit', () => {
+    const rows = versionDiff({ params, releaseConditions: rc }, { params: { ...params, motorPeakPowerW: 400_000, drivelineEfficiency: 0.95 }, releaseConditions: rc })
+    expect(rows).toEqual([
+      { path: 'params.drivelineEfficiency', label: 'Driveline efficiency', unit: '%', from: '93 %', to: '95 %' },
+      { path: 'params.motorPeakPowerW', label: 'Motor peak power', unit: 'kW', from: '350 kW', to: '400 kW' },
+    ])
+  })
+
+  it('names a changed gear by its number and keeps the form order', () => {
+    const rows = versionDiff({ params, releaseConditions: rc }, { params: { ...params, axleLayout: '4x2', gearRatios: [3.2, 1] }, releaseConditions: { ...rc, marginPct: 15 } })
+    expect(rows.map((r) => [r.path, r.label, r.from, r.to])).toEqual([
+      ['params.axleLayout', 'Axle layout', '6x4', '4x2'],
+      ['params.gearRatios[0]', 'Gear 1 ratio', '3.5:1', '3.2:1'],
+      ['releaseConditions.marginPct', 'Release check: traction margin', '10 %', '15 %'],
+    ])
+  })
+
+  it('shows surfaces and load cases as whole lists with their labels', () => {
+    const rows = versionDiff({ params, releaseConditions: rc }, { params, releaseConditions: { ...rc, surfaces: ['wet-asphalt', 'ice'], loadCases: ['empty'] } })
+    expect(rows).toEqual([
+      { path: 'releaseConditions.surfaces', label: 'Release check: surfaces', unit: '', from: 'Wet asphalt, Packed snow', to: 'Wet asphalt, Ice' },
+      { path: 'releaseConditions.loadCases', label: 'Release check: load cases', unit: '', from: 'Empty (kerb mass), Laden (gross mass)', to: 'Empty (kerb mass)' },
+    ])
+  })
+
+  it('lists a coupled semitrailer as one row and then each of its fields', () => {
+    const rows = versionDiff({ params, releaseConditions: rc }, { params: { ...params, trailer: { kingpinToAxleM: 7.5, grossMassKg: 34000 } }, releaseConditions: rc })
+    expect(rows.map((r) => [r.path, r.from, r.to])).toEqual([
+      ['params.trailer', 'none', 'coupled'],
+      ['params.trailer.kingpinToAxleM', '—', '7.5 m'],
+      ['params.trailer.grossMassKg', '—', '34000 kg'],
+    ])
+  })
+
+  it('keeps an unknown path as its own label', () => {
+    expect(fieldInfo('params.somethingNew')).toEqual({ label: 'params.somethingNew', unit: '', scale: 1 })
+    expect(formatValue(null, fieldInfo('params.somethingNew'))).toBe('—')
+  })
+})
+
+describe('choosing the versions to compare', () => {
+  it('takes the newest and the one before it by default', () => {
+    expect(chooseVersions([3, 2, 1], null, null)).toEqual({ from: 2, to: 3 })
+    expect(chooseVersions([1], null, null)).toEqual({ from: null, to: 1 })
+  })
+  it('takes what was asked for, and the version before `to` when only `to` was', () => {
+    expect(chooseVersions([4, 3, 2, 1], 1, 4)).toEqual({ from: 1, to: 4 })
+    expect(chooseVersions([4, 3, 2, 1], null, 3)).toEqual({ from: 2, to: 3 })
+    expect(chooseVersions([4, 3, 2, 1], 2, null)).toEqual({ from: 2, to: 4 })
+  })
+})

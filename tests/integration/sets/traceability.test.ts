@@ -115,7 +115,8 @@ describe('acknowledged exceptions are kept with who, when and why', () => {
 
 describe('vehicle parameters are versioned; a set is judged with its own version', () => {
   it('a change needs a reason, makes version 2 with every changed field audited, and leaves older sets on version 1', async () => {
-    const s = await setSetup()
+    // 700 N·m at standstill, about 16.5 kN at the wheels: within the tandem's grip on packed snow, beyond it on ice (μ about 0.1).
+    const s = await setSetup({ drive: { ...SMALL_DRIVE, values: [[100, 0, 0], [400, 350, 200], [700, 600, 300]] } })
     const db = await getDb()
     const [program] = await db.select().from(vehiclePrograms).where(eq(vehiclePrograms.id, s.programId))
     await approve(s, s.driveRevisionId)
@@ -140,10 +141,22 @@ describe('vehicle parameters are versioned; a set is judged with its own version
       expect.arrayContaining([{ path: 'params.emptyMassKg', from: program.params.emptyMassKg, to: 4000 }, expect.objectContaining({ path: 'params.emptyCgHeightM' })]),
     )
 
+    // The gate of the set made before judges with version 1 even now that the program has moved on.
+    const withIce = await call(programRoute.PUT, {
+      method: 'PUT',
+      cookie: s.cookie,
+      params: { id: String(s.programId) },
+      body: { ...body, releaseConditions: { surfaces: ['wet-asphalt', 'packed-snow', 'ice'], loadCases: ['empty', 'laden'], marginPct: 10 }, reason: 'Winter trials add ice' },
+    })
+    expect(withIce.body.newParamVersion).toBe(3)
+    expect(gateMet(await getSetView(onV1, s.leadCookie)).traction).toBe(true)
+    const onV3 = await makeSet(s, { paramVersion: 3 })
+    expect(gateMet(await getSetView(onV3, s.leadCookie)).traction).toBe(false)
+
     const v1 = await getSetView(onV1, s.leadCookie)
     expect(v1.body.set.paramVersion.number).toBe(1)
     expect(v1.body.set.paramVersion.params.emptyMassKg).toBe(program.params.emptyMassKg)
-    const onV2 = await makeSet(s)
+    const onV2 = await makeSet(s, { paramVersion: 2 })
     expect(onV2).not.toBe(onV1)
     expect((await getSetView(onV2, s.leadCookie)).body.set.paramVersion.number).toBe(2)
     // A version can be named; the set it makes is a third combination only if it differs.

@@ -29,6 +29,8 @@ async function settled(logId: number, after?: Date) {
 }
 
 const CSV = generateLog({ seed: 3, durationS: 60, rateHz: 20 }).csv
+/** Five minutes: a wheel spin at launch and two lock-ups at stops. */
+const LONG_CSV = generateLog({ seed: 3, durationS: 300, rateHz: 20 }).csv
 const logAudit = async (reportId: number) => (await listAudit({ entityType: 'drive_report', entityId: reportId, action: 'report.log' })).map((a) => a.action).reverse()
 
 describe('drive logs of a report', () => {
@@ -72,7 +74,7 @@ describe('drive logs of a report', () => {
 
   it('is analysed against the set: occupancy on its drive map, spin predicted on the drive map and lock-up on the regen map', async () => {
     const r = await filedReport()
-    const up = await upload(r.reportId, r.driverCookie, CSV)
+    const up = await upload(r.reportId, r.driverCookie, LONG_CSV)
     const log = await settled(up.body.log.id)
     expect(log.status).toBe('done')
     const analysis = log.analysis as unknown as { occupancy: { kind: string; rowAxis: number[] }; basis: Record<string, unknown> }

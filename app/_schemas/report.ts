@@ -1,7 +1,7 @@
 import { z } from 'zod'
 import { MAX_ID } from './query'
 import { FLAG_SEVERITIES, SEVERITY_LABELS } from '@/domain/report-safety'
-import { LOAD_CASE_IDS, SURFACE_IDS } from '@/physics'
+import { LOAD_CASE_IDS, MAP_KINDS, SURFACE_IDS } from '@/physics'
 import { atMost } from './text'
 
 export { SEVERITY_LABELS }
@@ -21,15 +21,22 @@ const rating = (label: string) =>
   z.number({ error: `${label}: choose a rating from 1 to 5` }).int(`${label}: choose a rating from 1 to 5`).min(1, `${label}: choose a rating from 1 to 5`).max(5, `${label}: choose a rating from 1 to 5`)
 
 export const flagSchema = z.object({
+  /** Which map of the set the point is on; the set must hold that map. */
+  map: z.enum(MAP_KINDS, { error: 'Choose which map of the set the point is on: drive or regen' }),
   pedalPct: z.number({ error: 'Flag pedal must be a number (%)' }).min(0, 'Flag pedal must be 0–100 %').max(100, 'Flag pedal must be 0–100 %'),
   speedKmh: z.number({ error: 'Flag speed must be a number (km/h)' }).min(0, 'Flag speed must not be negative').max(200, 'Flag speed must be at most 200 km/h'),
   what: z.string().trim().min(1, 'Say what happened at the flagged point').max(500, atMost('What happened', 500)),
   severity: z.literal(FLAG_SEVERITIES, { error: 'Severity must be 1, 2, 3 or 4' }),
 })
 
-/** One schema for the report form and the API, so both refuse the same input with the same words. */
+const setIdSchema = z.number({ error: 'Choose the set the vehicle was flashed with' }).int('Choose the set the vehicle was flashed with').positive('Choose the set the vehicle was flashed with').max(MAX_ID, 'Choose the set the vehicle was flashed with')
+
+/**
+ * One schema for the report form and the API, so both refuse the same input with the same words.
+ * `setId` is chosen when the report is filed; an edit must send the same one (only a lead corrects it).
+ */
 export const reportInputSchema = z.object({
-  revisionId: z.number({ error: 'Choose the revision the vehicle was flashed with' }).int().positive().max(MAX_ID, 'Choose the revision the vehicle was flashed with'),
+  setId: setIdSchema,
   drivenOn: z.iso
     .date('Date must be a calendar date (YYYY-MM-DD)')
     .refine((d) => d >= '1970-01-01' && d <= '9999-12-31', 'Date must be from 1970-01-01 to 9999-12-31'),
@@ -61,6 +68,12 @@ export const logColumnMappingSchema = z
 
 /** A comment on a drive report. */
 export const reportCommentSchema = z.object({ body: z.string().trim().min(1, 'The comment is empty').max(5000, atMost('The comment', 5000)) })
+
+/** A lead moves a report to the set the truck really ran (same program), saying why. */
+export const reportSetCorrectionSchema = z.object({
+  setId: setIdSchema,
+  reason: z.string().trim().min(1, 'Say why the report belongs to that set (e.g. what the vehicle reported)').max(2000, atMost('The reason', 2000)),
+})
 
 export const resolveSafetySchema = z.object({
   comment: z.string().trim().min(1, 'Say how the safety concern was resolved').max(5000, atMost('The comment', 5000)),

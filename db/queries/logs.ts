@@ -1,8 +1,9 @@
-import { asc, eq } from 'drizzle-orm'
+import { and, asc, eq } from 'drizzle-orm'
 import { getDb } from '../client'
 import type { LogStatus } from '../../domain/log-statuses'
 import type { AnalysisResult } from '../../physics/drive-log/types'
-import { driveLogs } from '../schema'
+import { driveLogs, driveReports } from '../schema'
+import { recordAudit } from './audit'
 
 const columns = {
   id: driveLogs.id,
@@ -22,6 +23,40 @@ export async function createLog(input: { reportId: number; objectKey: string; fi
   const db = await getDb()
   const [row] = await db.insert(driveLogs).values({ ...input, status: 'uploaded' }).returning(columns)
   return row
+}
+
+type LogInput = { reportId: number; objectKey: string; fileName: string; sizeBytes: number; mapping: Record<string, string> }
+
+/**
+ * A driver's upload, recorded with its audit row, unless a lead engineer has read the report
+ * meanwhile: the report row is locked first, so a read and an upload cannot cross. Null when read.
+ */
+export async function addLogUnlessRead(input: LogInput, actorId: number) {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const [report] = await tx.select({ leadReadAt: driveReports.leadReadAt }).from(driveReports).where(eq(driveReports.id, input.reportId)).for('update')
+    if (!report || report.leadReadAt) return null
+    const [row] = await tx.insert(driveLogs).values({ ...input, status: 'uploaded' }).returning(columns)
+    await recordAudit({ actorId, action: 'report.log-upload', entityType: 'drive_report', entityId: input.reportId, details: { logId: row.id, fileName: row.fileName, sizeBytes: row.sizeBytes } }, tx)
+    return row
+  })
+}
+
+/**
+ * Remove a log of a report a lead has not read yet, with its audit row (what was removed, and
+ * the storage key its file had). The caller deletes the stored file after. 'read' when read.
+ */
+export async function removeLogUnlessRead(logId: number, reportId: number, actorId: number) {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const [report] = await tx.select({ leadReadAt: driveReports.leadReadAt }).from(driveReports).where(eq(driveReports.id, reportId)).for('update')
+    if (!report) return null
+    if (report.leadReadAt) return 'read' as const
+    const [row] = await tx.delete(driveLogs).where(and(eq(driveLogs.id, logId), eq(driveLogs.reportId, reportId))).returning(columns)
+    if (!row) return null
+    await recordAudit({ actorId, action: 'report.log-remove', entityType: 'drive_report', entityId: reportId, details: { logId, fileName: row.fileName, sizeBytes: row.sizeBytes, status: row.status, objectKey: row.objectKey } }, tx)
+    return row
+  })
 }
 
 export async function listLogs(reportId: number) {

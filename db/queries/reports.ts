@@ -4,6 +4,7 @@ import { getDb, type Db } from '../client'
 import { SAFETY_SEVERITY } from '../../domain/report-safety'
 import type { SurfaceId } from '../../physics/surfaces'
 import type { LoadCase } from '../../physics/vehicle'
+import { loadCasesFor } from '../../physics/load-cases'
 import { driveReports, mapRevisions, maps, mapSets, paramVersions, reportComments, users, vehiclePrograms, type ReportFlag, type ReportRatings } from '../schema'
 import { recordAudit } from './audit'
 import { enqueueMail, type OutgoingMail } from './mail'
@@ -39,10 +40,12 @@ const columns = {
   paramVersion: paramVersions.number,
   driveRevisionId: mapSets.driveRevisionId,
   driveNumber: driveRev.number,
+  driveChecksum: driveRev.checksum,
   driveMapId: driveMap.id,
   driveMapName: driveMap.name,
   regenRevisionId: mapSets.regenRevisionId,
   regenNumber: regenRev.number,
+  regenChecksum: regenRev.checksum,
   regenMapId: regenMap.id,
   regenMapName: regenMap.name,
   programId: vehiclePrograms.id,
@@ -216,6 +219,83 @@ export async function listReportComments(reportId: number) {
     .innerJoin(users, eq(users.id, reportComments.authorId))
     .where(eq(reportComments.reportId, reportId))
     .orderBy(asc(reportComments.createdAt))
+}
+
+/** One map of a set as the report form shows it: which map, which revision, and its checksum to compare with the vehicle. */
+export interface SetChoicePart {
+  mapId: number
+  mapName: string
+  revisionId: number
+  number: number
+  checksum: string
+}
+
+/** A set a driver can file a report against, with what the form needs to show and check it. */
+export interface SetChoice {
+  id: number
+  number: number
+  programId: number
+  programName: string
+  paramVersion: number
+  /** The load cases its parameter version has. */
+  loadCases: LoadCase[]
+  /** It is the program's current release. */
+  released: boolean
+  drive: SetChoicePart | null
+  regen: SetChoicePart | null
+}
+
+/** Sets for the report form, newest first (of one program, or the ones asked for by id). */
+export async function setChoices(filter: { ids?: number[]; programId?: number } = {}): Promise<SetChoice[]> {
+  const db = await getDb()
+  const rows = await db
+    .select({
+      id: mapSets.id,
+      number: mapSets.number,
+      programId: mapSets.programId,
+      programName: vehiclePrograms.name,
+      paramVersion: paramVersions.number,
+      params: paramVersions.params,
+      released: sql<boolean>`exists (select 1 from set_releases sr where sr.set_id = ${mapSets.id} and sr.retired_at is null and sr.withdrawn_at is null)`,
+      driveRevisionId: mapSets.driveRevisionId,
+      driveNumber: driveRev.number,
+      driveChecksum: driveRev.checksum,
+      driveMapId: driveMap.id,
+      driveMapName: driveMap.name,
+      regenRevisionId: mapSets.regenRevisionId,
+      regenNumber: regenRev.number,
+      regenChecksum: regenRev.checksum,
+      regenMapId: regenMap.id,
+      regenMapName: regenMap.name,
+    })
+    .from(mapSets)
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, mapSets.programId))
+    .innerJoin(paramVersions, eq(paramVersions.id, mapSets.paramVersionId))
+    .leftJoin(driveRev, eq(driveRev.id, mapSets.driveRevisionId))
+    .leftJoin(driveMap, eq(driveMap.id, driveRev.mapId))
+    .leftJoin(regenRev, eq(regenRev.id, mapSets.regenRevisionId))
+    .leftJoin(regenMap, eq(regenMap.id, regenRev.mapId))
+    .where(
+      and(
+        filter.ids ? (filter.ids.length ? inArray(mapSets.id, filter.ids) : sql`false`) : undefined,
+        filter.programId ? eq(mapSets.programId, filter.programId) : undefined,
+      ),
+    )
+    .orderBy(desc(mapSets.createdAt), desc(mapSets.id))
+    .limit(500)
+  const part = (revisionId: number | null, number: number | null, checksum: string | null, mapId: number | null, mapName: string | null): SetChoicePart | null =>
+    revisionId !== null && number !== null && checksum !== null && mapId !== null && mapName !== null ? { revisionId, number, checksum, mapId, mapName } : null
+  return rows.map((r) => ({
+    id: r.id,
+    number: r.number,
+    programId: r.programId,
+    programName: r.programName,
+    paramVersion: r.paramVersion,
+    loadCases: loadCasesFor(r.params),
+    released: Boolean(r.released),
+    drive: part(r.driveRevisionId, r.driveNumber, r.driveChecksum, r.driveMapId, r.driveMapName),
+    regen: part(r.regenRevisionId, r.regenNumber, r.regenChecksum, r.regenMapId, r.regenMapName),
+  }))
 }
 
 /** Addresses of everyone who wrote a revision of the map (its engineers). */

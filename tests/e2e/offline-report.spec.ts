@@ -1,11 +1,11 @@
 import { expect, test, type Page } from '@playwright/test'
 import { DEMO, openMapByName, signIn } from './helpers'
 
-/** Open a new report on the demo's site drive map and fill what the form requires. */
+/** Open a new report from the demo's site drive map (its program), pick a set and fill what the form requires. */
 async function fillReport(page: Page, route: string) {
   await openMapByName(page, 'Site drive')
   await page.getByRole('link', { name: 'File a drive report' }).click()
-  await page.getByLabel('Revision flashed').selectOption({ index: 1 })
+  await page.getByLabel('Set flashed').selectOption({ index: 1 })
   await page.getByLabel('Vehicle unit').fill('BX-09')
   await page.getByLabel('Route or course').fill(route)
   await page.getByLabel('Weather').fill('fog')

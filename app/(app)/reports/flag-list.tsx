@@ -6,15 +6,35 @@ import type { ReportFormIn } from './report-form'
 
 type Form = UseFormReturn<ReportFormIn, unknown, z.output<typeof reportInputSchema>>
 
-/** The flagged points, each with what happened and how bad; severity 4 opens a safety concern. */
-export function FlagList(props: { form: Form; fields: FieldArrayWithId<ReportFormIn, 'flags'>[]; onRemove: (i: number) => void; onAdd: () => void }) {
+const MAP_LABELS = { drive: 'Drive map', regen: 'Regen map' } as const
+
+/** The flagged points, each on a map of the set, with what happened and how bad; severity 4 opens a safety concern. */
+export function FlagList(props: { form: Form; fields: FieldArrayWithId<ReportFormIn, 'flags'>[]; maps: readonly ('drive' | 'regen')[]; onRemove: (i: number) => void; onAdd: () => void }) {
   const { register, formState } = props.form
   return (
     <div className="space-y-2">
       {props.fields.map((f, i) => {
         const e = formState.errors.flags?.[i]
         return (
-          <div key={f.id} className="grid grid-cols-2 gap-2 rounded-md border border-line p-2 sm:grid-cols-5" data-testid={`flag-${i}`}>
+          <div key={f.id} className="grid grid-cols-2 gap-2 rounded-md border border-line p-2 sm:grid-cols-6" data-testid={`flag-${i}`}>
+            <div>
+              <label htmlFor={`flag-${i}-map`} className="label">Map</label>
+              <select id={`flag-${i}-map`} className="field" {...register(`flags.${i}.map`)}>
+                {/* A flag from a draft older than sets names no map; one on a map this set lacks stays visible so the driver can move it. */}
+                {!f.map && <option value="">Choose…</option>}
+                {(['drive', 'regen'] as const).filter((k) => props.maps.includes(k) || f.map === k).map((k) => (
+                  <option key={k} value={k}>{MAP_LABELS[k]}</option>
+                ))}
+              </select>
+            </div>
+            <div>
+              <label htmlFor={`flag-${i}-severity`} className="label">Severity</label>
+              <select id={`flag-${i}-severity`} className="field" {...register(`flags.${i}.severity`, { valueAsNumber: true })}>
+                {Object.entries(SEVERITY_LABELS).map(([n, label]) => (
+                  <option key={n} value={n}>{n} — {label}</option>
+                ))}
+              </select>
+            </div>
             <div>
               <label htmlFor={`flag-${i}-pedal`} className="label">Pedal %</label>
               <input id={`flag-${i}-pedal`} inputMode="decimal" className="field" {...register(`flags.${i}.pedalPct`, { valueAsNumber: true })} />
@@ -27,15 +47,7 @@ export function FlagList(props: { form: Form; fields: FieldArrayWithId<ReportFor
               <label htmlFor={`flag-${i}-what`} className="label">What happened</label>
               <input id={`flag-${i}-what`} className="field" {...register(`flags.${i}.what`)} />
             </div>
-            <div>
-              <label htmlFor={`flag-${i}-severity`} className="label">Severity</label>
-              <select id={`flag-${i}-severity`} className="field" {...register(`flags.${i}.severity`, { valueAsNumber: true })}>
-                {Object.entries(SEVERITY_LABELS).map(([n, label]) => (
-                  <option key={n} value={n}>{n} — {label}</option>
-                ))}
-              </select>
-            </div>
-            {e && <p className="error-text col-span-full">{e.what?.message ?? e.pedalPct?.message ?? e.speedKmh?.message ?? e.severity?.message}</p>}
+            {e && <p className="error-text col-span-full">{e.map?.message ?? e.what?.message ?? e.pedalPct?.message ?? e.speedKmh?.message ?? e.severity?.message}</p>}
             <button type="button" className="text-left text-xs text-danger underline col-span-full" onClick={() => props.onRemove(i)}>Remove this flag</button>
           </div>
         )

@@ -16,7 +16,7 @@ function lenient<Shape extends Record<string, z.ZodType>>(shape: Shape) {
 }
 
 const draftValuesSchema = lenient({
-  revisionId: z.number(),
+  setId: z.number(),
   drivenOn: z.string(),
   vehicleUnit: z.string(),
   route: z.string(),
@@ -28,15 +28,15 @@ const draftValuesSchema = lenient({
   trailer: z.boolean(),
   ratings: z.partialRecord(z.enum(RATING_KEYS), z.number()),
   comments: z.string(),
-  flags: z.array(lenient({ pedalPct: z.number(), speedKmh: z.number(), what: z.string(), severity: flagSchema.shape.severity })),
+  flags: z.array(lenient({ map: flagSchema.shape.map, pedalPct: z.number(), speedKmh: z.number(), what: z.string(), severity: flagSchema.shape.severity })),
 })
 
 export const reportDraftSchema = lenient({
   /** Sent as the Idempotency-Key: filing the same draft twice files one report. */
   id: z.string().max(100),
   values: draftValuesSchema,
-  mapId: z.number().int().positive(),
-  revisionNumber: z.number().int().positive(),
+  /** The program chosen before its set (a draft from before sets kept mapId and revisionNumber: dropped). */
+  programId: z.number().int().positive(),
   savedAt: z.string(),
 })
 

@@ -9,7 +9,7 @@ import type { z } from 'zod'
 import { api, ApiError, newDraftId, NoAnswerError } from '@/app/_components/api-client'
 import { reportInputSchema } from '@/app/_schemas/report'
 import { loadCasesFor } from '@/physics/load-cases'
-import { RevisionPicker, type MapOption } from './revision-picker'
+import { SetPicker, SetSummary, type SetChoice } from './set-picker'
 import { FlagGrid } from './flag-grid'
 import { FlagList } from './flag-list'
 import { ConditionsFields } from './conditions-fields'
@@ -38,18 +38,20 @@ const subscribeOnline = (cb: () => void) => {
 const useOnline = () => useSyncExternalStore(subscribeOnline, () => navigator.onLine, () => true)
 
 export function ReportForm(props: {
-  maps: MapOption[]
-  loadCases: Record<number, string[]>
-  initialMapId?: number
-  /** Editing an existing report: its id and current values. */
-  edit?: { reportId: number; values: ReportFormIn; revisionNumber: number }
+  sets: SetChoice[]
+  /** Preselected set (a "drive this set" link: /reports/new?set=<id>) or program (?map=<id> of one of its maps). */
+  initialSetId?: number
+  initialProgramId?: number
+  /** Editing an existing report: its id and current values; its set is fixed and shown read-only. */
+  edit?: { reportId: number; values: ReportFormIn; set: SetChoice }
 }) {
   const reportId = props.edit?.reportId
   const router = useRouter()
   // Rendered in the browser only (see report-form-loader), so the unsent draft can seed the initial state.
   const { restored: draft, save: saveDraft, clear: clearDraft } = useLocalDraft(reportDraftKey(reportId), reportDraftSchema)
-  const [mapId, setMapId] = useState<number | undefined>(draft?.mapId ?? props.initialMapId)
-  const [revisionNumber, setRevisionNumber] = useState<number | undefined>(draft?.revisionNumber ?? props.edit?.revisionNumber)
+  // A set named in the link wins over the draft's: the driver followed a link to drive that set.
+  const initialSet = props.edit?.set ?? props.sets.find((s) => s.id === (props.initialSetId ?? draft?.values?.setId))
+  const [programId, setProgramId] = useState<number | undefined>(initialSet?.programId ?? draft?.programId ?? props.initialProgramId)
   const [restored, setRestored] = useState<string | null>(draft?.savedAt ?? null)
   const [serverError, setServerError] = useState<{ text: string; reportId?: number } | null>(null)
   const [noAnswer, setNoAnswer] = useState<NoAnswer>(null)
@@ -61,18 +63,22 @@ export function ReportForm(props: {
     defaultValues: {
       ...(props.edit?.values ?? { drivenOn: today(), trailer: false, flags: [], comments: '', payloadKg: 0, loadCase: 'empty', surface: 'dry-asphalt' }),
       ...draft?.values,
+      ...(initialSet ? { setId: initialSet.id } : {}),
     },
   })
-  const { control, handleSubmit, setValue, resetField, reset, formState } = form
+  const { control, handleSubmit, setValue, reset, formState } = form
   const flags = useFieldArray({ control, name: 'flags' })
   const values = useWatch({ control })
-  const revisionId = values.revisionId
-  const map = props.maps.find((m) => m.id === mapId)
+  const set = props.edit?.set ?? props.sets.find((s) => s.id === values.setId)
+  // Which of the set's maps the tap grid shows; new flags go on that map.
+  const [gridChoice, setGridChoice] = useState<'drive' | 'regen'>('drive')
+  const gridMap = set && !set[gridChoice] ? (gridChoice === 'drive' ? 'regen' : 'drive') : gridChoice
+  const gridPart = set?.[gridMap] ?? null
 
   // Keep saving the form in the browser as the driver types.
   useEffect(() => {
-    if (formState.isDirty || mapId) saveDraft({ id: draftId, values, mapId, revisionNumber, savedAt: new Date().toISOString() })
-  }, [values, mapId, revisionNumber, formState.isDirty, saveDraft, draftId])
+    if (formState.isDirty || programId) saveDraft({ id: draftId, values, programId, savedAt: new Date().toISOString() })
+  }, [values, programId, formState.isDirty, saveDraft, draftId])
 
   const submit = useMutation({
     // Not the default 'online' mode, which pauses a send while offline and leaves the button on
@@ -82,7 +88,7 @@ export function ReportForm(props: {
       setServerError(null)
       setNoAnswer(null)
       // Kept before sending, so a reload after a lost answer sends the same draft id again.
-      saveDraft({ id: draftId, values, mapId, revisionNumber, savedAt: new Date().toISOString() })
+      saveDraft({ id: draftId, values, programId, savedAt: new Date().toISOString() })
       return reportId
         ? api<{ report: { id: number } }>(`/api/reports/${reportId}`, { method: 'PUT', json: body, timeoutMs: SEND_TIMEOUT_MS })
         : api<{ report: { id: number } }>('/api/reports', { method: 'POST', json: body, headers: { 'idempotency-key': draftId }, timeoutMs: SEND_TIMEOUT_MS })
@@ -108,32 +114,52 @@ export function ReportForm(props: {
       )}
       <section className="card space-y-3">
         <h2 className="font-semibold">What you drove</h2>
-        <RevisionPicker
-          maps={props.maps}
-          mapId={mapId}
-          revisionId={revisionId}
-          onMap={(id) => {
-            setMapId(id)
-            setRevisionNumber(undefined)
-            resetField('revisionId')
-          }}
-          onRevision={(id, n) => {
-            setRevisionNumber(n)
-            setValue('revisionId', id, { shouldDirty: true, shouldValidate: true })
-          }}
-          error={formState.errors.revisionId?.message}
-        />
+        {props.edit ? (
+          <SetSummary set={props.edit.set} fixed />
+        ) : (
+          <SetPicker
+            sets={props.sets}
+            programId={programId}
+            setId={values.setId}
+            onProgram={(id) => {
+              setProgramId(id)
+              // Empty until a set of this program is chosen: NaN, as an emptied number input holds (the schema refuses it).
+              if (set?.programId !== id) setValue('setId', NaN, { shouldDirty: true })
+            }}
+            onSet={(id) => setValue('setId', id, { shouldDirty: true, shouldValidate: true })}
+            error={formState.errors.setId?.message}
+          />
+        )}
       </section>
-      <ConditionsFields form={form} loadCases={(map && props.loadCases[map.programId]) || loadCasesFor({ trailer: null })} />
+      <ConditionsFields form={form} loadCases={set?.loadCases ?? loadCasesFor({ trailer: null })} />
       <RatingsFields form={form} />
       <section className="card space-y-3">
         <h2 className="font-semibold">Points on the map</h2>
-        {mapId && revisionNumber ? (
-          <FlagGrid mapId={mapId} revisionNumber={revisionNumber} flagged={values.flags?.map((f) => ({ pedalPct: f?.pedalPct ?? -1, speedKmh: f?.speedKmh ?? -1 })) ?? []} onPick={(p, s) => flags.append({ pedalPct: p, speedKmh: s, what: '', severity: 2 })} />
+        {set && gridPart ? (
+          <>
+            {set.drive && set.regen && (
+              <div role="radiogroup" aria-label="Map to flag on" className="flex flex-wrap gap-2 text-sm">
+                {(['drive', 'regen'] as const).map((k) => (
+                  <label key={k} className={`btn ${gridMap === k ? 'bg-accent-soft font-semibold' : ''}`}>
+                    <input type="radio" className="sr-only" name="grid-map" checked={gridMap === k} onChange={() => setGridChoice(k)} />
+                    {k === 'drive' ? 'Drive map' : 'Regen map'} ({set[k]!.mapName} r{set[k]!.number})
+                  </label>
+                ))}
+              </div>
+            )}
+            <FlagGrid
+              key={gridMap}
+              kind={gridMap}
+              mapId={gridPart.mapId}
+              revisionNumber={gridPart.number}
+              flagged={(values.flags ?? []).filter((f) => f?.map === gridMap).map((f) => ({ pedalPct: f?.pedalPct ?? -1, speedKmh: f?.speedKmh ?? -1 }))}
+              onPick={(p, s) => flags.append({ map: gridMap, pedalPct: p, speedKmh: s, what: '', severity: 2 })}
+            />
+          </>
         ) : (
-          <p className="text-sm text-slate-500">Choose the revision to flag points on its map.</p>
+          <p className="text-sm text-slate-500">Choose the set to flag points on its maps.</p>
         )}
-        <FlagList form={form} fields={flags.fields} onRemove={flags.remove} onAdd={() => flags.append({ pedalPct: 0, speedKmh: 0, what: '', severity: 2 })} />
+        <FlagList form={form} fields={flags.fields} maps={set ? (['drive', 'regen'] as const).filter((k) => set[k]) : ['drive', 'regen']} onRemove={flags.remove} onAdd={() => flags.append({ map: gridMap, pedalPct: 0, speedKmh: 0, what: '', severity: 2 })} />
       </section>
       {!online && !noAnswer && (
         <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">You are offline. Keep writing: the report is kept on this device until you send it.</p>

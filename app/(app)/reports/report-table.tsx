@@ -11,6 +11,11 @@ export function SafetyBadge({ safety }: { safety: SafetyState }) {
   return null
 }
 
+/** "Site drive r2 · Site regen r1 · parameters v1" */
+export function setParts(r: Pick<ReportRow, 'driveMapName' | 'driveNumber' | 'regenMapName' | 'regenNumber' | 'paramVersion'>): string {
+  return [r.driveMapName && `${r.driveMapName} r${r.driveNumber}`, r.regenMapName && `${r.regenMapName} r${r.regenNumber}`, `parameters v${r.paramVersion}`].filter(Boolean).join(' · ')
+}
+
 export function ReportTable({ reports }: { reports: ReportRow[] }) {
   if (reports.length === 0) return <p className="text-slate-600">No drive reports.</p>
   return (
@@ -19,7 +24,7 @@ export function ReportTable({ reports }: { reports: ReportRow[] }) {
         <thead className="bg-slate-50 text-left text-xs uppercase text-slate-600">
           <tr>
             <th className="px-3 py-2">Date</th>
-            <th className="px-3 py-2">Map and revision</th>
+            <th className="px-3 py-2">Set</th>
             <th className="px-3 py-2">Driver</th>
             <th className="px-3 py-2">Surface, load</th>
             <th className="px-3 py-2">Flags</th>
@@ -30,7 +35,10 @@ export function ReportTable({ reports }: { reports: ReportRow[] }) {
           {reports.map((r) => (
             <tr key={r.id} className="border-t border-line" data-testid={`report-row-${r.id}`}>
               <td className="px-3 py-2 whitespace-nowrap">{r.drivenOn}</td>
-              <td className="px-3 py-2">{r.programName} · {r.mapName} r{r.revisionNumber}</td>
+              <td className="px-3 py-2">
+                <Link href={`/sets/${r.setId}`} className="hover:underline">{r.programName} · set {r.setNumber}</Link>
+                <span className="block text-xs text-slate-600">{setParts(r)}</span>
+              </td>
               <td className="px-3 py-2">{r.driverName}</td>
               <td className="px-3 py-2">{surfaceLabel(r.surface)}, {r.loadCase}</td>
               <td className="px-3 py-2">{r.flags.length} <SafetyBadge safety={r.safety} /></td>

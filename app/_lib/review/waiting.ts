@@ -2,7 +2,7 @@ import 'server-only'
 import type { WaitingItem } from '@/app/_components/waiting-list'
 import { revisionsInState } from '@/db/queries/review'
 import { listReports } from '@/db/queries/reports'
-import { revisionsAwaitingDrive, unreadReportsOf } from '@/db/queries/tasks'
+import { setsAwaitingDrive, unreadReportsOf } from '@/db/queries/tasks'
 import { limitsFromVehicle, validate } from '@/maps'
 import { listLatestRevisions } from '@/db/queries/maps'
 import type { SessionUser } from '../auth/session'
@@ -28,7 +28,7 @@ export async function waitingFor(user: SessionUser): Promise<WaitingBox[]> {
       return [
         { title: 'Revisions to review', items: queue.filter((r) => r.authorId !== user.id).map((r) => rev(r, `“${r.message}” by ${r.authorName}`)), empty: 'Nothing waits for your review.', testId: 'waiting-review' },
         { title: 'Approved, ready to release', items: approved.map((r) => rev(r)), empty: 'No approved revision waits.', testId: 'waiting-release' },
-        { title: 'Open safety concerns', items: safety.map((r) => ({ href: `/reports/${r.id}`, label: `${r.mapName} r${r.revisionNumber}, ${r.drivenOn}`, detail: r.driverName })), empty: 'No open safety concern.', testId: 'waiting-safety' },
+        { title: 'Open safety concerns', items: safety.map((r) => ({ href: `/reports/${r.id}`, label: `${r.programName} · set ${r.setNumber}, ${r.drivenOn}`, detail: r.driverName })), empty: 'No open safety concern.', testId: 'waiting-safety' },
       ]
     }
     case 'calibration_engineer': {
@@ -39,10 +39,10 @@ export async function waitingFor(user: SessionUser): Promise<WaitingBox[]> {
       ]
     }
     case 'test_driver': {
-      const [toDrive, drafts] = await Promise.all([revisionsAwaitingDrive(), unreadReportsOf(user.id)])
+      const [toDrive, drafts] = await Promise.all([setsAwaitingDrive(), unreadReportsOf(user.id)])
       return [
-        { title: 'Revisions waiting for a test drive', items: toDrive.map((r) => ({ href: `/reports/new?map=${r.mapId}`, label: `${r.programName} · ${r.mapName} r${r.number}` })), empty: 'No revision waits for a drive.', testId: 'waiting-drive' },
-        { title: 'Your reports not yet read by a lead', items: drafts.map((r) => ({ href: `/reports/${r.id}`, label: `${r.mapName} r${r.number}, ${r.drivenOn}` })), empty: 'All your reports have been read.', testId: 'waiting-own-reports' },
+        { title: 'Sets waiting for a test drive', items: toDrive.map((s) => ({ href: `/sets/${s.id}`, label: `${s.programName} · set ${s.number}`, detail: s.note || undefined })), empty: 'No set waits for a drive.', testId: 'waiting-drive' },
+        { title: 'Your reports not yet read by a lead', items: drafts.map((r) => ({ href: `/reports/${r.id}`, label: `${r.programName} · set ${r.setNumber}, ${r.drivenOn}` })), empty: 'All your reports have been read.', testId: 'waiting-own-reports' },
       ]
     }
     default:

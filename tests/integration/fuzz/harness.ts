@@ -158,7 +158,7 @@ export function expectWellFormedError(status: number, body: unknown, sent: strin
 
 /** Every table's row count and content hash (mail by recipient and text: the sender updates its status in the background). */
 export async function snapshot(): Promise<Record<string, string>> {
-  const tables = ['users', 'vehicle_programs', 'maps', 'map_revisions', 'audit_log', 'drive_reports', 'drive_logs', 'report_comments', 'revision_events', 'review_comments', 'releases', 'auth_tokens']
+  const tables = ['users', 'vehicle_programs', 'maps', 'map_revisions', 'audit_log', 'drive_reports', 'drive_logs', 'report_comments', 'revision_events', 'review_comments', 'param_versions', 'map_sets', 'set_releases', 'auth_tokens']
   const parts = tables.map((t) => `select '${t}' as t, count(*)::int as n, coalesce(md5(string_agg(row_to_json(x)::text, '|' order by x.id)), '') as h from ${t} x`)
   parts.push(`select 'mail_outbox' as t, count(*)::int as n, coalesce(md5(string_agg(json_build_array(x.id, x."to", x.subject, x.text)::text, '|' order by x.id)), '') as h from mail_outbox x`)
   const db = await getDb()

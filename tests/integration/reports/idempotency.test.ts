@@ -27,17 +27,17 @@ async function post<P>(handler: Handler<P>, cookie: string, params: P, body: unk
   return { status: res.status, replayed: res.headers.get('idempotency-replayed'), body: await res.json() }
 }
 
-const SAFETY = { flags: [{ pedalPct: 0, speedKmh: 40, what: 'drive axle locked on lift-off', severity: 4 }] }
+const SAFETY = { flags: [{ map: 'regen', pedalPct: 0, speedKmh: 40, what: 'drive axle locked on lift-off', severity: 4 }] }
 const safetyMailsFor = async (reportId: number) => (await listOutbox(1000)).filter((m) => m.text.includes(`/reports/${reportId}`)).length
 
 describe('filing the same draft twice', () => {
   it('creates one report and one safety e-mail; the repeat answers 201 with the first report', async () => {
-    const { revisionId } = await filedReport()
+    const { setId } = await filedReport()
     const driver = await makeUser('test_driver')
     const cookie = await sessionCookie(driver)
     const key = randomUUID()
-    const first = await post(reportsRoute.POST, cookie, {}, reportBody(revisionId, SAFETY), key)
-    const again = await post(reportsRoute.POST, cookie, {}, reportBody(revisionId, SAFETY), key)
+    const first = await post(reportsRoute.POST, cookie, {}, reportBody(setId, SAFETY), key)
+    const again = await post(reportsRoute.POST, cookie, {}, reportBody(setId, SAFETY), key)
     expect(first.status).toBe(201)
     expect(again.status).toBe(201)
     expect(again.replayed).toBe('true')
@@ -47,11 +47,11 @@ describe('filing the same draft twice', () => {
   })
 
   it('lets only one of several concurrent repeats create', async () => {
-    const { revisionId } = await filedReport()
+    const { setId } = await filedReport()
     const driver = await makeUser('test_driver')
     const cookie = await sessionCookie(driver)
     const key = randomUUID()
-    const all = await Promise.all([1, 2, 3, 4].map(() => post(reportsRoute.POST, cookie, {}, reportBody(revisionId, SAFETY), key)))
+    const all = await Promise.all([1, 2, 3, 4].map(() => post(reportsRoute.POST, cookie, {}, reportBody(setId, SAFETY), key)))
     expect(all.map((r) => r.status)).toEqual([201, 201, 201, 201])
     expect(new Set(all.map((r) => r.body.report.id)).size).toBe(1)
     expect(all.filter((r) => r.replayed !== 'true')).toHaveLength(1)
@@ -60,26 +60,26 @@ describe('filing the same draft twice', () => {
   })
 
   it('refuses the same key with other content (422) and creates nothing; keys are per user', async () => {
-    const { revisionId } = await filedReport()
+    const { setId } = await filedReport()
     const driver = await makeUser('test_driver')
     const cookie = await sessionCookie(driver)
     const key = randomUUID()
-    const first = await post(reportsRoute.POST, cookie, {}, reportBody(revisionId), key)
-    const changed = await post(reportsRoute.POST, cookie, {}, reportBody(revisionId, { comments: 'changed my mind' }), key)
+    const first = await post(reportsRoute.POST, cookie, {}, reportBody(setId), key)
+    const changed = await post(reportsRoute.POST, cookie, {}, reportBody(setId, { comments: 'changed my mind' }), key)
     expect(changed.status).toBe(422)
     expect(changed.body.error.code).toBe('idempotency_key_reused')
     expect(changed.body.error.details.resultId).toBe(first.body.report.id)
     expect(await listReports({ driverId: driver.id })).toHaveLength(1)
     // Another driver who happens to send the same key files their own report.
     const other = await makeUser('test_driver')
-    const theirs = await post(reportsRoute.POST, await sessionCookie(other), {}, reportBody(revisionId), key)
+    const theirs = await post(reportsRoute.POST, await sessionCookie(other), {}, reportBody(setId), key)
     expect(theirs.status).toBe(201)
     expect(theirs.body.report.id).not.toBe(first.body.report.id)
   })
 
   it('refuses a malformed key with a 400 that names the header', async () => {
-    const { revisionId, driverCookie } = await filedReport()
-    const res = await post(reportsRoute.POST, driverCookie, {}, reportBody(revisionId), 'no spaces allowed here')
+    const { setId, driverCookie } = await filedReport()
+    const res = await post(reportsRoute.POST, driverCookie, {}, reportBody(setId), 'no spaces allowed here')
     expect(res.status).toBe(400)
     expect(res.body.error.message).toMatch(/Idempotency-Key/)
   })

@@ -9,8 +9,7 @@ import * as catchAll from '@/app/api/[...path]/route'
 import { demoTipper } from '@/db/demo/programs'
 import { call, makeUser, sessionCookie } from '@/tests/support/api'
 import { programAndMap } from '@/tests/support/fixtures'
-import { reportBody } from '@/tests/support/report-fixtures'
-import { getRevision } from '@/db/queries/revisions'
+import { programWithSet, reportBody } from '@/tests/support/report-fixtures'
 
 describe('bad values get a 400 that says what is wrong', () => {
   it('out-of-range dates in audit filters and report dates', async () => {
@@ -22,11 +21,10 @@ describe('bad values get a 400 that says what is wrong', () => {
     }
     const ok = await call(auditRoute.GET, { cookie: admin, path: '/api/audit?since=2024-01-01&until=2030-01-01T12:00:00Z' })
     expect(ok.status).toBe(200)
-    const { mapId } = await programAndMap()
-    const revisionId = (await getRevision(mapId, 1))!.id
+    const { setId } = await programWithSet()
     const driver = await sessionCookie(await makeUser('test_driver'))
     for (const drivenOn of ['0000-01-01', '275760-09-13']) {
-      const res = await call(reportsRoute.POST, { method: 'POST', cookie: driver, body: reportBody(revisionId, { drivenOn }) })
+      const res = await call(reportsRoute.POST, { method: 'POST', cookie: driver, body: reportBody(setId, { drivenOn }) })
       expect(`${drivenOn} → ${res.status}`).toBe(`${drivenOn} → 400`)
     }
   })

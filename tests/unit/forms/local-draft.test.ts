@@ -91,18 +91,22 @@ describe('the drive report draft', () => {
     const s = memoryStorage()
     // What the form stores mid-way: an emptied number input is NaN, which JSON writes as null.
     const stored = {
-      values: { vehicleUnit: 'BX-07', route: '', ambientC: null, surface: 'mud', ratings: { launch: 3 }, flags: [{ pedalPct: 60, speedKmh: null, what: '', severity: 2 }] },
-      mapId: 4,
-      revisionNumber: 2,
+      values: { setId: 9, vehicleUnit: 'BX-07', route: '', ambientC: null, surface: 'mud', ratings: { launch: 3 }, flags: [{ map: 'regen', pedalPct: 60, speedKmh: null, what: '', severity: 2 }, { map: 'sideways', pedalPct: 10, what: 'x', severity: 1 }] },
+      programId: 4,
       savedAt: '2026-01-01T00:00:00.000Z',
     }
     s.items.set(reportDraftKey(), JSON.stringify(stored))
     expect(readDraft(s, reportDraftKey(), reportDraftSchema)).toEqual({
-      values: { vehicleUnit: 'BX-07', route: '', ratings: { launch: 3 }, flags: [{ pedalPct: 60, what: '', severity: 2 }] },
-      mapId: 4,
-      revisionNumber: 2,
+      values: { setId: 9, vehicleUnit: 'BX-07', route: '', ratings: { launch: 3 }, flags: [{ map: 'regen', pedalPct: 60, what: '', severity: 2 }, { pedalPct: 10, what: 'x', severity: 1 }] },
+      programId: 4,
       savedAt: '2026-01-01T00:00:00.000Z',
     })
+  })
+
+  it('keeps a draft from before sets, without the revision it named (the driver picks the set again)', () => {
+    const s = memoryStorage()
+    s.items.set(reportDraftKey(), JSON.stringify({ values: { revisionId: 5, route: 'Ramp 3' }, mapId: 4, revisionNumber: 2, savedAt: '2026-01-01T00:00:00.000Z' }))
+    expect(readDraft(s, reportDraftKey(), reportDraftSchema)).toEqual({ values: { route: 'Ramp 3' }, savedAt: '2026-01-01T00:00:00.000Z' })
   })
 
   it('discards a stored value that is not a draft object at all, with no throw', () => {

@@ -14,7 +14,8 @@ export function NotebookEntries(props: { revisions: RevisionSummary[]; events: R
       {props.revisions.map((r) => {
         const events = props.events.filter((e) => e.revisionId === r.id)
         const comments = props.comments.filter((c) => c.revisionId === r.id)
-        const reports = props.reports.filter((x) => x.revisionId === r.id)
+        // Reports on sets that hold this revision (as their drive or their regen map).
+        const reports = props.reports.filter((x) => x.driveRevisionId === r.id || x.regenRevisionId === r.id)
         return (
           <li key={r.id} className="card space-y-2" data-testid={`notebook-${r.number}`}>
             <p className="text-xs text-slate-500">
@@ -40,7 +41,7 @@ export function NotebookEntries(props: { revisions: RevisionSummary[]; events: R
               <ul className="text-sm">
                 {reports.map((x) => (
                   <li key={x.id}>
-                    <span className="text-slate-500">Report</span> <Link href={`/reports/${x.id}`} className="text-accent hover:underline">Drive report {x.drivenOn}</Link> by {x.driverName}, {surfaceLabel(x.surface)}, {x.loadCase} <SafetyBadge safety={x.safety} />
+                    <span className="text-slate-500">Report</span> <Link href={`/reports/${x.id}`} className="text-accent hover:underline">Drive report {x.drivenOn}</Link> on <Link href={`/sets/${x.setId}`} className="hover:underline">set {x.setNumber}</Link> by {x.driverName}, {surfaceLabel(x.surface)}, {x.loadCase} <SafetyBadge safety={x.safety} />
                   </li>
                 ))}
               </ul>

@@ -2,24 +2,38 @@
 import { useQuery } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
 import type { AnalysisResult } from '@/physics'
+import type { StoredAnalysis } from '@/app/_lib/reports/log-jobs'
 import { LogTimePlot } from './log-time-plot'
 import { OccupancyGrid } from './occupancy-grid'
 import { PredictionTable, type Prediction } from './prediction-table'
 
 const fmt = (v: number | null | undefined, d = 2) => (v === null || v === undefined ? '—' : v.toFixed(d))
 
-/** A log's analysis: summary figures, the wheel-spin and lock-up events, the plot and the map occupancy. */
-export function LogAnalysisView(props: { reportId: number; logId: number; mapKind: 'drive' | 'regen' }) {
+/**
+ * A log's analysis: what it was analysed against (the report's set), summary figures, the wheel-spin
+ * and lock-up events, the plot, the model's predictions and the map occupancy.
+ */
+export function LogAnalysisView(props: { reportId: number; logId: number; setId: number }) {
   const q = useQuery({
     queryKey: ['log', props.logId],
-    queryFn: () => api<{ log: { analysis: AnalysisResult | null }; predictions: Prediction[] | null }>(`/api/reports/${props.reportId}/logs/${props.logId}`),
+    queryFn: () => api<{ log: { analysis: (AnalysisResult & Pick<StoredAnalysis, 'basis'>) | null }; predictions: Prediction[] | null }>(`/api/reports/${props.reportId}/logs/${props.logId}`),
   })
   const a = q.data?.log.analysis
   if (!a) return <p className="text-sm text-slate-500">Loading analysis…</p>
+  const basis = a.basis
+  const occupancyKind = a.occupancy?.kind ?? basis?.occupancyMap ?? 'drive'
   const spins = a.events.filter((e) => e.kind === 'spin').length
   const locks = a.events.length - spins
   return (
     <div className="space-y-3">
+      {basis && (
+        <p className="text-xs text-slate-600" data-testid="analysis-basis">
+          Analysed against set {basis.setNumber} (parameter version {basis.paramVersion}); time in cells on its {basis.occupancyMap} map.
+        </p>
+      )}
+      {basis && basis.setId !== props.setId && (
+        <p role="alert" className="error-text text-sm">This analysis was made against set {basis.setNumber}, before the report’s set was corrected; press “Analyse again” to see it against the report’s set.</p>
+      )}
       <dl className="grid grid-cols-2 gap-2 text-sm sm:grid-cols-4" data-testid="log-summary">
         <Fig label="Duration" value={`${fmt(a.durationS / 60, 1)} min`} />
         <Fig label="Distance" value={`${fmt(a.distanceKm, 1)} km`} />
@@ -53,8 +67,8 @@ export function LogAnalysisView(props: { reportId: number; logId: number; mapKin
           </table>
         </div>
       )}
-      {q.data?.predictions && <PredictionTable predictions={q.data.predictions} mapKind={props.mapKind} />}
-      {a.occupancy && <OccupancyGrid occupancy={a.occupancy} events={a.events} mapKind={props.mapKind} />}
+      {q.data?.predictions && <PredictionTable predictions={q.data.predictions} />}
+      {a.occupancy && <OccupancyGrid occupancy={a.occupancy} events={a.events} mapKind={occupancyKind} />}
       <p className="text-xs text-slate-500">
         Slip thresholds: spin above {fmt(a.thresholds.spinSlip, 3)}, lock below −{fmt(a.thresholds.lockSlip, 3)} ({a.thresholds.source}); events shorter than {a.thresholds.minDurationS} s are not counted ({a.shortExcursions} short excursions).
       </p>

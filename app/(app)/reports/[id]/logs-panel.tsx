@@ -1,5 +1,5 @@
 'use client'
-import { useQuery, useQueryClient } from '@tanstack/react-query'
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query'
 import { useState } from 'react'
 import { api } from '@/app/_components/api-client'
 import { isLogPending, type LogStatus } from '@/domain/log-statuses'
@@ -18,8 +18,13 @@ export interface LogItem {
 
 const mb = (b: number) => `${(b / (1024 * 1024)).toFixed(1)} MB`
 
-export function LogsPanel(props: { reportId: number; initialLogs: LogItem[]; canUpload: boolean; mapKind: 'drive' | 'regen' }) {
+/**
+ * The report's drive logs. The filing driver attaches and removes logs until a lead engineer has
+ * read the report; the driver or a lead can run an analysis again. Each is in the audit trail.
+ */
+export function LogsPanel(props: { reportId: number; setId: number; initialLogs: LogItem[]; isDriver: boolean; isLead: boolean; read: boolean }) {
   const qc = useQueryClient()
+  const canUpload = props.isDriver && !props.read
   const [upload, setUpload] = useState<{ name: string; fraction: number } | null>(null)
   const [error, setError] = useState<string | null>(null)
   const [mapping, setMapping] = useState('')
@@ -29,6 +34,16 @@ export function LogsPanel(props: { reportId: number; initialLogs: LogItem[]; can
     queryFn: () => api<{ logs: LogItem[] }>(`/api/reports/${props.reportId}/logs`),
     // Poll while a log is still being parsed, so the progress bar moves.
     refetchInterval: (q) => (q.state.data?.logs.some((l) => isLogPending(l.status)) ? 1000 : false),
+  })
+
+  const refresh = () => qc.invalidateQueries({ queryKey: ['logs', props.reportId] })
+  const again = useMutation({
+    mutationFn: (logId: number) => api(`/api/reports/${props.reportId}/logs/${logId}`, { method: 'POST' }),
+    onSuccess: (_d, logId) => Promise.all([refresh(), qc.invalidateQueries({ queryKey: ['log', logId] })]),
+  })
+  const remove = useMutation({
+    mutationFn: (logId: number) => api(`/api/reports/${props.reportId}/logs/${logId}`, { method: 'DELETE' }),
+    onSuccess: refresh,
   })
 
   async function onFile(file: File) {
@@ -49,7 +64,8 @@ export function LogsPanel(props: { reportId: number; initialLogs: LogItem[]; can
   return (
     <section className="card space-y-3">
       <h2 className="font-semibold">Data logs</h2>
-      {props.canUpload && (
+      {props.isDriver && props.read && <p className="text-sm text-slate-600">A lead engineer has read this report, so logs can no longer be added or removed. File a new report for a new drive.</p>}
+      {canUpload && (
         <div className="space-y-2">
           <label htmlFor="log-file" className="label">Attach the vehicle’s data log (CSV, up to 200 MB)</label>
           <input id="log-file" type="file" accept=".csv,text/csv" disabled={Boolean(upload)} onChange={(e) => e.target.files?.[0] && onFile(e.target.files[0])} />
@@ -69,7 +85,19 @@ export function LogsPanel(props: { reportId: number; initialLogs: LogItem[]; can
           </p>
           {isLogPending(l.status) && <Progress label="Reading the log" fraction={l.sizeBytes ? l.progressBytes / l.sizeBytes : 0} />}
           {l.status === 'failed' && <p role="alert" className="error-text text-sm">{l.errorMessage}</p>}
-          {l.status === 'done' && <LogAnalysisView reportId={props.reportId} logId={l.id} mapKind={props.mapKind} />}
+          {!isLogPending(l.status) && (props.isDriver || props.isLead) && (
+            <p className="flex flex-wrap gap-2">
+              <button type="button" className="btn" disabled={again.isPending} onClick={() => again.mutate(l.id)}>Analyse again</button>
+              {canUpload && (
+                <button type="button" className="btn text-danger" disabled={remove.isPending} onClick={() => window.confirm(`Remove ${l.fileName} from this report?`) && remove.mutate(l.id)}>
+                  Remove this log
+                </button>
+              )}
+            </p>
+          )}
+          {again.error && again.variables === l.id && <p role="alert" className="error-text text-sm">{again.error.message}</p>}
+          {remove.error && remove.variables === l.id && <p role="alert" className="error-text text-sm">{remove.error.message}</p>}
+          {l.status === 'done' && <LogAnalysisView reportId={props.reportId} logId={l.id} setId={props.setId} />}
         </div>
       ))}
     </section>

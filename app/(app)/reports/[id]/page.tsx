@@ -3,13 +3,14 @@ import { notFound } from 'next/navigation'
 import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { shortChecksum } from '@/app/_components/format'
-import { getReport } from '@/db/queries/reports'
+import { getReport, setChoices } from '@/db/queries/reports'
 import { listLogs } from '@/db/queries/logs'
 import { RATING_KEYS, RATING_LABELS, SEVERITY_LABELS } from '@/app/_schemas/report'
 import { SafetyBadge, surfaceLabel } from '../report-table'
 import { SafetyPanel } from './safety-panel'
 import { LogsPanel } from './logs-panel'
 import { ReportDiscussion } from './report-discussion'
+import { SetCorrection } from './set-correction'
 
 export const metadata = { title: 'Drive report' }
 
@@ -17,8 +18,13 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
   const user = await requirePageUser()
   const report = await getReport(pageId((await props.params).id, 'Report id'))
   if (!report) notFound()
-  const logs = await listLogs(report.id)
+  const isLead = user.role === 'lead_engineer'
+  const [logs, choices] = await Promise.all([listLogs(report.id), isLead ? setChoices({ programId: report.programId }) : []])
   const filed = (await props.searchParams).filed === '1'
+  const parts = [
+    { kind: 'Drive map', mapId: report.driveMapId, mapName: report.driveMapName, number: report.driveNumber, checksum: report.driveChecksum },
+    { kind: 'Regen map', mapId: report.regenMapId, mapName: report.regenMapName, number: report.regenNumber, checksum: report.regenChecksum },
+  ]
   return (
     <div className="space-y-4">
       {filed && <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">Report filed. You can attach the data log below.</p>}
@@ -27,15 +33,31 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
           <Link href="/reports" className="hover:underline">Drive reports</Link> · {report.programName}
         </p>
         <h1 className="text-2xl font-bold">
-          {report.mapName} <Link href={`/maps/${report.mapId}/revisions/${report.revisionNumber}`} className="text-accent hover:underline">r{report.revisionNumber}</Link> — {report.drivenOn}
+          <Link href={`/sets/${report.setId}`} className="text-accent hover:underline">Set {report.setNumber}</Link> — {report.drivenOn}
         </h1>
         <p className="text-sm text-slate-600">
           {user.id === report.driverId && !report.leadReadAt && (
             <Link href={`/reports/${report.id}/edit`} className="btn mr-2">Edit</Link>
           )}
-          {report.driverName} · unit {report.vehicleUnit} · {report.route} · checksum <span className="font-mono">{shortChecksum(report.revisionChecksum)}</span> <SafetyBadge safety={report.safety} />
+          {report.driverName} · unit {report.vehicleUnit} · {report.route} <SafetyBadge safety={report.safety} />
         </p>
       </div>
+      <section className="card grid gap-2 text-sm sm:grid-cols-3" aria-label="What the truck ran" data-testid="report-set">
+        {parts.map((p) => (
+          <p key={p.kind} className="break-words">
+            <span className="label">{p.kind}</span>
+            {p.mapId && p.number ? (
+              <>
+                <Link href={`/maps/${p.mapId}/revisions/${p.number}`} className="text-accent hover:underline">{p.mapName} r{p.number}</Link>
+                {p.checksum && <> · <span className="font-mono text-xs">{shortChecksum(p.checksum)}</span></>}
+              </>
+            ) : (
+              'none in this set'
+            )}
+          </p>
+        ))}
+        <p><span className="label">Parameters</span>version {report.paramVersion}</p>
+      </section>
       <section className="card grid gap-2 text-sm sm:grid-cols-3">
         <p><span className="label">Surface</span>{surfaceLabel(report.surface)}</p>
         <p><span className="label">Weather</span>{report.weather}, {report.ambientC} °C</p>
@@ -51,7 +73,7 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
           <ul className="space-y-1 text-sm">
             {report.flags.map((f, i) => (
               <li key={i} className={f.severity === 4 ? 'font-semibold text-danger' : ''}>
-                {f.pedalPct} % pedal at {f.speedKmh} km/h — {f.what} ({SEVERITY_LABELS[f.severity]})
+                {f.map === 'regen' ? 'Regen map' : 'Drive map'}: {f.pedalPct} % {f.map === 'regen' ? 'brake' : 'pedal'} at {f.speedKmh} km/h — {f.what} ({SEVERITY_LABELS[f.severity]})
               </li>
             ))}
           </ul>
@@ -59,7 +81,20 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
       )}
       <SafetyPanel reportId={report.id} safety={report.safety} resolution={report.safetyResolution} canResolve={user.role === 'lead_engineer'} />
       <ReportDiscussion reportId={report.id} canComment={user.role === 'lead_engineer' || user.role === 'calibration_engineer'} canMarkRead={user.role === 'lead_engineer'} readAt={report.leadReadAt?.toISOString() ?? null} />
-      <LogsPanel reportId={report.id} initialLogs={logs.map((l) => ({ ...l, createdAt: l.createdAt.toISOString(), analysedAt: l.analysedAt?.toISOString() ?? null }))} canUpload={user.id === report.driverId} mapKind={report.mapKind} />
+      {isLead && (
+        <SetCorrection
+          reportId={report.id}
+          choices={choices.filter((c) => c.id !== report.setId)}
+        />
+      )}
+      <LogsPanel
+        reportId={report.id}
+        setId={report.setId}
+        initialLogs={logs.map((l) => ({ ...l, createdAt: l.createdAt.toISOString(), analysedAt: l.analysedAt?.toISOString() ?? null }))}
+        isDriver={user.id === report.driverId}
+        isLead={isLead}
+        read={Boolean(report.leadReadAt)}
+      />
     </div>
   )
 }

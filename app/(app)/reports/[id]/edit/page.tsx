@@ -1,10 +1,7 @@
 import { notFound, redirect } from 'next/navigation'
 import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
-import { getReport } from '@/db/queries/reports'
-import { listMaps } from '@/db/queries/maps'
-import { listPrograms } from '@/db/queries/programs'
-import { loadCasesFor } from '@/physics/load-cases'
+import { getReport, setChoices } from '@/db/queries/reports'
 import { reportInputSchema } from '@/app/_schemas/report'
 import { ReportFormLoader as ReportForm } from '../../report-form-loader'
 
@@ -16,21 +13,17 @@ export default async function EditReportPage(props: { params: Promise<{ id: stri
   if (!r) notFound()
   // Logged in is not authorised: only the filing driver, and only until a lead has read it.
   if (r.driverId !== user.id || r.leadReadAt) redirect(`/reports/${r.id}`)
-  const [maps, programs] = await Promise.all([listMaps(), listPrograms()])
-  // The stored row goes through the same schema as the form, so the form gets typed values.
+  const [set] = await setChoices({ ids: [r.setId] })
+  if (!set) notFound()
+  // The stored row goes through the same schema as the form, so the form gets typed values. The set is fixed.
   const values = reportInputSchema.parse({
-    revisionId: r.revisionId, drivenOn: r.drivenOn, vehicleUnit: r.vehicleUnit, route: r.route, surface: r.surface, weather: r.weather, ambientC: r.ambientC,
+    setId: r.setId, drivenOn: r.drivenOn, vehicleUnit: r.vehicleUnit, route: r.route, surface: r.surface, weather: r.weather, ambientC: r.ambientC,
     loadCase: r.loadCase, payloadKg: r.payloadKg, trailer: r.trailer, ratings: r.ratings, comments: r.comments, flags: r.flags,
   })
   return (
     <div className="mx-auto max-w-2xl space-y-4">
       <h1 className="text-2xl font-bold">Edit drive report</h1>
-      <ReportForm
-        maps={maps.map((m) => ({ id: m.id, name: m.name, kind: m.kind, programId: m.programId, programName: m.programName, latestNumber: m.latestNumber }))}
-        loadCases={Object.fromEntries(programs.map((p) => [p.id, loadCasesFor(p.params)]))}
-        initialMapId={r.mapId}
-        edit={{ reportId: r.id, values, revisionNumber: r.revisionNumber }}
-      />
+      <ReportForm sets={[set]} edit={{ reportId: r.id, values, set }} />
     </div>
   )
 }

@@ -1,14 +1,13 @@
 import { randomUUID } from 'node:crypto'
 import { withRole } from '@/app/_lib/http/access'
 import { env } from '@/app/_lib/config/env'
-import { ValidationError } from '@/app/_lib/http/errors'
-import { assertOwner, loadReport } from '@/app/_lib/reports/access'
+import { ConflictError, ValidationError } from '@/app/_lib/http/errors'
+import { AFTER_READ, assertOwner, assertUnread, loadReport } from '@/app/_lib/reports/access'
 import { startLogAnalysis } from '@/app/_lib/reports/log-jobs'
 import { deleteObject, putObjectStream } from '@/app/_lib/storage/object-store'
 import { CsvUploadGuard, guardedBody, PayloadTooLargeError, UnsupportedFileError, uploadFailure } from '@/app/_lib/http/upload-guard'
-import { createLog, listLogs } from '@/db/queries/logs'
+import { addLogUnlessRead, listLogs } from '@/db/queries/logs'
 import { logColumnMappingSchema } from '@/app/_schemas/report'
-
 
 // GET /api/reports/:id/logs — the report's logs with status and progress
 export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }) => {
@@ -16,10 +15,13 @@ export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }
   return Response.json({ logs: await listLogs(report.id) })
 })
 
-// POST /api/reports/:id/logs?name=&mapping= — the filing driver uploads a CSV data log (raw body), streamed to storage
+// POST /api/reports/:id/logs?name=&mapping= — the filing driver uploads a CSV data log (raw body), streamed to
+// storage, until a lead has read the report (409 after); audited. Analysed in the background against the report's set.
 export const POST = withRole<{ id: string }>(['test_driver'], async (req, { user, params }) => {
   const report = await loadReport(params.id)
   assertOwner(report, user)
+  // Refused before a byte is read; checked again, with the report row locked, when the log is recorded.
+  assertUnread(report, 'add-log')
   const q = new URL(req.url).searchParams
   const fileName = (q.get('name') ?? 'log.csv').slice(0, 200)
   if (!/\.(csv|txt)$/i.test(fileName)) throw new UnsupportedFileError(`${fileName} is not a .csv file`)
@@ -47,7 +49,12 @@ export const POST = withRole<{ id: string }>(['test_driver'], async (req, { user
     await deleteObject(objectKey).catch(() => {})
     throw uploadFailure(guard, e)
   }
-  const log = await createLog({ reportId: report.id, objectKey, fileName, sizeBytes: guard.bytes, mapping })
+  const log = await addLogUnlessRead({ reportId: report.id, objectKey, fileName, sizeBytes: guard.bytes, mapping }, user.id)
+  if (!log) {
+    // A lead read the report while the file was arriving: keep nothing.
+    await deleteObject(objectKey).catch(() => {})
+    throw new ConflictError(AFTER_READ['add-log'])
+  }
   startLogAnalysis(log.id)
   return Response.json({ log }, { status: 201 })
 }, { accepts: ['text/csv'] })

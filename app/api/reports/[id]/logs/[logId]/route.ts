@@ -1,10 +1,11 @@
 import { withRole } from '@/app/_lib/http/access'
-import { NotFoundError } from '@/app/_lib/http/errors'
-import { assertOwner, loadReport } from '@/app/_lib/reports/access'
+import { ConflictError, ForbiddenError, NotFoundError } from '@/app/_lib/http/errors'
+import { AFTER_READ, assertOwner, assertUnread, loadReport } from '@/app/_lib/reports/access'
 import { intParam } from '@/app/_lib/http/request'
-import { startLogAnalysis } from '@/app/_lib/reports/log-jobs'
-import { getLog } from '@/db/queries/logs'
-import { getRevisionWithMap } from '@/db/queries/maps'
+import { reanalyseLog } from '@/app/_lib/reports/log-jobs'
+import { deleteObject } from '@/app/_lib/storage/object-store'
+import { getLog, removeLogUnlessRead } from '@/db/queries/logs'
+import { getSet } from '@/db/queries/sets'
 import { predictEvents } from '@/app/_lib/reports/log-prediction'
 
 async function loadLog(reportParam: string, logParam: string) {
@@ -15,22 +16,35 @@ async function loadLog(reportParam: string, logParam: string) {
 }
 
 // GET /api/reports/:id/logs/:logId — a log's status, parse progress and (when done) its analysis, with the
-// physics prediction at each logged event for the report's revision, load case and surface
+// physics prediction at each logged event for the report's set (spin on its drive map, lock-up on its
+// regen map, with its parameter version), load case and surface
 export const GET = withRole<{ id: string; logId: string }>('signed-in', async (_req, { params }) => {
   const { report, log } = await loadLog(params.id, params.logId)
   const analysis = log.analysis
   let predictions = null
   if (log.status === 'done' && analysis) {
-    const target = await getRevisionWithMap(report.revisionId)
-    if (target) predictions = predictEvents(analysis.events, { table: target.revision.table, vehicle: target.map.programParams, loadCase: report.loadCase, surface: report.surface })
+    const set = await getSet(report.setId)
+    if (set) predictions = predictEvents(analysis.events, { drive: set.drive?.table ?? null, regen: set.regen?.table ?? null, vehicle: set.paramVersion.params, loadCase: report.loadCase, surface: report.surface })
   }
   return Response.json({ log, predictions })
 })
 
-// POST /api/reports/:id/logs/:logId — the filing driver re-runs the analysis (e.g. after a failed parse)
-export const POST = withRole<{ id: string; logId: string }>(['test_driver'], async (_req, { user, params }) => {
+// POST /api/reports/:id/logs/:logId — the filing driver or a lead runs the analysis again (e.g. after a failed parse); audited
+export const POST = withRole<{ id: string; logId: string }>(['test_driver', 'lead_engineer'], async (_req, { user, params }) => {
   const { report, log } = await loadLog(params.id, params.logId)
-  assertOwner(report, user)
-  startLogAnalysis(log.id)
+  if (user.role !== 'lead_engineer') assertOwner(report, user)
+  await reanalyseLog(log, user.id, 'requested')
   return Response.json({ log: { ...log, status: 'analysing' } }, { status: 202 })
+})
+
+// DELETE /api/reports/:id/logs/:logId — the filing driver removes a log (a wrong file), until a lead has read the report; audited
+export const DELETE = withRole<{ id: string; logId: string }>(['test_driver'], async (_req, { user, params }) => {
+  const { report, log } = await loadLog(params.id, params.logId)
+  if (report.driverId !== user.id) throw new ForbiddenError('Only the driver who filed this report may remove its logs')
+  assertUnread(report, 'remove-log')
+  const removed = await removeLogUnlessRead(log.id, report.id, user.id)
+  if (removed === 'read') throw new ConflictError(AFTER_READ['remove-log'])
+  if (!removed) throw new ConflictError(`Log ${log.id} was already removed`)
+  await deleteObject(log.objectKey).catch((e) => console.error(`log ${log.id}: stored file ${log.objectKey} not deleted`, e))
+  return Response.json({ removed: { id: log.id, fileName: log.fileName } })
 })

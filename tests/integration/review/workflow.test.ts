@@ -36,7 +36,7 @@ describe('review workflow', () => {
     expect([await stateOf(s.mapId, 1), await stateOf(s.regenMapId, 1)]).toEqual(['released', 'released'])
     expect((await currentSetRelease(s.programId))?.setId).toBe(first)
     const mail = await capturedMail()
-    expect(mail.some((m) => m.to.includes(s.engineer.email) && /Released: .* set 1/.test(m.raw))).toBe(true)
+    expect(mail.some((m) => m.to.includes(s.engineer.email) && /Package SHA-256:/.test(m.raw))).toBe(true)
 
     // Set 2 keeps the regen revision and takes a new drive revision: releasing it retires drive r1 only.
     const d2 = await saveRevision(s, s.mapId, 1, { ...GENTLE, values: GENTLE.values.map((r) => r.map((v) => v * 0.9)) }, 'Even gentler')

@@ -1,11 +1,11 @@
 import { and, asc, desc, eq, inArray, isNull, or, sql, type SQL } from 'drizzle-orm'
-import { alias } from 'drizzle-orm/pg-core'
+import { driveMap, driveRev, regenMap, regenRev, setPartColumns } from './set-parts'
 import { getDb, type Db } from '../client'
 import { SAFETY_SEVERITY } from '../../domain/report-safety'
 import type { SurfaceId } from '../../physics/surfaces'
 import type { LoadCase } from '../../physics/vehicle'
 import { loadCasesFor } from '../../physics/load-cases'
-import { driveReports, mapRevisions, maps, mapSets, paramVersions, reportComments, users, vehiclePrograms, type ReportFlag, type ReportRatings } from '../schema'
+import { driveReports, mapRevisions, mapSets, paramVersions, reportComments, users, vehiclePrograms, type ReportFlag, type ReportRatings } from '../schema'
 import { recordAudit } from './audit'
 import { enqueueMail, type OutgoingMail } from './mail'
 
@@ -27,27 +27,13 @@ export interface ReportFields {
 
 const safetyFlags = (flags: ReportFlag[]) => flags.filter((f) => f.severity === SAFETY_SEVERITY).length
 
-const driveRev = alias(mapRevisions, 'drive_rev')
-const regenRev = alias(mapRevisions, 'regen_rev')
-const driveMap = alias(maps, 'drive_map')
-const regenMap = alias(maps, 'regen_map')
-
 const columns = {
   id: driveReports.id,
   setId: driveReports.setId,
   setNumber: mapSets.number,
   paramVersionId: mapSets.paramVersionId,
   paramVersion: paramVersions.number,
-  driveRevisionId: mapSets.driveRevisionId,
-  driveNumber: driveRev.number,
-  driveChecksum: driveRev.checksum,
-  driveMapId: driveMap.id,
-  driveMapName: driveMap.name,
-  regenRevisionId: mapSets.regenRevisionId,
-  regenNumber: regenRev.number,
-  regenChecksum: regenRev.checksum,
-  regenMapId: regenMap.id,
-  regenMapName: regenMap.name,
+  ...setPartColumns,
   programId: vehiclePrograms.id,
   programName: vehiclePrograms.name,
   driverId: driveReports.driverId,
@@ -257,16 +243,7 @@ export async function setChoices(filter: { ids?: number[]; programId?: number } 
       paramVersion: paramVersions.number,
       params: paramVersions.params,
       released: sql<boolean>`exists (select 1 from set_releases sr where sr.set_id = ${mapSets.id} and sr.retired_at is null and sr.withdrawn_at is null)`,
-      driveRevisionId: mapSets.driveRevisionId,
-      driveNumber: driveRev.number,
-      driveChecksum: driveRev.checksum,
-      driveMapId: driveMap.id,
-      driveMapName: driveMap.name,
-      regenRevisionId: mapSets.regenRevisionId,
-      regenNumber: regenRev.number,
-      regenChecksum: regenRev.checksum,
-      regenMapId: regenMap.id,
-      regenMapName: regenMap.name,
+      ...setPartColumns,
     })
     .from(mapSets)
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, mapSets.programId))

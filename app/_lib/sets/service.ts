@@ -8,13 +8,13 @@ import { emailOfUser, emailsOfRole } from '@/db/queries/mail'
 import { getParamVersionByNumber, latestParamVersion } from '@/db/queries/param-versions'
 import { listReports } from '@/db/queries/reports'
 import { listRevisionEvents } from '@/db/queries/review'
-import { createSet, getSet, openSafetyConcerns, recordSetRelease, recordSetWithdrawal, type MapSetFull, type SetPart } from '@/db/queries/sets'
+import { createSet, getSet, openSafetyConcerns, recordSetRelease, recordSetWithdrawal, SET_STATUS_LABELS, type MapSetFull, type SetPart } from '@/db/queries/sets'
 import type { Acknowledgement, AcknowledgementRecord } from '@/db/schema'
 import { crossChecks, limitsFromVehicle, validate, type CrossCheck, type Finding } from '@/maps'
 import type { SessionUser } from '../auth/session'
 import { ConflictError, ForbiddenError, HttpError, NotFoundError, ValidationError, isUniqueViolation } from '../http/errors'
 import { appUrl, nudgeMail } from '../mail/sender'
-import { getObjectStream, putObjectStream } from '../storage/object-store'
+import { deleteObject, getObjectStream, putObjectStream } from '../storage/object-store'
 import { setGate, type SetGatePart, type SetGateResult } from './gate'
 import { buildSetPackage, type PackageMode, type PackageRecord } from './package'
 
@@ -24,12 +24,15 @@ export async function loadSet(id: number): Promise<MapSetFull> {
   return set
 }
 
+/** How messages name a set: its program and number (the URL's id is another number). */
+const label = (set: Pick<MapSetFull, 'programName' | 'number'>) => `${set.programName} · Set ${set.number}`
+
 const partsOf = (set: MapSetFull): SetPart[] => [set.drive, set.regen].filter((p): p is SetPart => p !== null)
 
 const gateParts = (set: MapSetFull): SetGatePart[] => partsOf(set).map((p) => ({ kind: p.kind, revisionId: p.revisionId, number: p.number, mapName: p.mapName, state: p.state, table: p.table }))
 
-/** The gate of a set as it stands, with these acknowledgements. */
-export async function setGateFor(set: MapSetFull, acknowledgements: Acknowledgement[] = []): Promise<SetGateResult> {
+/** The gate of a set as it stands, with these acknowledgements (by default those its latest release recorded). */
+export async function setGateFor(set: MapSetFull, acknowledgements: Acknowledgement[] = set.releases[0]?.acknowledgements ?? []): Promise<SetGateResult> {
   const reports = await listReports({ setId: set.id })
   const concerns = await openSafetyConcerns(partsOf(set).map((p) => p.revisionId))
   return setGate({ parts: gateParts(set), vehicle: set.paramVersion.params, conditions: set.paramVersion.releaseConditions, reports: reports.length, concerns, acknowledgements })
@@ -102,13 +105,14 @@ export async function testPackage(set: MapSetFull) {
  */
 export async function releaseSet(set: MapSetFull, actor: SessionUser, acks: Acknowledgement[]) {
   if (actor.role !== 'lead_engineer') throw new ForbiddenError('Releasing a set needs the role lead engineer')
-  if (set.status === 'released') throw new ConflictError(`Set ${set.number} is already the released set of ${set.programName}`)
-  if (set.status === 'withdrawn') throw new ConflictError(`Set ${set.number}'s release was withdrawn; make a new set to release these maps again`)
+  if (set.status === 'released') throw new ConflictError(`${label(set)} is already the released set of ${set.programName}`)
+  if (set.status === 'withdrawn')
+    throw new ConflictError(`${label(set)}'s release was withdrawn and its revisions with it; to release these maps again, save them as new revisions, have them approved and make a set of those`)
   const gate = await setGateFor(set, acks)
   const unknown = acks.filter((a) => !gate.exceptions.some((e) => e.key === a.key))
   if (unknown.length) throw new ValidationError(`acknowledgements: ${unknown.map((a) => a.key).join(', ')} match no exception of this set`)
   if (!gate.ok) throw new ConflictError('The release gate is not passed: ' + gate.conditions.filter((c) => !c.met).map((c) => c.summary).join('; '), { gate })
-  const at = new Date(Math.floor(Date.now() / 1000) * 1000)
+  const at = new Date()
   const records: AcknowledgementRecord[] = gate.exceptions.map((e) => {
     const a = acks.find((x) => x.key === e.key)!
     return { key: e.key, reason: a.reason.trim(), mapKind: e.mapKind, revisionId: e.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells.length, byId: actor.id, byName: actor.name, at: at.toISOString() }
@@ -120,8 +124,9 @@ export async function releaseSet(set: MapSetFull, actor: SessionUser, acks: Ackn
   const to = [...new Set([...(await emailsOfRole('lead_engineer')), ...(await Promise.all(parts.map((p) => emailOfUser(p.authorId)))).flat()])]
   const what = `${set.programName} · set ${set.number}`
   const db = await getDb()
+  let releaseId: number | null
   try {
-    await db.transaction((tx) =>
+    releaseId = await db.transaction((tx) =>
       recordSetRelease(tx, {
         setId: set.id,
         programId: set.programId,
@@ -134,8 +139,14 @@ export async function releaseSet(set: MapSetFull, actor: SessionUser, acks: Ackn
       }),
     )
   } catch (e) {
+    await deleteObject(key).catch(() => {})
     if (isUniqueViolation(e)) throw new ConflictError(`Someone released another set of ${set.programName} at the same moment; reload and try again`)
     throw e
+  }
+  if (releaseId === null) {
+    // Another lead released this very set a moment ago: theirs stands, this package was never recorded.
+    await deleteObject(key).catch(() => {})
+    throw new ConflictError(`${label(set)} was released by someone else a moment ago; reload to see that release`)
   }
   nudgeMail()
   return { gate, sha256: pkg.sha256, filename: pkg.filename }
@@ -145,7 +156,7 @@ export async function releaseSet(set: MapSetFull, actor: SessionUser, acks: Ackn
 export async function withdrawSet(set: MapSetFull, actor: SessionUser, reason: string) {
   if (actor.role !== 'lead_engineer') throw new ForbiddenError('Withdrawing a release needs the role lead engineer')
   if (!reason.trim()) throw new ValidationError('reason: say why the release is withdrawn')
-  if (set.status !== 'released') throw new ConflictError(`Set ${set.number} is not the released set of ${set.programName} (it is “${set.status}”)`)
+  if (set.status !== 'released') throw new ConflictError(`${label(set)} is not the released set of ${set.programName} (it is “${SET_STATUS_LABELS[set.status]}”)`)
   const parts = partsOf(set)
   const to = [...new Set([...(await emailsOfRole('lead_engineer')), ...(await Promise.all(parts.map((p) => emailOfUser(p.authorId)))).flat()])]
   const db = await getDb()
@@ -158,7 +169,7 @@ export async function withdrawSet(set: MapSetFull, actor: SessionUser, reason: s
       mail: [{ to, subject: `Release withdrawn: ${set.programName} · set ${set.number}`, text: `${actor.name} withdrew the release of set ${set.number}.\n\nReason: ${reason.trim()}\nOpen: ${appUrl(`/sets/${set.id}`)}\n` }],
     }),
   )
-  if (!result.ok) throw new ConflictError(`Set ${set.number} was withdrawn or replaced a moment ago; reload`)
+  if (!result.ok) throw new ConflictError(`${label(set)} was withdrawn or replaced a moment ago; reload`)
   nudgeMail()
   return result
 }

@@ -6,11 +6,12 @@ import { eq, sql } from 'drizzle-orm'
 import { strFromU8, unzipSync } from 'fflate'
 import * as actionsRoute from '@/app/api/revisions/[revisionId]/actions/route'
 import * as reportRoute from '@/app/api/reports/[id]/route'
+import * as reportSetRoute from '@/app/api/reports/[id]/set/route'
 import * as programRoute from '@/app/api/programs/[id]/route'
 import * as setsRoute from '@/app/api/sets/route'
 import { getDb } from '@/db/client'
 import { auditLog, paramVersions, users, vehiclePrograms } from '@/db/schema'
-import { call } from '@/tests/support/api'
+import { call, makeUser, sessionCookie } from '@/tests/support/api'
 import { GENTLE } from '@/tests/support/review-fixtures'
 import { SMALL_DRIVE } from '@/tests/support/fixtures'
 import { approve, downloadPackage, GENTLE_REGEN, fileSetReport, gateMet, getSetView, makeSet, releaseSet, saveRevision, setReportBody, setSetup, withdrawSet } from '@/tests/support/set-fixtures'
@@ -236,5 +237,74 @@ describe('GENTLE fixture sanity', () => {
     const id = await makeSet(s)
     await fileSetReport(id, s.driverCookie)
     expect(gateMet(await getSetView(id, s.leadCookie))).toEqual({ parts: true, approved: true, validation: true, exportable: true, traction: true, 'drive-report': true, safety: true })
+  })
+})
+
+describe('found trying the sets as an attacker and a new user', () => {
+  it('a withdrawal never brings back a release whose set was withdrawn since', async () => {
+    const s = await setSetup()
+    await approve(s, s.driveRevisionId)
+    await approve(s, s.regenRevisionId)
+    const a = await makeSet(s)
+    await fileSetReport(a, s.driverCookie)
+    const regen2 = await saveRevision(s, s.regenMapId, 1, { ...GENTLE_REGEN, values: [[0, 25, 25], [0, 60, 60], [0, 100, 100]] })
+    await approve(s, regen2)
+    const b = await makeSet(s, { regenRevisionId: regen2 })
+    await fileSetReport(b, s.driverCookie)
+    expect((await releaseSet(a, s.leadCookie)).status).toBe(200)
+    expect((await releaseSet(b, s.leadCookie)).status).toBe(200) // retires A
+    expect((await releaseSet(a, s.leadCookie)).status).toBe(200) // A again, retires B
+    expect((await withdrawSet(a, s.leadCookie, 'A is wrong after all')).body).toMatchObject({ restoredSetId: b })
+    // Withdrawing B must not bring back A's first (retired, never itself withdrawn) release row.
+    expect((await withdrawSet(b, s.leadCookie, 'B is wrong too')).body).toMatchObject({ restoredSetId: null })
+    expect((await getSetView(a, s.cookie)).body.set.status).toBe('withdrawn')
+  })
+
+  it('two leads releasing the same set at once: one wins, the other is told, one package is kept', async () => {
+    const s = await setSetup()
+    await approve(s, s.driveRevisionId)
+    await approve(s, s.regenRevisionId)
+    const id = await makeSet(s)
+    await fileSetReport(id, s.driverCookie)
+    const other = await sessionCookie(await makeUser('lead_engineer'))
+    const [x, y] = await Promise.all([releaseSet(id, s.leadCookie), releaseSet(id, other)])
+    expect([x.status, y.status].sort()).toEqual([200, 409])
+    expect((await getSetView(id, s.cookie)).body.set.releases).toHaveLength(1)
+  })
+
+  it('a release keeps its evidence: the driver can no longer edit it, a lead cannot move it', async () => {
+    const s = await setSetup()
+    await approve(s, s.driveRevisionId)
+    await approve(s, s.regenRevisionId)
+    const id = await makeSet(s)
+    const reportId = await fileSetReport(id, s.driverCookie)
+    expect((await releaseSet(id, s.leadCookie)).status).toBe(200)
+    const edit = await call(reportRoute.PUT, { method: 'PUT', cookie: s.driverCookie, params: { id: String(reportId) }, body: setReportBody(id, { comments: 'changed after the release' }) })
+    expect(edit.status).toBe(409)
+    const regen2 = await saveRevision(s, s.regenMapId, 1, { ...GENTLE_REGEN, values: [[0, 25, 25], [0, 60, 60], [0, 100, 100]] })
+    const target = await makeSet(s, { regenRevisionId: regen2 })
+    const moved = await call(reportSetRoute.POST, { method: 'POST', cookie: s.leadCookie, params: { id: String(reportId) }, body: { setId: target, reason: 'wrong set' } })
+    expect(moved.status).toBe(409)
+    expect(moved.body.error.message).toMatch(/released with its reports as evidence/)
+    // The released set's gate reads as met: the release's acknowledgements count.
+    expect(gateMet(await getSetView(id, s.leadCookie)).traction).toBe(true)
+  })
+
+  it('refuses an exception acknowledged twice, naming the repeat; the program says its latest version number', async () => {
+    const s = await setSetup({ drive: STRONG })
+    await approve(s, s.driveRevisionId)
+    await approve(s, s.regenRevisionId)
+    const id = await makeSet(s)
+    await fileSetReport(id, s.driverCookie)
+    const keys: string[] = (await getSetView(id, s.leadCookie)).body.gate.exceptions.map((e: { key: string }) => e.key)
+    const twice = await releaseSet(id, s.leadCookie, [...keys.map((key) => ({ key, reason: 'r' })), { key: keys[0], reason: 'other' }])
+    expect(twice.status).toBe(400)
+    expect(twice.body.error.message).toMatch(new RegExp(`acknowledgements\\.${keys.length}\\.key: .*acknowledged twice`))
+
+    const db = await getDb()
+    const [program] = await db.select().from(vehiclePrograms).where(eq(vehiclePrograms.id, s.programId))
+    const put = await call(programRoute.PUT, { method: 'PUT', cookie: s.cookie, params: { id: String(s.programId) }, body: { name: program.name, description: '', params: { ...program.params, emptyMassKg: program.params.emptyMassKg + 100 }, reason: 'weighed' } })
+    expect(put.body.program.paramVersion).toBe(2)
+    expect((await call(programRoute.GET, { cookie: s.cookie, params: { id: String(s.programId) } })).body.program.paramVersion).toBe(2)
   })
 })

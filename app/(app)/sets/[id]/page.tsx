@@ -105,7 +105,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
         {isLead && set.status === 'released' && <WithdrawPanel setId={set.id} setNumber={set.number} />}
         <SetDownloads setId={set.id} status={set.status} release={latest} test={{ sha256: test.sha256, bytes: test.bytes.length }} />
       </section>
-      <SetReports setId={set.id} reports={reports} canFile={user.role === 'test_driver'} />
+      <SetReports setId={set.id} reports={reports} canFile={user.role === 'test_driver' && set.status !== 'withdrawn'} />
       <SetHistoryList events={history} />
     </div>
   )

@@ -19,6 +19,11 @@ export const POST = withRole<{ id: string }>(['lead_engineer'], async (req, { us
   if (set.programId !== report.programId)
     throw new ValidationError(`setId: set ${set.number} belongs to another vehicle program (${set.programName}); a report can only be moved to a set of ${report.programName}`)
   if (set.id === report.setId) throw new ConflictError(`The report is already filed against set ${set.number}`)
+  // A release keeps its evidence: a report on a released set stays there, and a released set's evidence list is closed.
+  const from = await getSet(report.setId)
+  for (const s of [from, set])
+    if (s && s.releases.length > 0)
+      throw new ConflictError(`${s.programName} · Set ${s.number} has been released with its reports as evidence; a report on it cannot be moved, and none can be moved onto it (file a new report instead)`)
   try {
     checkFitsSet(set, { loadCase: report.loadCase, flags: report.flags })
   } catch (e) {

@@ -105,7 +105,12 @@ export function setGate(input: {
     {
       id: 'approved',
       met: unapproved.length === 0,
-      summary: unapproved.length === 0 ? 'Every map revision in the set is approved' : `${unapproved.length} map revision(s) not approved`,
+      summary:
+        unapproved.length === 0
+          ? 'Every map revision in the set is approved'
+          : unapproved.length === 1
+            ? `${unapproved[0].mapName} r${unapproved[0].number} is not approved (it is “${STATE_LABELS[unapproved[0].state]}”)`
+            : `${unapproved.length} map revisions are not approved`,
       details: unapproved.map((p) => `${p.mapName} r${p.number} is “${STATE_LABELS[p.state]}”`),
     },
     {

@@ -35,6 +35,8 @@ const mapColumns = {
 /** Everything a page about one map needs of the map and its program. */
 const mapWithProgramColumns = {
   ...mapColumns,
+  /** The program's latest parameter version: the editor, the map pages and their API judge with it (a set names its own). */
+  programParamVersion: sql<number>`(select max(pv.number)::int from param_versions pv where pv.program_id = vehicle_programs.id)`,
   programParams: vehiclePrograms.params,
   programReleaseConditions: vehiclePrograms.releaseConditions,
   createdAt: maps.createdAt,

@@ -7,6 +7,7 @@ import { strFromU8, unzipSync } from 'fflate'
 import * as actionsRoute from '@/app/api/revisions/[revisionId]/actions/route'
 import * as reportRoute from '@/app/api/reports/[id]/route'
 import * as reportSetRoute from '@/app/api/reports/[id]/set/route'
+import * as revisionRoute from '@/app/api/maps/[id]/revisions/[number]/route'
 import * as programRoute from '@/app/api/programs/[id]/route'
 import * as setsRoute from '@/app/api/sets/route'
 import { getDb } from '@/db/client'
@@ -161,6 +162,9 @@ describe('vehicle parameters are versioned; a set is judged with its own version
       body: { ...body, releaseConditions: { surfaces: ['wet-asphalt', 'packed-snow', 'ice'], loadCases: ['empty', 'laden'], marginPct: 10 }, reason: 'Winter trials add ice' },
     })
     expect(withIce.body.newParamVersion).toBe(3)
+    // The map pages and their API say which version they judge with: the program's latest.
+    const rev = await call(revisionRoute.GET, { cookie: s.cookie, params: { id: String(s.mapId), number: '1' } })
+    expect(rev.body.paramVersion).toBe(3)
     expect(gateMet(await getSetView(onV1, s.leadCookie)).traction).toBe(true)
     const onV3 = await makeSet(s, { paramVersion: 3 })
     expect(gateMet(await getSetView(onV3, s.leadCookie)).traction).toBe(false)

@@ -62,7 +62,8 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
               Validation: {errors} error(s), {findings.length - errors} warning(s) —{' '}
               <Link href={`/maps/${map.id}/revisions/${r.number}`} className="text-accent hover:underline">see them on the map</Link>
             </>
-          )}
+          )}{' '}
+          <span className="text-slate-600">(judged with parameter version {map.programParamVersion}, the program&apos;s latest; each set below is judged with its own)</span>
         </p>
       </div>
       <ChangesSummary

@@ -42,6 +42,9 @@ export default async function RevisionPage(props: { params: Promise<{ id: string
           <code className="break-all text-xs">{revision.checksum}</code>
         </p>
         {revision.notes && <pre className="whitespace-pre-wrap font-sans text-slate-700">{revision.notes}</pre>}
+        <p className="text-slate-600" data-testid="judged-with">
+          Findings below are judged with parameter version {map.programParamVersion} of {map.programName} (its latest); a map set is judged with the version it names.
+        </p>
       </section>
       <RevisionViewerLazy mapId={map.id} number={revision.number} table={revision.table} limits={limitsOrNull(map.programParams)} />
     </div>

@@ -8,5 +8,5 @@ export const GET = withRole<{ id: string; number: string }>('signed-in', async (
   const q = overlayQuerySchema.parse(queryObject(req))
   const { map, revision } = await loadMapRevision(params.id, params.number)
   const overlay = overlayFor(map.programParams, revision.table, q)
-  return Response.json({ mapId: map.id, number: revision.number, ...q, ...overlay })
+  return Response.json({ mapId: map.id, number: revision.number, paramVersion: map.programParamVersion, ...q, ...overlay })
 })

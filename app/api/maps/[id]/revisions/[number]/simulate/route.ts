@@ -7,5 +7,5 @@ import { simulate, simulateQuerySchema } from '@/app/_lib/physics/simulate'
 export const GET = withRole<{ id: string; number: string }>('signed-in', async (req, { params }) => {
   const q = simulateQuerySchema.parse(queryObject(req))
   const { map, revision } = await loadMapRevision(params.id, params.number)
-  return Response.json({ mapId: map.id, number: revision.number, query: q, ...simulate(map.programParams, revision.table, q) })
+  return Response.json({ mapId: map.id, number: revision.number, paramVersion: map.programParamVersion, query: q, ...simulate(map.programParams, revision.table, q) })
 })

@@ -267,11 +267,16 @@ export const driveLogs = pgTable(
     analysis: jsonb('analysis').$type<AnalysisResult>(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     analysedAt: timestamp('analysed_at', { withTimezone: true }),
+    /** The analysis job: which worker holds it and until when; an expired lease lets any server take it over. */
+    claimedBy: text('claimed_by'),
+    leaseUntil: timestamp('lease_until', { withTimezone: true }),
+    attempts: integer('attempts').notNull().default(0),
   },
   (t) => [
     uniqueIndex('drive_logs_object_key_idx').on(t.objectKey),
     index('drive_logs_report_idx').on(t.reportId),
     check('drive_logs_status_check', oneOf(t.status, LOG_STATUSES)),
+    index('drive_logs_jobs_idx').on(t.status, t.leaseUntil),
   ],
 )
 
@@ -479,4 +484,20 @@ export const idempotencyKeys = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex('idempotency_keys_user_scope_key_idx').on(t.userId, t.scope, t.key)],
+)
+
+/**
+ * Counted events for limits that must hold across every app server (failed sign-ins, password-reset
+ * requests): one row per event and key, counted over a sliding window and pruned once older than it.
+ */
+export const rateEvents = pgTable(
+  'rate_events',
+  {
+    // bigint: rows come and go fast and ids are never reused.
+    id: bigint('id', { mode: 'number' }).primaryKey().generatedAlwaysAsIdentity(),
+    /** What is counted and for whom, e.g. "sign-in-fail:account:3" or "forgot:address:10.0.0.7". */
+    key: text('key').notNull(),
+    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('rate_events_key_at_idx').on(t.key, t.at), index('rate_events_at_idx').on(t.at)],
 )

@@ -1,7 +1,7 @@
 // Object storage for drive logs (S3 API). The demo seed also stores logs, under tsx --conditions=react-server.
 import 'server-only'
 import { Readable } from 'node:stream'
-import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, S3Client } from '@aws-sdk/client-s3'
+import { DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, HeadObjectCommand, S3Client } from '@aws-sdk/client-s3'
 import { Upload } from '@aws-sdk/lib-storage'
 import { env } from '../config/env'
 
@@ -51,4 +51,9 @@ export async function objectSize(objectKey: string): Promise<number | null> {
 
 export async function deleteObject(objectKey: string): Promise<void> {
   await client().send(new DeleteObjectCommand({ Bucket: bucket(), Key: objectKey }))
+}
+
+/** Does the store answer for our bucket? (The health route; throws with the store's reason when not.) */
+export async function storageAnswers(): Promise<void> {
+  await client().send(new HeadBucketCommand({ Bucket: bucket() }))
 }

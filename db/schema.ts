@@ -495,7 +495,7 @@ export const rateEvents = pgTable(
   {
     // bigint: rows come and go fast and ids are never reused.
     id: bigint('id', { mode: 'number' }).primaryKey().generatedAlwaysAsIdentity(),
-    /** What is counted and for whom, e.g. "sign-in-fail:account:3" or "forgot:address:10.0.0.7". */
+    /** What is counted and for whom: a scope and a digest of the key, e.g. "sign-in-fail:<sha-256>" (rateKey). */
     key: text('key').notNull(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
   },

@@ -28,18 +28,18 @@ export async function checkCredentials(email: string, password: string, ip: stri
   // address, so failures from elsewhere never lock the owner out (docs/security.md).
   const slowOnly = [`account:${account}`]
   const refusing = [`pair:${account}|${address}`, ...(ip ? [`ip:${ip}`] : [])]
-  const verdict = checkAttempt(refusing, Date.now(), slowOnly)
+  const verdict = await checkAttempt(refusing, slowOnly)
   if (!verdict.allowed) throw new SignInLockedError(verdict.retryAfterS)
   if (verdict.delayMs) await sleep(verdict.delayMs)
   const user = await getUserCredentials(email)
   // Unknown and disabled accounts are checked against a dummy hash: every answer costs one argon2id verify.
   const verified = await verifyPassword(user && !user.disabled ? user.passwordHash : await dummyHash(), password)
   if (!verified || !user || user.disabled) {
-    recordFailure([...slowOnly, ...refusing])
+    await recordFailure([...slowOnly, ...refusing])
     if (user) await recordAudit({ actorId: user.id, action: 'auth.failed', entityType: 'user', entityId: user.id, details: { ip } })
     return null
   }
-  clearFailures([...slowOnly, refusing[0]])
+  await clearFailures([...slowOnly, refusing[0]])
   await recordAudit({ actorId: user.id, action: 'auth.signin', entityType: 'user', entityId: user.id, details: { ip } })
   return { id: user.id, email: user.email, name: user.name, role: user.role, sessionVersion: user.sessionVersion }
 }

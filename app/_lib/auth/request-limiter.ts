@@ -1,31 +1,37 @@
 import 'server-only'
+import { clearScope, rateKey, takeEvent } from '@/db/queries/rate-events'
 
 /**
- * A fixed budget of requests per key within a sliding window, in process memory (one server; see
- * docs/security.md for several). Used for the forgot-password route, per account and per address.
+ * A fixed budget of requests per key within a sliding window, counted in the shared database
+ * (rate_events, by its clock) so the budget holds across every app server. Used for the
+ * forgot-password route, per account and per address. `scope` names the limiter: two limiters
+ * with different scopes never share counts.
  */
 export class RequestLimiter {
-  private readonly hits = new Map<string, number[]>()
-
   constructor(
+    private readonly scope: string,
     private readonly max: number,
     private readonly windowMs: number,
   ) {}
 
-  /** Seconds until the key may ask again, or 0 if it may now (and then the request is counted). */
-  take(keys: string[], now = Date.now()): number {
+  /**
+   * Seconds until the keys may ask again, or 0 if they may now (and then the request is counted for
+   * each key). Check and count are one step: two servers cannot both take the last slot.
+   */
+  async take(keys: string[]): Promise<number> {
+    const { taken, counts } = await takeEvent(
+      keys.map((k) => rateKey(this.scope, k)),
+      this.max,
+      this.windowMs,
+    )
+    if (taken) return 0
     let wait = 0
-    for (const k of keys) {
-      const list = (this.hits.get(k) ?? []).filter((t) => now - t < this.windowMs)
-      this.hits.set(k, list)
-      if (list.length >= this.max) wait = Math.max(wait, Math.ceil((list[0] + this.windowMs - now) / 1000))
-    }
-    if (wait === 0) for (const k of keys) this.hits.get(k)!.push(now)
-    if (this.hits.size > 50_000) this.hits.clear() // a flood of distinct keys must not grow memory for ever
-    return wait
+    for (const c of counts) if (c.count >= this.max) wait = Math.max(wait, Math.ceil((this.windowMs - c.oldestAgeMs) / 1000))
+    return Math.max(1, wait)
   }
 
-  reset(): void {
-    this.hits.clear()
+  /** For tests: forget this limiter's counts. */
+  async reset(): Promise<void> {
+    await clearScope(this.scope)
   }
 }

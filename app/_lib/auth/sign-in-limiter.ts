@@ -2,10 +2,11 @@
  * Slows down and then refuses repeated failed sign-ins: the caller says which counts only slow down
  * (the account's, so nobody elsewhere can lock its owner out) and which may refuse (one address on
  * one account, and one address across accounts).
- * Kept in process memory: enough for one server; behind several servers, put the counts in the
- * shared database or the proxy in front (docs/security.md).
+ * The failures are rows of rate_events in the shared database, timed by its clock, so every app
+ * server counts the same failures (docs/security.md).
  */
 import 'server-only'
+import { clearEvents, clearScope, countEvents, rateKey, recordEvents, type KeyCount } from '@/db/queries/rate-events'
 
 export const LIMITS = {
   /** Failures counted within this window, ms. */
@@ -19,46 +20,48 @@ export const LIMITS = {
   maxDelayMs: 4000,
 }
 
-const failures = new Map<string, number[]>()
-
-function recent(key: string, now: number): number[] {
-  const list = (failures.get(key) ?? []).filter((t) => now - t < LIMITS.windowMs)
-  if (list.length) failures.set(key, list)
-  else failures.delete(key)
-  return list
-}
+const SCOPE = 'sign-in-fail'
+const stored = (keys: string[]) => keys.map((k) => rateKey(SCOPE, k))
 
 export type Verdict = { allowed: true; delayMs: number } | { allowed: false; retryAfterS: number }
+
+/**
+ * The verdict from the counts within the window (pure): every key's failures slow the attempt down;
+ * only the `refusing` keys can refuse it. The wait is counted from the oldest failure of the refusing
+ * key with the most failures (the first such key on a tie).
+ */
+export function verdict(refusing: KeyCount[], slowOnly: KeyCount[] = []): Verdict {
+  let worstRefusing = 0
+  let oldestAgeMs = 0
+  for (const c of refusing) {
+    if (c.count > worstRefusing) {
+      worstRefusing = c.count
+      oldestAgeMs = c.oldestAgeMs
+    }
+  }
+  const worst = Math.max(0, ...[...refusing, ...slowOnly].map((c) => c.count))
+  if (worstRefusing >= LIMITS.refuseAt) return { allowed: false, retryAfterS: Math.max(1, Math.ceil((LIMITS.windowMs - oldestAgeMs) / 1000)) }
+  return { allowed: true, delayMs: Math.min(LIMITS.maxDelayMs, Math.max(0, worst - LIMITS.slowAfter + 1) * LIMITS.stepMs) }
+}
 
 /**
  * May an attempt for these keys go ahead now, and after how long a pause? Every key's failures slow
  * the attempt down; only `keys` can refuse it, `slowOnly` keys never do (see credentials.ts).
  */
-export function checkAttempt(keys: string[], now = Date.now(), slowOnly: string[] = []): Verdict {
-  let worst = 0
-  let worstRefusing = 0
-  let oldest = now
-  for (const k of keys) {
-    const list = recent(k, now)
-    if (list.length > worstRefusing) {
-      worstRefusing = list.length
-      oldest = list[0]
-    }
-  }
-  for (const k of [...keys, ...slowOnly]) worst = Math.max(worst, recent(k, now).length)
-  if (worstRefusing >= LIMITS.refuseAt) return { allowed: false, retryAfterS: Math.ceil((oldest + LIMITS.windowMs - now) / 1000) }
-  return { allowed: true, delayMs: Math.min(LIMITS.maxDelayMs, Math.max(0, worst - LIMITS.slowAfter + 1) * LIMITS.stepMs) }
+export async function checkAttempt(keys: string[], slowOnly: string[] = []): Promise<Verdict> {
+  const counts = await countEvents(stored([...keys, ...slowOnly]), LIMITS.windowMs)
+  return verdict(counts.slice(0, keys.length), counts.slice(keys.length))
 }
 
-export function recordFailure(keys: string[], now = Date.now()): void {
-  for (const k of keys) failures.set(k, [...recent(k, now), now])
+export async function recordFailure(keys: string[]): Promise<void> {
+  await recordEvents(stored(keys))
 }
 
-export function clearFailures(keys: string[]): void {
-  for (const k of keys) failures.delete(k)
+export async function clearFailures(keys: string[]): Promise<void> {
+  await clearEvents(stored(keys))
 }
 
-/** For tests. */
-export function resetLimiter(): void {
-  failures.clear()
+/** For tests: forget every failed sign-in. */
+export async function resetLimiter(): Promise<void> {
+  await clearScope(SCOPE)
 }

@@ -32,7 +32,7 @@ describe('sessions and sign-in', () => {
 
   it('many addresses failing on one account never lock it; the account stays slowed, not refused', async () => {
     const user = await makeUser('test_driver', { password: 'the right password' })
-    for (let i = 0; i < LIMITS.refuseAt * 2; i++) recordFailure([`account:${user.email}`, `pair:${user.email}|10.1.0.${i}`, `ip:10.1.0.${i}`])
+    for (let i = 0; i < LIMITS.refuseAt * 2; i++) await recordFailure([`account:${user.email}`, `pair:${user.email}|10.1.0.${i}`, `ip:10.1.0.${i}`])
     expect(await checkCredentials(user.email, 'the right password', '10.2.0.1')).toMatchObject({ id: user.id })
   }, 60_000)
 })

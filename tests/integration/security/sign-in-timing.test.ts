@@ -18,8 +18,8 @@ vi.mock('@/app/_lib/auth/password', async (importOriginal) => {
 })
 
 describe('sign-in timing', () => {
-  beforeEach(() => {
-    resetLimiter()
+  beforeEach(async () => {
+    await resetLimiter()
     verify.calls.length = 0
   })
 

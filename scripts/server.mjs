@@ -30,7 +30,12 @@ if (import.meta.url === pathToFileURL(process.argv[1]).href) {
   await app.prepare()
   const server = http.createServer(stampingListener(app.getRequestHandler()))
   server.listen(port, hostname, () => console.log(`▲ Ready on http://${hostname}:${port}`))
-  const stop = () => server.close(() => process.exit(0))
+  // After the last request, the drive-log worker (instrumentation.ts) finishes or releases its analyses.
+  const stop = () =>
+    server.close(async () => {
+      await globalThis[Symbol.for('mapwright.log-worker')]?.stop()
+      process.exit(0)
+    })
   process.on('SIGTERM', stop)
   process.on('SIGINT', stop)
 }

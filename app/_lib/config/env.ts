@@ -18,6 +18,8 @@ const schema = z.object({
   MAIL_FROM: z.string().default('Mapwright <mapwright@localhost>'),
   MAIL_OUTBOX_FILE: z.string().optional(),
   LOG_MAX_BYTES: z.coerce.number().int().positive().default(200 * 1024 * 1024),
+  // Drive-log analyses this server runs at once; 0: it runs none (another server's worker must).
+  LOG_ANALYSIS_CONCURRENCY: z.coerce.number().int().min(0).max(16).default(2),
   // Addresses of reverse proxies whose X-Forwarded-For is believed, comma-separated; unset: none.
   TRUSTED_PROXIES: z
     .string()

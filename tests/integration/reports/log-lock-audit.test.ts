@@ -1,10 +1,11 @@
 // Drive logs belong to the report as the lead read it: none is added or removed after the read, and
 // every upload, re-analysis and removal leaves an audit row. Analyses run against the report's set.
-import { describe, expect, it } from 'vitest'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import * as logsRoute from '@/app/api/reports/[id]/logs/route'
 import * as logRoute from '@/app/api/reports/[id]/logs/[logId]/route'
 import * as readRoute from '@/app/api/reports/[id]/read/route'
 import * as reportSetRoute from '@/app/api/reports/[id]/set/route'
+import { startLogWorker, stopLogWorker } from '@/app/_lib/reports/log-worker'
 import { objectSize } from '@/app/_lib/storage/object-store'
 import { listAudit } from '@/db/queries/audit'
 import { getLog, listLogs } from '@/db/queries/logs'
@@ -18,7 +19,11 @@ async function upload(reportId: number, cookie: string, body: BodyInit, name = '
   return { status: res.status, body: await res.json() }
 }
 
-/** Wait for the background analysis started by a route to finish (done or failed). */
+// This process's log worker, as a server runs one: it analyses what the routes upload or ask for again.
+beforeAll(() => void startLogWorker({ pollMs: 100 }))
+afterAll(() => stopLogWorker({ graceMs: 0 }))
+
+/** Wait for the worker's analysis of a log to finish (done or failed). */
 async function settled(logId: number, after?: Date) {
   for (let i = 0; i < 600; i++) {
     const log = await getLog(logId)

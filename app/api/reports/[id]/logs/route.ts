@@ -3,7 +3,7 @@ import { withRole } from '@/app/_lib/http/access'
 import { env } from '@/app/_lib/config/env'
 import { ConflictError, ValidationError } from '@/app/_lib/http/errors'
 import { AFTER_READ, assertOwner, assertUnread, loadReport } from '@/app/_lib/reports/access'
-import { startLogAnalysis } from '@/app/_lib/reports/log-jobs'
+import { nudgeLogWorker } from '@/app/_lib/reports/log-jobs'
 import { deleteObject, putObjectStream } from '@/app/_lib/storage/object-store'
 import { CsvUploadGuard, guardedBody, PayloadTooLargeError, UnsupportedFileError, uploadFailure } from '@/app/_lib/http/upload-guard'
 import { addLogUnlessRead, listLogs } from '@/db/queries/logs'
@@ -16,7 +16,8 @@ export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }
 })
 
 // POST /api/reports/:id/logs?name=&mapping= — the filing driver uploads a CSV data log (raw body), streamed to
-// storage, until a lead has read the report (409 after); audited. Analysed in the background against the report's set.
+// storage, until a lead has read the report (409 after); audited. Analysed in the background against the report's set,
+// by whichever server's log worker claims it first.
 export const POST = withRole<{ id: string }>(['test_driver'], async (req, { user, params }) => {
   const report = await loadReport(params.id)
   assertOwner(report, user)
@@ -55,6 +56,7 @@ export const POST = withRole<{ id: string }>(['test_driver'], async (req, { user
     await deleteObject(objectKey).catch(() => {})
     throw new ConflictError(AFTER_READ['add-log'])
   }
-  startLogAnalysis(log.id)
+  // Stored as 'uploaded': a worker (this server's, or any other's) claims and analyses it.
+  nudgeLogWorker()
   return Response.json({ log }, { status: 201 })
 }, { accepts: ['text/csv'] })

@@ -31,7 +31,7 @@ export const POST = withRole<{ id: string }>(['lead_engineer'], async (req, { us
     throw e
   }
   if (!(await correctReportSet(report.id, set.id, user.id, reason))) throw new NotFoundError(`Drive report ${report.id}`)
-  // Done logs, and those still being read (run once more when they finish); a failed one waits for its driver.
+  // Done logs, and those still being read (their run stops and they are claimed again); a failed one waits for its driver.
   const logs = (await listLogs(report.id)).filter((l) => l.status !== 'failed')
   for (const log of logs) await reanalyseLog(log, user.id, 'set-corrected')
   return Response.json({ report: await getReport(report.id), reanalysing: logs.map((l) => l.id) })

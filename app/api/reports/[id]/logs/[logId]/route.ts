@@ -29,12 +29,14 @@ export const GET = withRole<{ id: string; logId: string }>('signed-in', async (_
   return Response.json({ log, predictions })
 })
 
-// POST /api/reports/:id/logs/:logId — the filing driver or a lead runs the analysis again (e.g. after a failed parse); audited
+// POST /api/reports/:id/logs/:logId — the filing driver or a lead runs the analysis again (e.g. after a failed parse); audited.
+// The log goes back to 'uploaded' for a log worker to claim; a run in progress stops and its result is not written
 export const POST = withRole<{ id: string; logId: string }>(['test_driver', 'lead_engineer'], async (_req, { user, params }) => {
   const { report, log } = await loadLog(params.id, params.logId)
   if (user.role !== 'lead_engineer') assertOwner(report, user)
-  await reanalyseLog(log, user.id, 'requested')
-  return Response.json({ log: { ...log, status: 'analysing' } }, { status: 202 })
+  const queued = await reanalyseLog(log, user.id, 'requested')
+  if (!queued) throw new NotFoundError(`Log ${params.logId} of report ${report.id}`)
+  return Response.json({ log: queued }, { status: 202 })
 })
 
 // DELETE /api/reports/:id/logs/:logId — the filing driver removes a log (a wrong file), until a lead has read the report; audited

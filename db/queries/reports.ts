@@ -1,5 +1,6 @@
-import { and, asc, desc, eq, inArray, isNull, or, sql, type SQL } from 'drizzle-orm'
+import { and, asc, desc, eq, inArray, isNull, or, type SQL } from 'drizzle-orm'
 import { driveMap, driveRev, regenMap, regenRev, setPartColumns } from './set-parts'
+import { listSets } from './sets'
 import { getDb, type Db } from '../client'
 import { SAFETY_SEVERITY } from '../../domain/report-safety'
 import type { SurfaceId } from '../../physics/surfaces'
@@ -233,43 +234,16 @@ export interface SetChoice {
 
 /** Sets for the report form, newest first (of one program, or the ones asked for by id). */
 export async function setChoices(filter: { ids?: number[]; programId?: number } = {}): Promise<SetChoice[]> {
-  const db = await getDb()
-  const rows = await db
-    .select({
-      id: mapSets.id,
-      number: mapSets.number,
-      programId: mapSets.programId,
-      programName: vehiclePrograms.name,
-      paramVersion: paramVersions.number,
-      params: paramVersions.params,
-      released: sql<boolean>`exists (select 1 from set_releases sr where sr.set_id = ${mapSets.id} and sr.retired_at is null and sr.withdrawn_at is null)`,
-      ...setPartColumns,
-    })
-    .from(mapSets)
-    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, mapSets.programId))
-    .innerJoin(paramVersions, eq(paramVersions.id, mapSets.paramVersionId))
-    .leftJoin(driveRev, eq(driveRev.id, mapSets.driveRevisionId))
-    .leftJoin(driveMap, eq(driveMap.id, driveRev.mapId))
-    .leftJoin(regenRev, eq(regenRev.id, mapSets.regenRevisionId))
-    .leftJoin(regenMap, eq(regenMap.id, regenRev.mapId))
-    .where(
-      and(
-        filter.ids ? (filter.ids.length ? inArray(mapSets.id, filter.ids) : sql`false`) : undefined,
-        filter.programId ? eq(mapSets.programId, filter.programId) : undefined,
-      ),
-    )
-    .orderBy(desc(mapSets.createdAt), desc(mapSets.id))
-    .limit(500)
   const part = (revisionId: number | null, number: number | null, checksum: string | null, mapId: number | null, mapName: string | null): SetChoicePart | null =>
     revisionId !== null && number !== null && checksum !== null && mapId !== null && mapName !== null ? { revisionId, number, checksum, mapId, mapName } : null
-  return rows.map((r) => ({
+  return (await listSets(filter)).map((r) => ({
     id: r.id,
     number: r.number,
     programId: r.programId,
     programName: r.programName,
     paramVersion: r.paramVersion,
     loadCases: loadCasesFor(r.params),
-    released: Boolean(r.released),
+    released: r.status === 'released',
     drive: part(r.driveRevisionId, r.driveNumber, r.driveChecksum, r.driveMapId, r.driveMapName),
     regen: part(r.regenRevisionId, r.regenNumber, r.regenChecksum, r.regenMapId, r.regenMapName),
   }))

@@ -131,17 +131,22 @@ export async function listSetReleases(setId: number, conn?: Db): Promise<SetRele
 
 const creator = alias(users, 'creator')
 
+/** A set's own columns with its program's name (queries from map_sets joined to vehicle_programs). */
+const setColumns = {
+  id: mapSets.id,
+  number: mapSets.number,
+  programId: mapSets.programId,
+  programName: vehiclePrograms.name,
+  note: mapSets.note,
+  createdAt: mapSets.createdAt,
+}
+
 /** One set with its parts (tables included), parameter version and releases. */
 export async function getSet(id: number): Promise<MapSetFull | null> {
   const db = await getDb()
   const [row] = await db
     .select({
-      id: mapSets.id,
-      number: mapSets.number,
-      programId: mapSets.programId,
-      programName: vehiclePrograms.name,
-      note: mapSets.note,
-      createdAt: mapSets.createdAt,
+      ...setColumns,
       createdByName: creator.name,
       driveRevisionId: mapSets.driveRevisionId,
       regenRevisionId: mapSets.regenRevisionId,
@@ -179,14 +184,10 @@ export async function listSets(filter: { programId?: number; revisionId?: number
   if (filter.ids) conds.push(filter.ids.length ? inArray(mapSets.id, filter.ids) : sql`false`)
   const rows = await db
     .select({
-      id: mapSets.id,
-      number: mapSets.number,
-      programId: mapSets.programId,
-      programName: vehiclePrograms.name,
-      note: mapSets.note,
-      createdAt: mapSets.createdAt,
+      ...setColumns,
       ...setPartColumns,
       paramVersion: paramVersions.number,
+      params: paramVersions.params,
       reports: sql<number>`(select count(*) from drive_reports d where d.set_id = map_sets.id)::int`,
       releaseId: sql<number | null>`${latestRelease('id')}`,
       retiredAt: sql<string | null>`${latestRelease('retired_at')}`,

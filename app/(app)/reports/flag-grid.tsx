@@ -35,7 +35,7 @@ export function FlagGrid(props: { mapId: number; revisionNumber: number; kind: '
                 <td key={s} className="p-0">
                   <button
                     type="button"
-                    aria-label={`Flag ${p} % ${pedal} at ${s} km/h (${Math.round(t.values[r][c])})`}
+                    aria-label={`${Math.round(t.values[r][c])}: flag ${p} % ${pedal} at ${s} km/h`}
                     onClick={() => props.onPick(p, s)}
                     className={`h-8 min-w-10 border border-line px-1 tabular-nums ${isFlagged(p, s) ? 'bg-amber-300 font-bold' : 'bg-white hover:bg-accent-soft'}`}
                   >

@@ -9,7 +9,7 @@ export function ChangesSummary(props: {
   changes: MapDiff | null
 }) {
   const rel = props.released
-  const setLink = rel && <Link href={`/sets/${rel.setId}`} className="text-accent hover:underline">set {rel.setNumber}</Link>
+  const setLink = rel && <Link href={`/sets/${rel.setId}`} className="text-accent underline">set {rel.setNumber}</Link>
   if (!rel) return <section className="card text-sm">No released map set holds a revision of this map; there is nothing in the trucks to compare with.</section>
   if (rel.number === props.number) return <section className="card text-sm">This revision is in the trucks now, in the released {setLink}.</section>
   if (!props.changes) return null

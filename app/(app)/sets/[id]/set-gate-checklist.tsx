@@ -22,7 +22,7 @@ export function SetGateChecklist({ gate, programId }: { gate: SetGateResult; pro
                 {c.summary}
                 {link && (
                   <>
-                    {' '}· <Link href={link.href} className="text-accent hover:underline">{link.label}</Link>
+                    {' '}· <Link href={link.href} className="text-accent underline">{link.label}</Link>
                   </>
                 )}
                 {c.details.length > 0 && (

@@ -30,6 +30,18 @@ export default defineConfig({
           hookTimeout: 60_000,
         },
       },
+      {
+        resolve: { alias },
+        test: {
+          // Production servers as child processes on the PostgreSQL server TEST_DATABASE_URL names (npm test's PostgreSQL pass).
+          name: 'cluster',
+          include: ['tests/cluster/**/*.test.ts'],
+          environment: 'node',
+          fileParallelism: false,
+          testTimeout: 120_000,
+          hookTimeout: 300_000,
+        },
+      },
     ],
   },
 })

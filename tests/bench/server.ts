@@ -8,6 +8,7 @@ import fs from 'node:fs'
 import net from 'node:net'
 import path from 'node:path'
 import { ROOT } from './report'
+import { signIn as signInAs } from '../support/sign-in'
 
 export const DEMO_EMAIL = 'calib@brackwater.example'
 export const DEMO_PASSWORD = 'mapwright-demo'
@@ -117,29 +118,7 @@ async function startOnce(): Promise<BenchServer> {
   }
 }
 
-/** `name=value` pairs from Set-Cookie headers, merged into a Cookie header. */
-function mergeCookies(jar: Map<string, string>, res: Response): void {
-  for (const c of res.headers.getSetCookie()) {
-    const [pair] = c.split(';')
-    const eq = pair.indexOf('=')
-    if (eq > 0) jar.set(pair.slice(0, eq).trim(), pair.slice(eq + 1).trim())
-  }
-}
-const cookieHeader = (jar: Map<string, string>) => [...jar].map(([k, v]) => `${k}=${v}`).join('; ')
-
-/** Signs in through next-auth's credentials flow; returns the Cookie header and the cookies as pairs. */
-export async function signIn(baseUrl: string, email = DEMO_EMAIL, password = DEMO_PASSWORD): Promise<{ cookie: string; cookies: { name: string; value: string }[] }> {
-  const jar = new Map<string, string>()
-  const csrfRes = await fetch(`${baseUrl}/api/auth/csrf`)
-  mergeCookies(jar, csrfRes)
-  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string }
-  const res = await fetch(`${baseUrl}/api/auth/callback/credentials`, {
-    method: 'POST',
-    redirect: 'manual',
-    headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: cookieHeader(jar) },
-    body: new URLSearchParams({ csrfToken, email, password, callbackUrl: `${baseUrl}/`, json: 'true' }).toString(),
-  })
-  mergeCookies(jar, res)
-  if (![...jar.keys()].some((k) => k.endsWith('next-auth.session-token'))) throw new Error(`sign-in failed (status ${res.status})`)
-  return { cookie: cookieHeader(jar), cookies: [...jar].map(([name, value]) => ({ name, value })) }
+/** Signs in through next-auth's credentials flow (as the demo calibration engineer unless told). */
+export function signIn(baseUrl: string, email = DEMO_EMAIL, password = DEMO_PASSWORD): Promise<{ cookie: string; cookies: { name: string; value: string }[] }> {
+  return signInAs(baseUrl, email, password)
 }

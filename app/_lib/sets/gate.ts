@@ -16,6 +16,7 @@ import { surfaceLabel, type SurfaceId } from '@/physics/surfaces'
 import { loadCaseLabel } from '@/physics/load-cases'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
 import { LOW_FRICTION, tractionExceptions } from '../review/gate'
+import { checkRampsAgainstMaps, type RampLimits } from '@/maps/ramps'
 
 /** Review states in which a revision has been approved by a lead (released and replaced ones were). */
 export const APPROVED_STATES: readonly RevisionState[] = ['approved', 'released', 'retired']
@@ -39,7 +40,7 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'drive-report' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'drive-report' | 'safety'
   met: boolean
   summary: string
   details: string[]
@@ -70,6 +71,8 @@ export function setGate(input: {
   /** Open safety concerns on any revision of the set: report id and the set it was filed on. */
   concerns: { reportId: number; setNumber: number }[]
   acknowledgements: Acknowledgement[]
+  /** The set's ramp limits, or null when it holds none. */
+  ramps?: RampLimits | null
 }): SetGateResult {
   const { parts, vehicle, conditions } = input
   const kinds = new Set(parts.map((p) => p.kind))
@@ -125,6 +128,7 @@ export function setGate(input: {
       summary: unexportable.length === 0 ? 'Both maps export exactly to the C header' : `${unexportable.length} map(s) cannot be exported exactly`,
       details: unexportable,
     },
+    rampCondition(input.ramps ?? null, parts),
     {
       id: 'traction',
       met: declared && unacknowledged.length === 0,
@@ -149,4 +153,22 @@ export function setGate(input: {
     },
   ]
   return { ok: all.every((c) => c.met), conditions: all, exceptions, unacknowledged }
+}
+
+/** The largest drive torque and regen torque the set's maps ask for, N·m. */
+export function torqueRange(parts: Pick<SetGatePart, 'kind' | 'table'>[]): { driveMaxNm: number; regenMaxNm: number } {
+  const max = (kind: MapKind) => Math.max(0, ...parts.filter((p) => p.kind === kind).flatMap((p) => p.table.values.flat().map(Math.abs)))
+  return { driveMaxNm: max('drive'), regenMaxNm: max('regen') }
+}
+
+/** Ramp limits, when the set holds them, must fit its maps (the lash band inside their torque range). */
+function rampCondition(ramps: RampLimits | null, parts: SetGatePart[]): SetGateCondition {
+  if (!ramps) return { id: 'ramps', met: true, summary: 'The set holds no ramp limits: the controller keeps the ones it has', details: [] }
+  const errors = checkRampsAgainstMaps(ramps, torqueRange(parts)).filter((f) => f.severity === 'error')
+  return {
+    id: 'ramps',
+    met: errors.length === 0,
+    summary: errors.length === 0 ? 'The ramp limits fit the maps' : `The ramp limits do not fit the maps (${errors.length} problem(s))`,
+    details: errors.map((f) => f.message),
+  }
 }

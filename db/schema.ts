@@ -41,6 +41,8 @@ export interface ReleaseConditions {
   surfaces: SurfaceId[]
   loadCases: LoadCase[]
   marginPct: number
+  /** Design lateral acceleration at the tyres, m/s²; absent in versions saved before it existed (physics default applies). */
+  designLateralAccelMps2?: number
 }
 
 /** A gate exception the lead released anyway, with the reason given. */

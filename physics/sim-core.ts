@@ -8,7 +8,7 @@
  * No rollback: at standstill the vehicle is held unless the drive force beats grade and rolling resistance.
  */
 import { driveAxleLoadN } from './axle-model'
-import { resolveSurface } from './cell-slip'
+import { driveCurveFor } from './drive-curve'
 import { SEA_LEVEL_AIR_DENSITY, SLIP_SPEED_FLOOR_MPS, STANDARD_GRAVITY } from './constants'
 import { deliverableAtShaft } from './envelope'
 import { overallRatio, wheelTorqueFromMotor } from './driveline'
@@ -60,8 +60,8 @@ export type TorqueRequest = (pedalPct: number, speedKmh: number) => number
 export function runSimulation(o: SimOptions, pedal: (t: number) => number, request: TorqueRequest, v0: number, crossKmh: number[], stopKmh = -1): SimRun {
   const { vehicle: v, gearIndex = 0 } = o
   const { model } = axleLoadsFor(v, o.loadCase)
-  const coeffs = resolveSurface(o.surface).coeffs
   const cosG = gradeCos(o.gradeRad ?? 0)
+  const coeffs = driveCurveFor(v, model, o.surface, cosG)
   const sinG = Math.sin(o.gradeRad ?? 0)
   const noSlip = o.tyre === 'no-slip'
   const T = requirePositive('durationS', o.durationS)

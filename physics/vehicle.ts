@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { driveTyreSchema, type DriveTyreParams } from './drive-tyre'
 
 /**
  * Parameters of a vehicle program, in SI units (kg, m, N·m, W, rpm for motor speed only).
@@ -46,6 +47,8 @@ export interface VehicleParams {
   driveWheelsInertiaKgM2: number
   /** Tractor only: a semitrailer coupled at the fifth wheel. */
   trailer?: TrailerParams | null
+  /** Drive tyre (slip stiffness, shape, load sensitivity); absent = the default truck tyre (physics/drive-tyre.ts). */
+  driveTyre?: DriveTyreParams | null
 }
 
 /** Semitrailer geometry and masses. Kingpin-to-axle distances are measured rearwards from the kingpin. */
@@ -116,6 +119,7 @@ export const vehicleParamsSchema = z
     motorInertiaKgM2: z.number().min(0, 'Motor inertia must not be negative').max(50),
     driveWheelsInertiaKgM2: z.number().min(0, 'Drive wheel inertia must not be negative').max(500),
     trailer: trailerParamsSchema.nullish(),
+    driveTyre: driveTyreSchema.nullish(),
   })
   .superRefine((v, ctx) => {
     if (v.grossMassKg < v.emptyMassKg)

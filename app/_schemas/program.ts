@@ -9,6 +9,12 @@ export const releaseConditionsSchema = z.object({
   surfaces: z.array(z.enum(SURFACE_IDS, { error: `each surface must be one of ${SURFACE_IDS.join(', ')}` })).min(1, 'Name at least one surface').max(SURFACE_IDS.length),
   loadCases: z.array(z.enum(LOAD_CASE_IDS, { error: `each load case must be one of ${LOAD_CASE_IDS.join(', ')}` })).min(1, 'Name at least one load case').max(LOAD_CASE_IDS.length),
   marginPct: z.number().min(0, 'The margin is 0 % or more').max(50, 'The margin is at most 50 %'),
+  /** Steady lateral acceleration at the tyres of the sharpest curve taken at speed, m/s²; absent = the physics default, DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 (physics/lateral-margin.ts). */
+  designLateralAccelMps2: z
+    .number({ error: 'The design lateral acceleration must be a number (m/s²)' })
+    .min(0.5, 'The design lateral acceleration is at least 0.5 m/s²')
+    .max(6, 'The design lateral acceleration is at most 6 m/s²')
+    .optional(),
 })
 
 export const DEFAULT_RELEASE_CONDITIONS = { surfaces: ['wet-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'], marginPct: 10 } satisfies z.input<typeof releaseConditionsSchema>

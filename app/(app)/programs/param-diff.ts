@@ -1,7 +1,7 @@
 import { jsonChanges, type JsonChange } from '@/domain/json-changes'
 import { loadCaseLabel } from '@/physics/load-cases'
 import { surfaceLabel } from '@/physics/surfaces'
-import { TRAILER_FIELDS, VEHICLE_FIELDS } from './program-fields'
+import { DRIVE_TYRE_FIELDS, TRAILER_FIELDS, VEHICLE_FIELDS } from './program-fields'
 
 /** What one parameter version holds, as far as the diff is concerned (plain JSON). */
 export interface VersionContent {
@@ -23,7 +23,7 @@ interface FieldInfo {
   label: string
   unit: string
   scale: number
-  kind?: 'surfaces' | 'loadCases' | 'trailer'
+  kind?: 'surfaces' | 'loadCases' | 'trailer' | 'driveTyre'
 }
 
 const FIELDS: Record<string, FieldInfo> = { 'params.axleLayout': { label: 'Axle layout', unit: '', scale: 1 } }
@@ -34,9 +34,12 @@ for (const g of VEHICLE_FIELDS) {
 FIELDS['params.gearRatios'] ??= { label: 'Gear ratios, lowest first', unit: ':1', scale: 1 }
 FIELDS['params.trailer'] = { label: 'Semitrailer', unit: '', scale: 1, kind: 'trailer' }
 for (const f of TRAILER_FIELDS) FIELDS[`params.trailer.${f.key}`] = { label: f.label, unit: f.unit, scale: 1 }
+FIELDS['params.driveTyre'] = { label: 'Drive tyre', unit: '', scale: 1, kind: 'driveTyre' }
+for (const f of DRIVE_TYRE_FIELDS) FIELDS[`params.driveTyre.${f.key}`] = { label: `Drive tyre: ${f.label}`, unit: f.unit, scale: f.scale ?? 1 }
 FIELDS['releaseConditions.surfaces'] = { label: 'Release check: surfaces', unit: '', scale: 1, kind: 'surfaces' }
 FIELDS['releaseConditions.loadCases'] = { label: 'Release check: load cases', unit: '', scale: 1, kind: 'loadCases' }
 FIELDS['releaseConditions.marginPct'] = { label: 'Release check: traction margin', unit: '%', scale: 1 }
+FIELDS['releaseConditions.designLateralAccelMps2'] = { label: 'Release check: design lateral acceleration', unit: 'm/s²', scale: 1 }
 
 /** Rows follow the program form's order; a gear sits with the gear ratios, unknown paths come last. */
 const ORDER = Object.keys(FIELDS)
@@ -61,8 +64,9 @@ const tidy = (v: number) => Number(v.toPrecision(12))
 
 /** A stored value in the field's display unit: `93 %`, `4.1:1`, `Wet asphalt, Ice`, `—` for none. */
 export function formatValue(value: unknown, info: Pick<FieldInfo, 'unit' | 'scale' | 'kind'>): string {
-  if (value === null || value === undefined) return info.kind === 'trailer' ? 'none' : '—'
+  if (value === null || value === undefined) return info.kind === 'trailer' ? 'none' : info.kind === 'driveTyre' ? 'default truck tyre' : '—'
   if (info.kind === 'trailer') return isObject(value) ? 'coupled' : String(value)
+  if (info.kind === 'driveTyre') return isObject(value) ? 'stated' : String(value)
   if (info.kind === 'surfaces' && Array.isArray(value)) return value.length ? value.map((s) => surfaceLabel(String(s))).join(', ') : 'none'
   if (info.kind === 'loadCases' && Array.isArray(value)) return value.length ? value.map((c) => loadCaseLabel(String(c))).join(', ') : 'none'
   const unit = (n: string) => (info.unit === '' ? n : info.unit.startsWith(':') ? `${n}${info.unit}` : `${n} ${info.unit}`)

@@ -3,7 +3,9 @@
  * map, each revision approved; (b) validation finds no error in either map under the set's
  * parameter version; (c) no cell of either map asks for more than the traction limit less the
  * version's margin in any of its release conditions — or the lead acknowledges each exception
- * (map × surface × load case) with a reason; (c′) both maps export exactly to the C header; (d) at least one drive report was filed on this
+ * (map × surface × load case) with a reason; (c″) on a tractor, no lift-off cell of the regen map takes
+ * the drive axle's lateral capacity below the design lateral acceleration (the jackknife finding), or
+ * the lead acknowledges it likewise; (c′) both maps export exactly to the C header; (d) at least one drive report was filed on this
  * exact set; (e) no open safety concern sits on any of its revisions, whichever set it was
  * found in. Pure: the caller loads the data.
  */
@@ -15,7 +17,8 @@ import { limitsFromVehicle, MapError, toFixedTable, validate, type MapKind, type
 import { surfaceLabel, type SurfaceId } from '@/physics/surfaces'
 import { loadCaseLabel } from '@/physics/load-cases'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
-import { LOW_FRICTION, tractionExceptions } from '../review/gate'
+import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
+import { jackknifeExceptions, LOW_FRICTION, tractionExceptions } from '../review/gate'
 
 /** Review states in which a revision has been approved by a lead (released and replaced ones were). */
 export const APPROVED_STATES: readonly RevisionState[] = ['approved', 'released', 'retired']
@@ -31,6 +34,8 @@ export interface SetGatePart {
 
 export interface SetTractionException {
   key: string
+  /** 'traction': cells above the traction limit less the margin; 'jackknife': lift-off regen cells below the design lateral acceleration. */
+  finding: 'traction' | 'jackknife'
   mapKind: MapKind
   revisionId: number
   surface: SurfaceId
@@ -39,7 +44,7 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'drive-report' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'jackknife' | 'drive-report' | 'safety'
   met: boolean
   summary: string
   details: string[]
@@ -53,12 +58,13 @@ export interface SetGateResult {
   unacknowledged: string[]
 }
 
-export const exceptionKey = (kind: MapKind, surface: SurfaceId, loadCase: LoadCase) => `traction:${kind}:${surface}:${loadCase}`
+export const exceptionKey = (kind: MapKind, surface: SurfaceId, loadCase: LoadCase, finding: SetTractionException['finding'] = 'traction') => `${finding}:${kind}:${surface}:${loadCase}`
 
 export function setTractionExceptions(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetTractionException[] {
-  return parts.flatMap((p) =>
-    tractionExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase), mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
-  )
+  return parts.flatMap((p) => [
+    ...tractionExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase), finding: 'traction' as const, mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
+    ...jackknifeExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase, 'jackknife'), finding: 'jackknife' as const, mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
+  ])
 }
 
 export function setGate(input: {
@@ -90,10 +96,15 @@ export function setGate(input: {
   const exceptions = setTractionExceptions(parts, vehicle, conditions)
   const acked = new Set(input.acknowledgements.filter((a) => a.reason.trim()).map((a) => a.key))
   const unacknowledged = exceptions.filter((e) => !acked.has(e.key)).map((e) => e.key)
+  const traction = exceptions.filter((e) => e.finding === 'traction')
+  const tractionOpen = traction.filter((e) => !acked.has(e.key)).length
+  const jackknife = exceptions.filter((e) => e.finding === 'jackknife')
+  const jackknifeOpen = jackknife.filter((e) => !acked.has(e.key)).length
+  const design = conditions.designLateralAccelMps2 ?? DEFAULT_DESIGN_LATERAL_ACCEL_MPS2
   const lowMu = conditions.surfaces.some((s) => LOW_FRICTION.includes(s))
   const bothLoads = conditions.loadCases.includes('empty') && conditions.loadCases.includes('laden')
   const declared = lowMu && bothLoads
-  const cells = exceptions.reduce((n, e) => n + e.cells.length, 0)
+  const cells = traction.reduce((n, e) => n + e.cells.length, 0)
 
   const all: SetGateCondition[] = [
     {
@@ -127,13 +138,23 @@ export function setGate(input: {
     },
     {
       id: 'traction',
-      met: declared && unacknowledged.length === 0,
+      met: declared && tractionOpen === 0,
       summary: !declared
         ? 'The parameter version’s release conditions must include a low-friction surface and both the empty and laden load cases'
-        : exceptions.length === 0
+        : traction.length === 0
           ? `No cell above the traction limit less ${conditions.marginPct} % (${conditions.surfaces.length} surfaces × ${conditions.loadCases.length} load cases, both maps)`
-          : `${cells} cell(s) above the traction limit less ${conditions.marginPct} %; ${unacknowledged.length} of ${exceptions.length} exception(s) not acknowledged`,
-      details: exceptions.map((e) => `${e.mapKind} map, ${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} cell(s), first at ${e.cells[0].pedalPct} % / ${e.cells[0].speedKmh} km/h`),
+          : `${cells} cell(s) above the traction limit less ${conditions.marginPct} %; ${tractionOpen} of ${traction.length} exception(s) not acknowledged`,
+      details: traction.map((e) => `${e.mapKind} map, ${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} cell(s), first at ${e.cells[0].pedalPct} % / ${e.cells[0].speedKmh} km/h`),
+    },
+    {
+      id: 'jackknife',
+      met: jackknifeOpen === 0,
+      summary: !vehicle.trailer
+        ? 'No semitrailer: no jackknife check on lift-off regen'
+        : jackknife.length === 0
+          ? `Lift-off regen leaves the drive axle at least ${design} m/s² of lateral grip on every declared surface the axle holds it on free rolling (semitrailer cases)`
+          : `Lift-off regen takes the drive axle below ${design} m/s² of lateral grip in ${jackknife.reduce((n, e) => n + e.cells.length, 0)} cell(s): a tractor can jackknife in a curve; ${jackknifeOpen} of ${jackknife.length} finding(s) not acknowledged`,
+      details: jackknife.map((e) => `${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} lift-off cell(s) above ${Math.round(e.cells[0].allowedNm)} N·m regen, first at ${e.cells[0].speedKmh} km/h`),
     },
     {
       id: 'drive-report',

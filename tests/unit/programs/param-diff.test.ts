@@ -60,3 +60,15 @@ describe('choosing the versions to compare', () => {
     expect(chooseVersions([4, 3, 2, 1], 2, null)).toEqual({ from: 2, to: 4 })
   })
 })
+
+describe('versionDiff: the drive tyre', () => {
+  it('a tyre stated on a version that had none is one row plus a row per stated field, in display units', () => {
+    const rc = { surfaces: ['ice'], loadCases: ['empty'], marginPct: 10 }
+    const rows = versionDiff({ params: { axleLayout: '4x2' }, releaseConditions: rc }, { params: { axleLayout: '4x2', driveTyre: { nominalLoadPerTyreN: 28_000 } }, releaseConditions: { ...rc, designLateralAccelMps2: 2 } })
+    expect(rows.map((r) => [r.label, r.from, r.to])).toEqual([
+      ['Drive tyre', 'default truck tyre', 'stated'],
+      ['Drive tyre: Nominal load per drive tyre F_z,nom', '—', '28 kN'],
+      ['Release check: design lateral acceleration', '—', '2 m/s²'],
+    ])
+  })
+})

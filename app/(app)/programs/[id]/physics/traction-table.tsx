@@ -39,7 +39,9 @@ export function TractionTable({ programId, initial, units: u }: { programId: num
               const spins = r.lowSpeedEnvelopeNm > r.driveTorqueAtLimitNm
               return (
                 <tr key={`${r.surface}-${r.loadCase}`} className="border-t border-line">
-                  <td className="py-1">{r.surfaceLabel} <span className="text-slate-500">μ {r.peakMu}</span></td>
+                  <td className="py-1">
+                    {r.surfaceLabel} <span className="text-slate-500">μ {Math.abs(r.tyreMu - r.peakMu) < 5e-4 ? r.peakMu : `${r.peakMu} → ${tableNumber(r.tyreMu, 3)} at this load`}, peak slip {tableNumber(r.tyrePeakSlip, 3)}</span>
+                  </td>
                   <td>{LOAD_CASE_LABELS[r.loadCase]}</td>
                   <td className="text-right">{tableNumber(r.driveLimitKN)}{r.driveLimitedBy === 'steer-axle-lift' ? ' (steer axle lifts)' : ''}</td>
                   <td className={`text-right ${spins ? 'font-semibold text-danger' : ''}`} title={spins ? 'Full pedal at low speed can spin the drive axle' : undefined}>

@@ -6,6 +6,7 @@ export function SetGateChecklist({ gate, programId }: { gate: SetGateResult; pro
   const links: Partial<Record<SetGateCondition['id'], { href: string; label: string }>> = {
     validation: { href: '#findings', label: 'findings above' },
     traction: { href: `/programs/${programId}/physics`, label: 'traction limits of the program' },
+    'lift-off': { href: `/programs/${programId}/physics`, label: 'lift-off at the battery corners' },
     'drive-report': { href: '#reports', label: 'drive reports below' },
     safety: { href: '#reports', label: 'drive reports below' },
   }

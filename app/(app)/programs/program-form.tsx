@@ -12,6 +12,9 @@ import { LOAD_CASES } from '@/physics/load-cases'
 import { SURFACE_IDS, surfaceLabel } from '@/physics/surfaces'
 import { ScaledNumberInput } from './scaled-number-input'
 import { TRAILER_FIELDS, TRAILER_START, VEHICLE_FIELDS } from './program-fields'
+import { TandemFields } from './tandem-fields'
+import { BatteryTableFields } from './battery-table-fields'
+import { BatteryCornersFields } from './battery-corners-fields'
 
 type FormIn = z.input<typeof programInputSchema>
 type FormOut = z.output<typeof programInputSchema>
@@ -90,7 +93,8 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
             <label htmlFor="axleLayout" className="label">Axle layout</label>
             <select id="axleLayout" className="field" {...register('params.axleLayout')}>
               <option value="4x2">4×2</option>
-              <option value="6x4">6×4 (tandem drive)</option>
+              <option value="6x4">6×4 (tandem, both axles driven)</option>
+              <option value="6x2">6×2 (tandem, one axle driven)</option>
             </select>
           </div>
           <div className="md:col-span-2">
@@ -98,6 +102,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
             <textarea id="description" rows={2} className="field" {...register('description')} />
           </div>
         </div>
+        <TandemFields control={control} register={register} />
         {VEHICLE_FIELDS.map((g) => (
           <section key={g.group} className="card">
             <h2 className="mb-3 font-semibold">{g.group}</h2>
@@ -106,6 +111,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
                 <ScaledNumberInput key={f.key} control={control} name={`params.${f.key}`} label={f.label} unit={f.unit} scale={f.scale} />
               ))}
               {g.group === 'Driveline and motor' && <GearRatiosInput control={control} />}
+              {g.group === 'Battery' && <BatteryTableFields control={control} chargeW={params?.batteryChargePowerW} dischargeW={params?.batteryDischargePowerW} />}
             </div>
           </section>
         ))}
@@ -158,6 +164,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
           <div className="max-w-xs">
             <ScaledNumberInput control={control} name="releaseConditions.marginPct" label="Traction margin (cells stay this far below the limit)" unit="%" />
           </div>
+          <BatteryCornersFields control={control} register={register} />
         </section>
         {askReason && (
           <section className="card border-amber-300 bg-amber-50">

@@ -13,6 +13,7 @@ import { SURFACE_IDS, surfaceLabel } from '@/physics/surfaces'
 import { ScaledNumberInput } from './scaled-number-input'
 import { TRAILER_FIELDS, TRAILER_START, VEHICLE_FIELDS } from './program-fields'
 import { TandemFields } from './tandem-fields'
+import { tidyProgramValues } from './form-tidy'
 import { BatteryTableFields } from './battery-table-fields'
 import { BatteryCornersFields } from './battery-corners-fields'
 
@@ -51,7 +52,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
   const releaseConditions = useWatch({ control, name: 'releaseConditions' })
   const changed =
     props.programId !== undefined &&
-    jsonChanges({ params: initial.params, releaseConditions: initial.releaseConditions }, { params, releaseConditions }).length > 0
+    jsonChanges(tidyProgramValues({ params: initial.params, releaseConditions: initial.releaseConditions }), tidyProgramValues({ params, releaseConditions })).length > 0
   const askReason = props.programId !== undefined && (changed || reasonAsked)
 
   const save = useMutation({
@@ -77,7 +78,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
       setError('reason', { type: 'required', message: REASON_NEEDED }, { shouldFocus: true })
       return
     }
-    save.mutate({ ...v, reason: askReason ? v.reason : '' })
+    save.mutate({ ...tidyProgramValues(v), reason: askReason ? v.reason : '' })
   })
 
   return (

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { demoMapHistories } from '@/db/demo/maps'
 import { DEMO_BATTERY_CORNERS, demoTipper, demoTractor } from '@/db/demo/programs'
-import { axleLoadsFor, criticalAxleLoadN, drivenAxlesFor, liftOffFindings, mapOverlay, rpmToRadS, STANDARD_GRAVITY, type LoadCase, type MapTable, type SurfaceId, type VehicleParams } from '@/physics'
+import { axleLoadsFor, criticalAxleLoadN, drivenAxlesFor, liftOffFindings, mapOverlay, rpmToRadS, simulateLiftOff, STANDARD_GRAVITY, type LoadCase, type MapTable, type SurfaceId, type VehicleParams } from '@/physics'
 
 const tonnes = (n: number) => n / STANDARD_GRAVITY / 1000
 const histories = demoMapHistories(demoTipper, demoTractor)
@@ -54,6 +54,11 @@ describe('the demo still shows interesting cells', () => {
     expect(liftOffLocks(demoTipper, revision('Site regen', 2), 'empty')).toBe(false) // the revision that eased lift-off
     expect(liftOffLocks(demoTractor, revision('Road regen', 1), 'empty')).toBe(true) // bobtail 6×2
     expect(liftOffLocks(demoTractor, revision('Road regen', 1), 'trailer-laden')).toBe(false)
+    // In time too: a lift-off from 60 km/h on ice locks the empty tipper's tandem (the physics page's default run);
+    // laden, its 18 t tandem holds the eased 500 N·m (limit on ice ≈ 0.1 × 176 kN ⇒ about 800 N·m at the motor).
+    const liftOff = (loadCase: LoadCase) => simulateLiftOff({ vehicle: demoTipper, loadCase, surface: 'ice', map: revision('Site regen', 2), initialSpeedKmh: 60, durationS: 10 }).summary.locks
+    expect(liftOff('empty')).toBe(true)
+    expect(liftOff('laden')).toBe(false)
   })
   it('a full and cold pack takes the tipper’s lift-off below 0.3 m/s² where the nominal pack gives more', () => {
     const f = liftOffFindings(demoTipper, revision('Site regen', 2), ['empty', 'laden'], DEMO_BATTERY_CORNERS, 0.3)

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { cellSlip, criticalAxleLoadN, driveAxleLimitN, drivenAxlesFor, drivenLimitN, rigidModel, vehicleParamsSchema, type VehicleParams } from '@/physics'
+import { cellSlip, criticalAxleLoadN, driveAxleLimitN, drivenAxlesFor, drivenLimitN, rigidModel, simulateLaunch, vehicleParamsSchema, type VehicleParams } from '@/physics'
 import { vehicle } from '../../support/fixtures'
 
 // Hand case of docs/physics.md §6a: a rigid truck, m = 20 000 kg, L = 5 m (steer axle to tandem centre),
@@ -70,5 +70,23 @@ describe('tandem fields in stored parameter versions', () => {
     expect(r.success).toBe(false)
     expect(r.error?.issues[0].path.join('.')).toBe('tandem.drivenLoadShare')
     expect(vehicleParamsSchema.safeParse({ ...vehicle, axleLayout: '8x4' }).error?.issues[0].message).toMatch(/4x2, 6x4 or 6x2/)
+  })
+})
+
+describe('tandem in the time-domain launch', () => {
+  // The simulation follows the critical axle; a torque between the open and the locked limit must spin
+  // the open tandem and not the locked one, and an explicit locked tandem must run exactly as the default.
+  const base = { ...vehicle, tandem: null }
+  const open: VehicleParams = { ...vehicle, tandem: { interAxleDifferential: 'open', interAxleTransfer: 0.2 } }
+  const lockedExplicit: VehicleParams = { ...vehicle, tandem: { interAxleDifferential: 'locked', interAxleTransfer: 0.2 } }
+  const limit = (v: VehicleParams) => cellSlip({ vehicle: v, loadCase: 'laden', surface: 'packed-snow', motorTorqueNm: 1, roadSpeedKmh: 5 }).motorTorqueAtLimitNm
+  const torque = (limit(open) + limit(base)) / 2
+  const map = { kind: 'drive' as const, rowAxis: [0, 100], colAxis: [0, 100], values: [[torque, torque], [torque, torque]] }
+  const launch = (v: VehicleParams) => simulateLaunch({ vehicle: v, loadCase: 'laden', surface: 'packed-snow', map, pedal: { kind: 'step', pedalPct: 0 }, durationS: 2, torqueRateLimitNmPerS: 5000 }).summary
+  it('spins the open tandem at a torque the locked one holds', () => {
+    expect(limit(open)).toBeLessThan(limit(base))
+    expect(launch(open).timeBeyondPeakSlipS).toBeGreaterThan(0)
+    expect(launch(base).timeBeyondPeakSlipS).toBe(0)
+    expect(launch(lockedExplicit)).toEqual(launch(base))
   })
 })

@@ -3,7 +3,7 @@
  * (with load transfer) → force ratio Fx/Fz → slip on the rising branch of the program's drive-tyre
  * curve for the surface, and the lateral acceleration the drive axle can still hold (friction ellipse).
  */
-import { driveAxleLimitN, driveAxleLoadN, steerLiftForceN } from './axle-model'
+import { driveAxleLoadN, steerLiftForceN } from './axle-model'
 import { deliverableAtShaft } from './envelope'
 import { motorTorqueFromWheel, overallRatio } from './driveline'
 import { requireFinite } from './errors'
@@ -14,6 +14,7 @@ import type { Surface, SurfaceId } from './surfaces'
 import { gradeCos } from './traction'
 import { peakForceRatio, slipSolverFor } from './tyre'
 import { kmhToMps } from './units'
+import { criticalAxleLoadN, criticalForceRatio, drivenAxlesFor, drivenLimitN } from './tandem'
 import type { LoadCase } from './load-cases'
 import type { VehicleParams } from './vehicle'
 
@@ -39,6 +40,8 @@ export interface CellSlipResult {
   /** Longitudinal force of the drive axle on the road, driving > 0, braking < 0. */
   wheelForceN: number
   driveAxleLoadN: number
+  /** Load on the driven axle that limits (the lighter of an open 6×4, the driven axle of a 6×2; the group otherwise), N. */
+  criticalAxleLoadN: number
   /** Traction (drive) or lock-up (regen) force limit, positive. */
   limitForceN: number
   /** What sets the limit: the tyre peak, or (drive only, rare) the steer axle unloading completely. */
@@ -69,8 +72,9 @@ export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadS
   const G = overallRatio(vehicle, gearIndex)
   const R = vehicle.wheelRadiusM
   const mu = peakForceRatio(coeffs)
-  const driveLimit = driveAxleLimitN(model, mu, cosG, 'drive')
-  const regenLimit = driveAxleLimitN(model, mu, cosG, 'regen')
+  const driven = drivenAxlesFor(vehicle)
+  const driveLimit = drivenLimitN(model, driven, mu, cosG, 'drive')
+  const regenLimit = drivenLimitN(model, driven, mu, cosG, 'regen')
   const driveLimitedBy = driveLimit >= steerLiftForceN(model, cosG) ? 'steer-axle-lift' : 'tyre'
   const atDrive = motorTorqueFromWheel(vehicle, driveLimit * R, gearIndex)
   const atRegen = motorTorqueFromWheel(vehicle, -regenLimit * R, gearIndex)
@@ -92,7 +96,8 @@ export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadS
     const load = driveAxleLoadN(model, force, cosG)
     const limit = regen ? regenLimit : driveLimit
     const utilisation = Math.abs(force) / limit
-    const slip = load > 0 ? solve(force / load) : force === 0 ? 0 : null
+    const ratio = criticalForceRatio(driven, load, force)
+    const slip = ratio === null ? null : solve(ratio)
     const beyond = slip === null
     const lateral = beyond ? 0 : lateralCapacityMps2(mu, load, force, W0)
     return {
@@ -101,6 +106,7 @@ export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadS
       envelopeLimited: delivered !== motorTorqueNm,
       wheelForceN: force,
       driveAxleLoadN: load,
+      criticalAxleLoadN: criticalAxleLoadN(driven, load, force),
       limitForceN: limit,
       limitedBy: regen ? 'tyre' : driveLimitedBy,
       utilisation,

@@ -26,7 +26,7 @@ export interface DriveTyreParams {
   shapeC?: number
   /** Magic Formula curvature factor E (< 1); moves the peak along the slip axis. */
   shapeE?: number
-  /** Tyres on the driven axle(s), all together (duals count two per side). Default 4 for 4×2, 8 for 6×4. */
+  /** Tyres sharing the drive group's load, all together (duals count two per side). Default 4 for 4×2, 8 for 6×4 and 6×2 (the tag axle's too). */
   tyreCount?: number
 }
 
@@ -84,7 +84,7 @@ export function resolveDriveTyre(vehicle: Pick<VehicleParams, 'axleLayout' | 'dr
     nominalLoadPerTyreN: p.nominalLoadPerTyreN ?? DEFAULT_DRIVE_TYRE.nominalLoadPerTyreN,
     shapeC: p.shapeC ?? DEFAULT_DRIVE_TYRE.shapeC,
     shapeE: p.shapeE ?? DEFAULT_DRIVE_TYRE.shapeE,
-    tyreCount: p.tyreCount ?? (vehicle.axleLayout === '6x4' ? 8 : 4),
+    tyreCount: p.tyreCount ?? (vehicle.axleLayout === '4x2' ? 4 : 8), // the rear group's tyres share its load (a 6×2's tag axle too)
   }
 }
 

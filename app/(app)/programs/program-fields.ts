@@ -23,7 +23,7 @@ export const VEHICLE_FIELDS: { group: string; fields: NumberField<NumKeys<Vehicl
   {
     group: 'Geometry',
     fields: [
-      { key: 'wheelbaseM', label: 'Wheelbase (steer axle to drive axle or tandem centre)', unit: 'm' },
+      { key: 'wheelbaseM', label: 'Wheelbase (steer axle to drive axle or the tandem group’s load centre)', unit: 'm' },
       { key: 'emptyCgToFrontAxleM', label: 'Empty CG behind steer axle', unit: 'm' },
       { key: 'emptyCgHeightM', label: 'Empty CG height', unit: 'm' },
       { key: 'ladenCgToFrontAxleM', label: 'Laden CG behind steer axle', unit: 'm' },

@@ -13,6 +13,10 @@ import { SURFACE_IDS, surfaceLabel } from '@/physics/surfaces'
 import { ScaledNumberInput } from './scaled-number-input'
 import { DRIVE_TYRE_FIELDS, TRAILER_FIELDS, TRAILER_START, VEHICLE_FIELDS, withoutBlankTyre } from './program-fields'
 import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
+import { TandemFields } from './tandem-fields'
+import { tidyProgramValues } from './form-tidy'
+import { BatteryTableFields } from './battery-table-fields'
+import { BatteryCornersFields } from './battery-corners-fields'
 
 type FormIn = z.input<typeof programInputSchema>
 type FormOut = z.output<typeof programInputSchema>
@@ -49,7 +53,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
   const releaseConditions = useWatch({ control, name: 'releaseConditions' })
   const changed =
     props.programId !== undefined &&
-    jsonChanges({ params: initial.params, releaseConditions: initial.releaseConditions }, { params: withoutBlankTyre(params), releaseConditions }).length > 0
+    jsonChanges(tidyProgramValues({ params: initial.params, releaseConditions: initial.releaseConditions }), tidyProgramValues({ params: withoutBlankTyre(params), releaseConditions })).length > 0
   const askReason = props.programId !== undefined && (changed || reasonAsked)
 
   const save = useMutation({
@@ -75,7 +79,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
       setError('reason', { type: 'required', message: REASON_NEEDED }, { shouldFocus: true })
       return
     }
-    save.mutate({ ...v, params: withoutBlankTyre(v.params), reason: askReason ? v.reason : '' })
+    save.mutate({ ...tidyProgramValues({ ...v, params: withoutBlankTyre(v.params) }), reason: askReason ? v.reason : '' })
   })
 
   return (
@@ -91,7 +95,8 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
             <label htmlFor="axleLayout" className="label">Axle layout</label>
             <select id="axleLayout" className="field" {...register('params.axleLayout')}>
               <option value="4x2">4×2</option>
-              <option value="6x4">6×4 (tandem drive)</option>
+              <option value="6x4">6×4 (tandem, both axles driven)</option>
+              <option value="6x2">6×2 (tandem, one axle driven)</option>
             </select>
           </div>
           <div className="md:col-span-2">
@@ -99,6 +104,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
             <textarea id="description" rows={2} className="field" {...register('description')} />
           </div>
         </div>
+        <TandemFields control={control} register={register} />
         {VEHICLE_FIELDS.map((g) => (
           <section key={g.group} className="card">
             <h2 className="mb-3 font-semibold">{g.group}</h2>
@@ -107,6 +113,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
                 <ScaledNumberInput key={f.key} control={control} name={`params.${f.key}`} label={f.label} unit={f.unit} scale={f.scale} />
               ))}
               {g.group === 'Driveline and motor' && <GearRatiosInput control={control} />}
+              {g.group === 'Battery' && <BatteryTableFields control={control} chargeW={params?.batteryChargePowerW} dischargeW={params?.batteryDischargePowerW} />}
             </div>
           </section>
         ))}
@@ -178,6 +185,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
               hint={`Steady lateral acceleration at the tyres of the sharpest curve taken at speed (an exit ramp). With a semitrailer, lift-off regen that leaves the drive axle less lateral grip than this is a jackknife finding. Blank: ${DEFAULT_DESIGN_LATERAL_ACCEL_MPS2} m/s².`}
             />
           </div>
+          <BatteryCornersFields control={control} register={register} />
         </section>
         {askReason && (
           <section className="card border-amber-300 bg-amber-50">

@@ -7,7 +7,9 @@
  * the drive axle's lateral capacity below the design lateral acceleration (the jackknife finding), or
  * the lead acknowledges it likewise; (c′) both maps export exactly to the C header; (d) at least one drive report was filed on this
  * exact set; (e) no open safety concern sits on any of its revisions, whichever set it was
- * found in. Pure: the caller loads the data.
+ * found in; (f) when the version declares battery corners and a minimum lift-off deceleration, no
+ * corner takes the regen map's lift-off deceleration below it where the nominal pack reaches it
+ * (docs/physics.md §7a). Pure: the caller loads the data.
  */
 import 'server-only'
 import type { Acknowledgement, ReleaseConditions } from '@/db/schema'
@@ -16,6 +18,7 @@ import { STATE_LABELS } from '@/domain/revision-states'
 import { limitsFromVehicle, MapError, toFixedTable, validate, type MapKind, type MapTable } from '@/maps'
 import { surfaceLabel, type SurfaceId } from '@/physics/surfaces'
 import { loadCaseLabel } from '@/physics/load-cases'
+import { liftOffFindings } from '@/physics/battery'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
 import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
 import { jackknifeExceptions, LOW_FRICTION, tractionExceptions } from '../review/gate'
@@ -44,7 +47,7 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'jackknife' | 'drive-report' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'jackknife' | 'lift-off' | 'drive-report' | 'safety'
   met: boolean
   summary: string
   details: string[]
@@ -106,6 +109,8 @@ export function setGate(input: {
   const declared = lowMu && bothLoads
   const cells = traction.reduce((n, e) => n + e.cells.length, 0)
 
+  const liftOff = liftOffCondition(parts, vehicle, conditions)
+
   const all: SetGateCondition[] = [
     {
       id: 'parts',
@@ -156,6 +161,7 @@ export function setGate(input: {
           : `Lift-off regen takes the drive axle below ${design} m/s² of lateral grip in ${jackknife.reduce((n, e) => n + e.cells.length, 0)} cell(s): a tractor can jackknife in a curve; ${jackknifeOpen} of ${jackknife.length} finding(s) not acknowledged`,
       details: jackknife.map((e) => `${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} lift-off cell(s) above ${Math.round(e.cells[0].allowedNm)} N·m regen, first at ${e.cells[0].speedKmh} km/h`),
     },
+    ...(liftOff ? [liftOff] : []),
     {
       id: 'drive-report',
       met: input.reports > 0,
@@ -170,4 +176,28 @@ export function setGate(input: {
     },
   ]
   return { ok: all.every((c) => c.met), conditions: all, exceptions, unacknowledged }
+}
+
+const fmt = (x: number) => x.toFixed(2)
+
+/**
+ * The lift-off condition of a set, or null when the version declares no battery corners or no minimum
+ * (older versions: the gate judges as before). Evaluated on the regen map over the declared load cases.
+ */
+export function liftOffCondition(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetGateCondition | null {
+  const corners = c.batteryCorners ?? []
+  if (!corners.length || c.minLiftOffDecelMps2 === undefined) return null
+  const min = c.minLiftOffDecelMps2
+  const findings = parts.filter((p) => p.kind === 'regen').flatMap((p) => liftOffFindings(vehicle, p.table, c.loadCases, corners, min).map((f) => ({ ...f, part: p })))
+  return {
+    id: 'lift-off',
+    met: findings.length === 0,
+    summary: findings.length === 0
+      ? `Lift-off regen keeps at least ${fmt(min)} m/s² at every battery corner (${corners.map((k) => k.label).join(', ')}) wherever the nominal pack gives it`
+      : `At ${new Set(findings.map((f) => f.corner.label)).size} battery corner(s) lift-off regen falls below ${fmt(min)} m/s²`,
+    details: findings.map((f) => {
+      const worst = f.points.reduce((a, b) => (b.cornerDecelMps2 < a.cornerDecelMps2 ? b : a))
+      return `${f.part.mapName} r${f.part.number}, ${f.corner.label} (${f.corner.socPct} %, ${f.corner.temperatureC} °C), ${loadCaseLabel(f.loadCase)}: ${fmt(worst.cornerDecelMps2)} m/s² instead of ${fmt(worst.nominalDecelMps2)} at ${worst.speedKmh} km/h; ${f.points.length} speed(s) below`
+    }),
+  }
 }

@@ -7,6 +7,7 @@ export function SetGateChecklist({ gate, programId }: { gate: SetGateResult; pro
     validation: { href: '#findings', label: 'findings above' },
     traction: { href: `/programs/${programId}/physics`, label: 'traction limits of the program' },
     jackknife: { href: `/programs/${programId}/physics`, label: 'traction limits of the program' },
+    'lift-off': { href: `/programs/${programId}/physics`, label: 'lift-off at the battery corners' },
     'drive-report': { href: '#reports', label: 'drive reports below' },
     safety: { href: '#reports', label: 'drive reports below' },
   }

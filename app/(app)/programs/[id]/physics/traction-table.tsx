@@ -19,7 +19,8 @@ export function TractionTable({ programId, initial, units: u }: { programId: num
       <h2 className="text-lg font-semibold">Traction limits</h2>
       <p className="text-sm text-slate-600">
         Largest force the drive axle can put on the road before the tyres pass their peak, with the load transfer of that force
-        (level road, lowest gear). “Motor can give” is the motor and battery limit at {tableNumber(u.speedOut(5))} {u.speed}.
+        (level road, lowest gear). For a tandem it is the group’s total when the axle that limits first — the lighter one of an
+        open 6×4, the driven one of a 6×2 — reaches its peak. “Motor can give” is the motor and battery limit at {tableNumber(u.speedOut(5))} {u.speed}.
       </p>
       <div className="overflow-x-auto">
         <table className="w-full text-sm tabular-nums" data-testid="traction-table">

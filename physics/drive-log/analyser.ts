@@ -96,11 +96,11 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
     if (fin(road) && fin(pedal)) {
       const ws = s.wheelSpeedsKmh
       if (combiner === null || combiner.size !== ws.length) { combiner = createWheelCombiner(opts.wheelChannels ?? ws.map(() => undefined), trackWidthM); judged = new Float64Array(combiner.size) }
-      turn = combiner.combine(ws, s.yawRateRadS, judged)
+      turn = combiner.combine(ws, s.yawRateRadS, judged, wheelScale)
       const vRoad = road / 3.6 // m/s, as kmhToMps
       const den = Math.max(Math.abs(vRoad), SLIP_SPEED_FLOOR_MPS)
       for (let w = 0; w < judged.length; w++) {
-        const v = judged[w] * wheelScale
+        const v = judged[w]
         if (!fin(v)) continue
         // physics slipRatio(kmhToMps(wheel), kmhToMps(road)) written out: this loop runs per wheel per row,
         // and its argument checks are already done here (both finite). A unit test pins the two equal.

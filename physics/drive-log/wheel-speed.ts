@@ -25,9 +25,11 @@ export const DEFAULT_DRIVE_TRACK_WIDTH_M = 1.8
 export interface WheelCombiner {
   /**
    * Writes the judged wheel speeds into `out` (NaN where nothing can be judged) and returns how the turn was
-   * handled for this sample: 'yaw' (side wheels corrected), 'mean' (left/right averaged) or 'none'.
+   * handled for this sample: 'yaw' (side wheels corrected), 'mean' (left/right averaged) or 'none'. `scale`
+   * (default 1) multiplies the logged speeds first: the radius calibration's 1/ρ gives the true tread speeds,
+   * and the turn's ±ψ̇·b/2 belongs to those.
    */
-  combine(speedsKmh: readonly number[], yawRadS: number | undefined, out: Float64Array): 'yaw' | 'mean' | 'none'
+  combine(speedsKmh: readonly number[], yawRadS: number | undefined, out: Float64Array, scale?: number): 'yaw' | 'mean' | 'none'
   /** Length `out` needs: one entry per logged wheel. */
   readonly size: number
 }
@@ -50,11 +52,11 @@ export function createWheelCombiner(channels: readonly (WheelChannel | undefined
   const halfTrackKmh = (trackWidthM / 2) * 3.6 // ψ̇[rad/s]·(b/2)[m] is m/s; × 3.6 for km/h
   return {
     size,
-    combine(speeds, yaw, out) {
+    combine(speeds, yaw, out, scale = 1) {
       if (fin(yaw)) {
         let any = false
         for (let w = 0; w < size; w++) {
-          out[w] = speeds[w] + side[w] * yaw * halfTrackKmh // the inner wheel (side · ψ̇ < 0) is raised back to v_c
+          out[w] = speeds[w] * scale + side[w] * yaw * halfTrackKmh // the inner wheel (side · ψ̇ < 0) is raised back to v_c
           if (side[w] !== 0) any = true
         }
         return any ? 'yaw' : 'none'
@@ -62,8 +64,8 @@ export function createWheelCombiner(channels: readonly (WheelChannel | undefined
       let mean = false
       for (let w = 0; w < size; w++) {
         const p = partner[w]
-        if (p < 0 || !fin(speeds[p])) out[w] = speeds[w]
-        else if (side[w] > 0 && fin(speeds[w])) { out[w] = 0.5 * (speeds[w] + speeds[p]); mean = true }
+        if (p < 0 || !fin(speeds[p])) out[w] = speeds[w] * scale
+        else if (side[w] > 0 && fin(speeds[w])) { out[w] = 0.5 * (speeds[w] + speeds[p]) * scale; mean = true }
         else out[w] = NaN // the right wheel of a pair: its mean is already in the left wheel's slot
       }
       return mean ? 'mean' : 'none'

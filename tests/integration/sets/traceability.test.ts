@@ -281,7 +281,7 @@ describe('found trying the sets as an attacker and a new user', () => {
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
     const id = await makeSet(s)
-    const reportId = await fileCoveringReports(id, s.driverCookie)
+    const [reportId] = await fileCoveringReports(id, s.driverCookie)
     expect((await releaseSet(id, s.leadCookie)).status).toBe(200)
     const edit = await call(reportRoute.PUT, { method: 'PUT', cookie: s.driverCookie, params: { id: String(reportId) }, body: setReportBody(id, { comments: 'changed after the release' }) })
     expect(edit.status).toBe(409)

@@ -18,6 +18,7 @@
  */
 import { PhysicsInputError, requirePositive } from '../errors'
 import type { WheelChannel } from './columns'
+import { LogFormatError, type LogColumnRef } from './errors'
 import type { LogSample, RadiusCalibration } from './types'
 import { createWheelCombiner, DEFAULT_DRIVE_TRACK_WIDTH_M } from './wheel-speed'
 
@@ -42,6 +43,8 @@ export interface RadiusCalibrationOptions {
   maxChangePct?: number
   /** A longer time step is a gap, s. Default 1. */
   maxGapS?: number
+  /** The time column, for the position in a time-order error (the same error the analyser gives). */
+  timeColumn?: LogColumnRef
 }
 
 /** Accumulator; push every sample of the log, then `result()`. */
@@ -71,7 +74,7 @@ export function createRadiusCalibrator(opts: RadiusCalibrationOptions = {}): Rad
   let combiner: ReturnType<typeof createWheelCombiner> | null = opts.wheelChannels ? createWheelCombiner(opts.wheelChannels, trackWidth) : null
   let out = new Float64Array(combiner?.size ?? 0)
   let sumW = 0, sumV = 0, seconds = 0, samples = 0, sawTorque = false
-  let prevT = NaN, prevV = NaN
+  let prevT = NaN, prevV = NaN, n = 0 // n: samples seen, for the default line number
 
   function straight(s: LogSample): boolean {
     if (fin(s.yawRateRadS)) return Math.abs(s.yawRateRadS) <= maxYaw
@@ -88,6 +91,10 @@ export function createRadiusCalibrator(opts: RadiusCalibrationOptions = {}): Rad
     push(s) {
       if (!combiner) { combiner = createWheelCombiner(s.wheelSpeedsKmh.map(() => undefined), trackWidth); out = new Float64Array(combiner.size) }
       const t = s.timeS, V = s.roadSpeedKmh
+      // A first pass must refuse a bad log as the analysis would, so the first error in the file is the one reported.
+      const line = s.line ?? n + 2
+      if (!fin(t)) throw new LogFormatError('row', line, opts.timeColumn ?? null, 'time is missing or not a finite number')
+      if (n++ > 0 && t < prevT) throw new LogFormatError('time-order', line, opts.timeColumn ?? null, `time ${t} s is earlier than the previous row (${prevT} s); time must not decrease`)
       const dt = t - prevT
       const steady = dt > 0 && dt <= maxGap && fin(prevV) && Math.abs((V - prevV) / 3.6 / dt) <= maxAccel
       prevT = t
@@ -97,10 +104,10 @@ export function createRadiusCalibrator(opts: RadiusCalibrationOptions = {}): Rad
       if (fin(s.brakePedalPct) && s.brakePedalPct > 1) return
       if (!straight(s)) return
       combiner.combine(s.wheelSpeedsKmh, s.yawRateRadS, out)
-      let w = 0, n = 0
-      for (let i = 0; i < out.length; i++) if (fin(out[i])) { w += out[i]; n++ }
-      if (n === 0) return
-      sumW += (w / n) * dt
+      let w = 0, k = 0
+      for (let i = 0; i < out.length; i++) if (fin(out[i])) { w += out[i]; k++ }
+      if (k === 0) return
+      sumW += (w / k) * dt
       sumV += V * dt
       seconds += dt
       samples++

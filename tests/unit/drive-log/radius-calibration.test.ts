@@ -68,3 +68,15 @@ describe('per-log effective-radius calibration', () => {
     expect(calibrate(series(5, 0.1, () => ({ wheelSpeedsKmh: [52], roadSpeedKmh: 50, motorTorqueNm: 0 }))).reason).toMatch(/10 s needed/)
   })
 })
+
+describe('the calibrator as a first pass', () => {
+  it('refuses time going backwards with the analyser’s own error, and never changes a sample', () => {
+    const log = wornTyreLog().slice(0, 5).map((s) => Object.freeze({ ...s, wheelSpeedsKmh: Object.freeze([...s.wheelSpeedsKmh]) }))
+    const back = [...log, { ...log[1], timeS: 0.05, line: 7 }]
+    const c = createRadiusCalibrator({ timeColumn: { index: 1, name: 'time_s' } })
+    let err: unknown
+    try { back.forEach((s) => c.push(s)) } catch (e) { err = e }
+    expect(err).toMatchObject({ code: 'time-order', line: 7, message: 'line 7, column 1 (time_s): time 0.05 s is earlier than the previous row (0.4 s); time must not decrease' })
+    expect(() => analyse(back, { timeColumn: { index: 1, name: 'time_s' } })).toThrow((err as Error).message)
+  })
+})

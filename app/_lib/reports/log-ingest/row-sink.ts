@@ -82,8 +82,8 @@ export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowS
 /** @example const first = createCalibrationSink(opts, ','); first.rows(papaRows, []); createLogRowSink({ ...opts, radiusCalibration: first.finish() }) */
 export function createCalibrationSink(opts: LogReadOptions, delimiter = ','): CalibrationSink {
   let calibrator: ReturnType<typeof createRadiusCalibrator> | null = null
-  const r = createRecordReader(opts, delimiter, (layout) => {
-    calibrator = createRadiusCalibrator({ wheelChannels: layoutWheelChannels(layout), trackWidthM: opts.trackWidthM, maxGapS: opts.maxGapS })
+  const r = createRecordReader(opts, delimiter, (layout, timeColumn) => {
+    calibrator = createRadiusCalibrator({ wheelChannels: layoutWheelChannels(layout), trackWidthM: opts.trackWidthM, maxGapS: opts.maxGapS, timeColumn })
     return calibrator.push
   })
   return {

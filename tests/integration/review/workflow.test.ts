@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { currentSetRelease } from '@/db/queries/sets'
 import { makeUser, sessionCookie } from '@/tests/support/api'
 import { act, capturedMail, GENTLE, reviewSetup, stateOf } from '@/tests/support/review-fixtures'
-import { approve, fileCoveringReports, fileSetReport, makeSet, releaseSet, saveRevision, setSetup, withdrawSet } from '@/tests/support/set-fixtures'
+import { approve, fileCoveringReports, makeSet, releaseSet, saveRevision, setSetup, withdrawSet } from '@/tests/support/set-fixtures'
 
 describe('review workflow', () => {
   it('submit → send back (comment required) → approve is refused from “sent back”, mail at each step', async () => {

@@ -21,6 +21,7 @@ import type { AnalysisResult } from '../physics/drive-log/types'
 import { SURFACE_IDS, type SurfaceId } from '../physics/surfaces'
 import { LOAD_CASE_IDS } from '../physics/load-cases'
 import type { LoadCase, VehicleParams } from '../physics/vehicle'
+import type { BatteryCorner } from '../physics/battery'
 import { LINK_KINDS, type LinkKind } from '../domain/one-time-links'
 import { LOG_STATUSES, type LogStatus } from '../domain/log-statuses'
 import { MAIL_STATUSES, type MailStatus } from '../domain/mail-statuses'
@@ -42,12 +43,32 @@ export interface ReleaseConditions {
   surfaces: SurfaceId[]
   loadCases: LoadCase[]
   marginPct: number
+  /** Design lateral acceleration at the tyres, m/s²; absent in versions saved before it existed (physics default applies). */
+  designLateralAccelMps2?: number
+  /** Battery states for the lift-off check (added later; absent = none). */
+  batteryCorners?: BatteryCorner[]
+  /** Least lift-off deceleration a corner may leave, m/s² (absent = corners shown, nothing found). */
+  minLiftOffDecelMps2?: number
 }
 
 /** A gate exception the lead released anyway, with the reason given. */
 export interface Acknowledgement {
   key: string
   reason: string
+}
+
+/**
+ * A lead's waiver of a release condition (surface × load case) that no drive report on the set covers:
+ * key `coverage:<surface>:<loadCase>`, why, who and when. Kept with the release, like the acknowledgements.
+ */
+export interface CoverageWaiverRecord {
+  key: string
+  reason: string
+  surface: SurfaceId
+  loadCase: LoadCase
+  byId: number
+  byName: string
+  at: string
 }
 
 /** An acknowledgement as a set release keeps it: which exception, why, who and when. */
@@ -418,6 +439,8 @@ export const setReleases = pgTable(
       .references(() => users.id),
     releasedAt: timestamp('released_at', { withTimezone: true }).notNull().defaultNow(),
     acknowledgements: jsonb('acknowledgements').$type<AcknowledgementRecord[]>().notNull().default([]),
+    /** Release conditions without a covering drive report, waived by the lead with a reason (none in older releases). */
+    coverageWaivers: jsonb('coverage_waivers').$type<CoverageWaiverRecord[]>().notNull().default([]),
     /** Object key, file name, size and SHA-256 of the frozen package; null only for releases older than frozen packages. */
     packageKey: text('package_key'),
     packageName: text('package_name'),

@@ -10,8 +10,11 @@ import { checkLoadCase, gradeRad, physics, type OverlayQuery } from './query'
 
 export type { MapOverlay }
 
-/** Overlay of `table` on the given load case, surface and grade; 400 for a load case the program lacks. */
-export function overlayFor(vehicle: VehicleParams, table: MapTable, q: OverlayQuery): MapOverlay {
+/**
+ * Overlay of `table` on the given load case, surface and grade, judged against the program's design
+ * lateral acceleration (absent: the physics default); 400 for a load case the program lacks.
+ */
+export function overlayFor(vehicle: VehicleParams, table: MapTable, q: OverlayQuery, designLateralAccelMps2?: number): MapOverlay {
   checkLoadCase(vehicle, q.loadCase)
-  return physics(() => mapOverlay({ vehicle, loadCase: q.loadCase, surface: q.surface, gradeRad: gradeRad(q.gradePct), map: table }))
+  return physics(() => mapOverlay({ vehicle, loadCase: q.loadCase, surface: q.surface, gradeRad: gradeRad(q.gradePct), map: table, designLateralAccelMps2 }))
 }

@@ -3,9 +3,14 @@
  * map, each revision approved; (b) validation finds no error in either map under the set's
  * parameter version; (c) no cell of either map asks for more than the traction limit less the
  * version's margin in any of its release conditions — or the lead acknowledges each exception
- * (map × surface × load case) with a reason; (c′) both maps export exactly to the C header; (d) at least one drive report was filed on this
- * exact set; (e) no open safety concern sits on any of its revisions, whichever set it was
- * found in. Pure: the caller loads the data.
+ * (map × surface × load case) with a reason; (c″) on a tractor, no lift-off cell of the regen map takes
+ * the drive axle's lateral capacity below the design lateral acceleration (the jackknife finding), or
+ * the lead acknowledges it likewise; (c′) both maps export exactly to the C header; (d) at least one drive report was filed on this
+ * exact set; (d′) the set's drive reports together cover every release condition (surface × load case), or the
+ * lead waives each uncovered one with a reason; (e) no open safety concern sits on any of its revisions, whichever set it was
+ * found in; (f) when the version declares battery corners and a minimum lift-off deceleration, no
+ * corner takes the regen map's lift-off deceleration below it where the nominal pack reaches it
+ * (docs/physics.md §7a). Pure: the caller loads the data.
  */
 import 'server-only'
 import type { Acknowledgement, ReleaseConditions } from '@/db/schema'
@@ -14,8 +19,10 @@ import { STATE_LABELS } from '@/domain/revision-states'
 import { limitsFromVehicle, MapError, toFixedTable, validate, type MapKind, type MapTable } from '@/maps'
 import { surfaceLabel, type SurfaceId } from '@/physics/surfaces'
 import { loadCaseLabel } from '@/physics/load-cases'
+import { liftOffFindings } from '@/physics/battery'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
-import { LOW_FRICTION, tractionExceptions } from '../review/gate'
+import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
+import { jackknifeExceptions, LOW_FRICTION, tractionExceptions } from '../review/gate'
 import { checkRampsAgainstMaps, type RampLimits } from '@/maps/ramps'
 
 /** Review states in which a revision has been approved by a lead (released and replaced ones were). */
@@ -32,6 +39,8 @@ export interface SetGatePart {
 
 export interface SetTractionException {
   key: string
+  /** 'traction': cells above the traction limit less the margin; 'jackknife': lift-off regen cells below the design lateral acceleration. */
+  finding: 'traction' | 'jackknife'
   mapKind: MapKind
   revisionId: number
   surface: SurfaceId
@@ -40,10 +49,21 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'drive-report' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'jackknife' | 'lift-off' | 'drive-report' | 'coverage' | 'safety'
   met: boolean
   summary: string
   details: string[]
+}
+
+/** One release condition (surface × load case) and the drive-report evidence for it. */
+export interface CoverageCell {
+  key: string
+  surface: SurfaceId
+  loadCase: LoadCase
+  /** Drive reports on the set driven on this surface with this load case. */
+  reports: number
+  /** The lead's reason when no report covers it and it was waived; null otherwise. */
+  waiver: string | null
 }
 
 export interface SetGateResult {
@@ -52,22 +72,40 @@ export interface SetGateResult {
   exceptions: SetTractionException[]
   /** Keys of exceptions without an acknowledgement. */
   unacknowledged: string[]
+  /** Every release condition, in the order the parameter version declares them (surface-major). */
+  coverage: CoverageCell[]
+  /** Keys of coverage cells with no report and no waiver. */
+  uncovered: string[]
 }
 
-export const exceptionKey = (kind: MapKind, surface: SurfaceId, loadCase: LoadCase) => `traction:${kind}:${surface}:${loadCase}`
+export const exceptionKey = (kind: MapKind, surface: SurfaceId, loadCase: LoadCase, finding: SetTractionException['finding'] = 'traction') => `${finding}:${kind}:${surface}:${loadCase}`
+export const coverageKey = (surface: SurfaceId, loadCase: LoadCase) => `coverage:${surface}:${loadCase}`
+
+/** The coverage grid: reports per declared surface × load case, and the waivers (with a reason) of empty cells. */
+export function setCoverage(c: ReleaseConditions, reports: readonly { surface: SurfaceId; loadCase: LoadCase }[], waivers: readonly Acknowledgement[]): CoverageCell[] {
+  return c.surfaces.flatMap((surface) =>
+    c.loadCases.map((loadCase) => {
+      const key = coverageKey(surface, loadCase)
+      const n = reports.filter((r) => r.surface === surface && r.loadCase === loadCase).length
+      const w = n === 0 ? waivers.find((a) => a.key === key && a.reason.trim()) : undefined
+      return { key, surface, loadCase, reports: n, waiver: w ? w.reason.trim() : null }
+    }),
+  )
+}
 
 export function setTractionExceptions(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetTractionException[] {
-  return parts.flatMap((p) =>
-    tractionExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase), mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
-  )
+  return parts.flatMap((p) => [
+    ...tractionExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase), finding: 'traction' as const, mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
+    ...jackknifeExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase, 'jackknife'), finding: 'jackknife' as const, mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
+  ])
 }
 
 export function setGate(input: {
   parts: SetGatePart[]
   vehicle: VehicleParams
   conditions: ReleaseConditions
-  /** Reports filed on this set. */
-  reports: number
+  /** Reports filed on this set: the surface and load case each was driven with. */
+  reports: readonly { surface: SurfaceId; loadCase: LoadCase }[]
   /** Open safety concerns on any revision of the set: report id and the set it was filed on. */
   concerns: { reportId: number; setNumber: number }[]
   acknowledgements: Acknowledgement[]
@@ -93,10 +131,21 @@ export function setGate(input: {
   const exceptions = setTractionExceptions(parts, vehicle, conditions)
   const acked = new Set(input.acknowledgements.filter((a) => a.reason.trim()).map((a) => a.key))
   const unacknowledged = exceptions.filter((e) => !acked.has(e.key)).map((e) => e.key)
+  const traction = exceptions.filter((e) => e.finding === 'traction')
+  const tractionOpen = traction.filter((e) => !acked.has(e.key)).length
+  const jackknife = exceptions.filter((e) => e.finding === 'jackknife')
+  const jackknifeOpen = jackknife.filter((e) => !acked.has(e.key)).length
+  const design = conditions.designLateralAccelMps2 ?? DEFAULT_DESIGN_LATERAL_ACCEL_MPS2
   const lowMu = conditions.surfaces.some((s) => LOW_FRICTION.includes(s))
   const bothLoads = conditions.loadCases.includes('empty') && conditions.loadCases.includes('laden')
   const declared = lowMu && bothLoads
-  const cells = exceptions.reduce((n, e) => n + e.cells.length, 0)
+  const cells = traction.reduce((n, e) => n + e.cells.length, 0)
+
+  const liftOff = liftOffCondition(parts, vehicle, conditions)
+  const coverage = setCoverage(conditions, input.reports, input.acknowledgements)
+  const uncovered = coverage.filter((c) => c.reports === 0 && c.waiver === null).map((c) => c.key)
+  const waived = coverage.filter((c) => c.waiver !== null).length
+  const nReports = input.reports.length
 
   const all: SetGateCondition[] = [
     {
@@ -131,19 +180,39 @@ export function setGate(input: {
     rampCondition(input.ramps ?? null, parts),
     {
       id: 'traction',
-      met: declared && unacknowledged.length === 0,
+      met: declared && tractionOpen === 0,
       summary: !declared
         ? 'The parameter version’s release conditions must include a low-friction surface and both the empty and laden load cases'
-        : exceptions.length === 0
+        : traction.length === 0
           ? `No cell above the traction limit less ${conditions.marginPct} % (${conditions.surfaces.length} surfaces × ${conditions.loadCases.length} load cases, both maps)`
-          : `${cells} cell(s) above the traction limit less ${conditions.marginPct} %; ${unacknowledged.length} of ${exceptions.length} exception(s) not acknowledged`,
-      details: exceptions.map((e) => `${e.mapKind} map, ${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} cell(s), first at ${e.cells[0].pedalPct} % / ${e.cells[0].speedKmh} km/h`),
+          : `${cells} cell(s) above the traction limit less ${conditions.marginPct} %; ${tractionOpen} of ${traction.length} exception(s) not acknowledged`,
+      details: traction.map((e) => `${e.mapKind} map, ${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} cell(s), first at ${e.cells[0].pedalPct} % / ${e.cells[0].speedKmh} km/h`),
     },
     {
+      id: 'jackknife',
+      met: jackknifeOpen === 0,
+      summary: !vehicle.trailer
+        ? 'No semitrailer: no jackknife check on lift-off regen'
+        : jackknife.length === 0
+          ? `Lift-off regen leaves the drive axle at least ${design} m/s² of lateral grip on every declared surface the axle holds it on free rolling (semitrailer cases)`
+          : `Lift-off regen takes the drive axle below ${design} m/s² of lateral grip in ${jackknife.reduce((n, e) => n + e.cells.length, 0)} cell(s): a tractor can jackknife in a curve; ${jackknifeOpen} of ${jackknife.length} finding(s) not acknowledged`,
+      details: jackknife.map((e) => `${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} lift-off cell(s) above ${Math.round(e.cells[0].allowedNm)} N·m regen, first at ${e.cells[0].speedKmh} km/h`),
+    },
+    ...(liftOff ? [liftOff] : []),
+    {
       id: 'drive-report',
-      met: input.reports > 0,
-      summary: input.reports === 0 ? 'No drive report has been filed on this set' : `${input.reports} drive report(s) on this set`,
+      met: nReports > 0,
+      summary: nReports === 0 ? 'No drive report has been filed on this set' : `${nReports} drive report(s) on this set`,
       details: [],
+    },
+    {
+      id: 'coverage',
+      met: uncovered.length === 0,
+      summary:
+        uncovered.length === 0
+          ? `Drive reports cover every release condition (${coverage.length})${waived ? `, ${waived} waived by the lead` : ''}`
+          : `${uncovered.length} of ${coverage.length} release condition(s) have no drive report and no waiver`,
+      details: coverage.filter((c) => uncovered.includes(c.key)).map((c) => `${surfaceLabel(c.surface)}, ${loadCaseLabel(c.loadCase)}: no drive report`),
     },
     {
       id: 'safety',
@@ -152,7 +221,31 @@ export function setGate(input: {
       details: input.concerns.map((c) => `drive report ${c.reportId} (set ${c.setNumber})`),
     },
   ]
-  return { ok: all.every((c) => c.met), conditions: all, exceptions, unacknowledged }
+  return { ok: all.every((c) => c.met), conditions: all, exceptions, unacknowledged, coverage, uncovered }
+}
+
+const fmt = (x: number) => x.toFixed(2)
+
+/**
+ * The lift-off condition of a set, or null when the version declares no battery corners or no minimum
+ * (older versions: the gate judges as before). Evaluated on the regen map over the declared load cases.
+ */
+export function liftOffCondition(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetGateCondition | null {
+  const corners = c.batteryCorners ?? []
+  if (!corners.length || c.minLiftOffDecelMps2 === undefined) return null
+  const min = c.minLiftOffDecelMps2
+  const findings = parts.filter((p) => p.kind === 'regen').flatMap((p) => liftOffFindings(vehicle, p.table, c.loadCases, corners, min).map((f) => ({ ...f, part: p })))
+  return {
+    id: 'lift-off',
+    met: findings.length === 0,
+    summary: findings.length === 0
+      ? `Lift-off regen keeps at least ${fmt(min)} m/s² at every battery corner (${corners.map((k) => k.label).join(', ')}) wherever the nominal pack gives it`
+      : `At ${new Set(findings.map((f) => f.corner.label)).size} battery corner(s) lift-off regen falls below ${fmt(min)} m/s²`,
+    details: findings.map((f) => {
+      const worst = f.points.reduce((a, b) => (b.cornerDecelMps2 < a.cornerDecelMps2 ? b : a))
+      return `${f.part.mapName} r${f.part.number}, ${f.corner.label} (${f.corner.socPct} %, ${f.corner.temperatureC} °C), ${loadCaseLabel(f.loadCase)}: ${fmt(worst.cornerDecelMps2)} m/s² instead of ${fmt(worst.nominalDecelMps2)} at ${worst.speedKmh} km/h; ${f.points.length} speed(s) below`
+    }),
+  }
 }
 
 /** The largest drive torque and regen torque the set's maps ask for, N·m. */

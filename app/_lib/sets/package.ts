@@ -2,7 +2,7 @@ import 'server-only'
 import { strToU8, zipSync, type Zippable } from 'fflate'
 import { sha256Hex, verifiedChecksum } from '@/db/checksum'
 import { SAFETY_CAUTION, toCHeader, toCsv, toJson, type MapKind, type MapTable } from '@/maps'
-import type { AcknowledgementRecord, ReleaseConditions } from '@/db/schema'
+import type { AcknowledgementRecord, CoverageWaiverRecord, ReleaseConditions } from '@/db/schema'
 import type { VehicleParams } from '@/physics/vehicle'
 import type { RampLimits } from '@/maps/ramps'
 import { rampsToCHeader, rampsToCsv, rampsToJson } from '@/maps/ramps-export'
@@ -28,6 +28,8 @@ export interface PackageRecord {
   /** The set's ramp limits; null when it holds none (old sets). */
   rampVersion?: { number: number; reason: string; createdAt: string; limits: RampLimits } | null
   acknowledgements: AcknowledgementRecord[]
+  /** Release conditions no drive report covered, waived by the lead (absent or empty: none). */
+  coverageWaivers?: CoverageWaiverRecord[]
   evidenceReportIds: number[]
   /** Release: who released and when. Test: who asked for the package and when it was built. */
   madeBy: string
@@ -91,6 +93,8 @@ export function buildSetPackage(rec: PackageRecord, mode: PackageMode) {
     // Left out, not null, for a set without ramps: its manifest stays as it was before ramps were a part.
     ...(ramps ? { rampVersion: { number: ramps.number, reason: ramps.reason, createdAt: ramps.createdAt, files: ['h', 'csv', 'json'].map((x) => `ramps-v${ramps.number}.${x}`) } } : {}),
     acknowledgements: rec.acknowledgements.map((a) => ({ key: a.key, map: a.mapKind, revisionId: a.revisionId, surface: a.surface, loadCase: a.loadCase, reason: a.reason, by: a.byName, at: a.at, ...(a.cells !== undefined ? { cells: a.cells } : {}) })),
+    // Only when there are any, so packages without waivers keep the bytes they always had.
+    ...(rec.coverageWaivers?.length ? { coverageWaivers: rec.coverageWaivers.map((w) => ({ key: w.key, surface: w.surface, loadCase: w.loadCase, reason: w.reason, by: w.byName, at: w.at })) } : {}),
     evidenceReports: rec.evidenceReportIds,
     [test ? 'builtBy' : 'releasedBy']: rec.madeBy,
     [test ? 'builtAt' : 'releasedAt']: rec.madeAt,

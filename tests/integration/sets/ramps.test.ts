@@ -9,7 +9,7 @@ import { getDb } from '@/db/client'
 import { auditLog, rampVersions } from '@/db/schema'
 import { starterRamps, type RampLimits } from '@/maps/ramps'
 import { call } from '@/tests/support/api'
-import { approve, downloadPackage, fileSetReport, gateMet, getSetView, makeSet, releaseSet, setSetup, type SetCtx } from '@/tests/support/set-fixtures'
+import { approve, downloadPackage, fileCoveringReports, fileSetReport, gateMet, getSetView, makeSet, releaseSet, setSetup, type SetCtx } from '@/tests/support/set-fixtures'
 
 const sha256 = (b: Uint8Array) => createHash('sha256').update(b).digest('hex')
 const RAMPS: RampLimits = { speedKmh: [0, 20, 60], tipInNmPerS: [4000, 5000, 6000], tipOutNmPerS: [8000, 8000, 8000], lashBandNm: 10, lashRateNmPerS: 400 }
@@ -86,7 +86,7 @@ describe('a set holds its ramps', () => {
 
     await postRamps(s, s.cookie, { limits: RAMPS, reason: 'Narrow band' })
     const good = await makeSet(s)
-    await fileSetReport(good, s.driverCookie)
+    await fileCoveringReports(good, s.driverCookie)
     expect(gateMet(await getSetView(good, s.leadCookie)).ramps).toBe(true)
     const released = await releaseSet(good, s.leadCookie)
     expect(released.status, JSON.stringify(released.body)).toBe(200)

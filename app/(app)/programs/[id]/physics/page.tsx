@@ -5,10 +5,12 @@ import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { tractionTable } from '@/app/_lib/physics/traction'
-import { listMaps } from '@/db/queries/maps'
+import { batteryCornerRows } from '@/app/_lib/physics/battery-corners'
+import { getMapWithLatest, listMaps } from '@/db/queries/maps'
 import { getProgram } from '@/db/queries/programs'
 import { loadCasesFor } from '@/physics'
 import { PhysicsWorkbench } from './physics-workbench'
+import { BatteryCornersTable } from './battery-corners-table'
 
 export const metadata = { title: 'Program physics' }
 
@@ -18,6 +20,13 @@ export default async function ProgramPhysicsPage(props: { params: Promise<{ id: 
   const program = await getProgram(pageId((await props.params).id, 'Program id'))
   if (!program) notFound()
   const maps = (await listMaps({ programId: program.id })).filter((m) => m.latestNumber !== null)
+  const corners = program.releaseConditions.batteryCorners ?? []
+  // Only read the regen maps' tables when there are corners to evaluate them at.
+  const regen = corners.length
+    ? (await Promise.all(maps.filter((m) => m.kind === 'regen').map((m) => getMapWithLatest(m.id))))
+        .filter((m) => m !== null)
+        .map((m) => ({ name: m.map.name, number: m.latest.number, table: m.latest.table }))
+    : []
   return (
     <div className="space-y-4">
       <div>
@@ -36,6 +45,7 @@ export default async function ProgramPhysicsPage(props: { params: Promise<{ id: 
         query={await props.searchParams}
         canEdit={EDITORS.includes(user.role)}
       />
+      <BatteryCornersTable rows={batteryCornerRows(program.params, program.releaseConditions, regen)} minDecelMps2={program.releaseConditions.minLiftOffDecelMps2} hasTable={Boolean(program.params.batteryPowerTable)} />
     </div>
   )
 }

@@ -49,6 +49,10 @@ export interface ReleaseConditions {
   batteryCorners?: BatteryCorner[]
   /** Least lift-off deceleration a corner may leave, m/s² (absent = corners shown, nothing found). */
   minLiftOffDecelMps2?: number
+  /** Comfort limits of the drivability manoeuvres and where they come from (absent: common-practice defaults). */
+  maxPeakJerkMps3?: number
+  maxTimeTo90S?: number
+  comfortSource?: string
 }
 
 /** A gate exception the lead released anyway, with the reason given. */

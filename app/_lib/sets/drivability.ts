@@ -13,17 +13,9 @@ import { surfaceLabel, type SurfaceId } from '@/physics/surfaces'
 import type { LoadCase } from '@/physics/vehicle'
 import { ValidationError } from '../http/errors'
 import { physics } from '../physics/query'
+import { DEFAULT_COMFORT } from './drivability-defaults'
 
-/**
- * Comfort limits when the parameter version states none. Common practice, values recalled from memory:
- * longitudinal jerk above about 5 m/s³ is felt as a jolt by a seated occupant, and a driver expects most of
- * a torque request within about a second. Replace them with the program's own targets and their source.
- */
-export const DEFAULT_COMFORT = {
-  maxPeakJerkMps3: 5,
-  maxTimeTo90S: 1,
-  source: 'Common practice (recalled from memory): a jolt is felt above about 5 m/s³; most of a request is expected within about 1 s',
-} as const
+export { DEFAULT_COMFORT }
 
 export function comfortOf(c: ReleaseConditions) {
   const own = c.maxPeakJerkMps3 !== undefined || c.maxTimeTo90S !== undefined

@@ -41,6 +41,9 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
           )}
           {report.driverName} · unit {report.vehicleUnit} · {report.route} <SafetyBadge safety={report.safety} />
         </p>
+        <p className="pt-1">
+          <Link href={`/reports/${report.id}/replay`} className="btn">Replay this drive through another set</Link>
+        </p>
       </div>
       <section className="card grid gap-2 text-sm sm:grid-cols-3" aria-label="What the truck ran" data-testid="report-set">
         {parts.map((p) => (

@@ -7,6 +7,7 @@ import { runApiLoad } from './api-load'
 import { runEditorPage } from './editor-page'
 import { runHistoryGrowth } from './history-growth'
 import { runLogIngest } from './log-ingest'
+import { runReplay } from './replay'
 import { printResult, writeResults, type BenchResult } from './report'
 import { startServer, type BenchServer } from './server'
 import { runSlipSweep } from './slip-sweep'
@@ -27,6 +28,7 @@ async function main(): Promise<void> {
   const results: BenchResult[] = []
   await attempt('slip-sweep', runSlipSweep, results)
   await attempt('log-ingest', runLogIngest, results)
+  await attempt('replay', runReplay, results)
   await attempt('history-growth', runHistoryGrowth, results)
   let server: BenchServer | null = null
   try {

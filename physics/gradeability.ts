@@ -58,7 +58,7 @@ export interface GradeCheck extends GradeDemand {
   explanation: string
 }
 
-export interface GradeOptions {
+export interface GradeCheckOptions {
   vehicle: VehicleParams
   /** Drive map (motor-shaft torque over pedal % × road speed km/h). */
   drive: MapTable
@@ -114,7 +114,7 @@ function explain(d: GradeDemand, c: Omit<GradeCheck, 'verdict' | 'explanation'>,
  * Checks one start or hold requirement against the drive map's full-pedal torque, the envelope and the tyres.
  * @example checkGrade({ vehicle: truck, drive }, { kind: 'start', gradePct: 18, speedKmh: 0 }).verdict // 'met'
  */
-export function checkGrade(o: GradeOptions, d: GradeDemand): GradeCheck {
+export function checkGrade(o: GradeCheckOptions, d: GradeDemand): GradeCheck {
   if (o.drive.kind !== 'drive') throw new PhysicsInputError('drive.kind', 'the startability check needs a drive map')
   checkMap(o.drive)
   if (d.kind === 'start' && d.speedKmh !== 0) throw new PhysicsInputError('speedKmh', 'a start is at 0 km/h')

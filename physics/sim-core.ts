@@ -8,7 +8,7 @@
  * No rollback: at standstill the vehicle is held unless the drive force beats grade and rolling resistance.
  * Map lookup speed: the road speed V, or with `vehicle.mapSpeedSource = 'driven-wheel'` the drive-wheel
  * speed ω·R (the controller only sees the motor speed), which a spin raises; the ramps see the same speed.
- * No traction control acts: the request is what the map gives at that speed (docs/physics.md §10a).
+ * No traction control acts: the request is what the map gives at that speed (docs/physics.md §9a).
  */
 import { driveAxleLoadN } from './axle-model'
 import { driveCurveFor } from './drive-curve'

@@ -11,7 +11,7 @@
  * found in; (f) when the version declares battery corners and a minimum lift-off deceleration, no
  * corner takes the regen map's lift-off deceleration below it where the nominal pack reaches it
  * (docs/physics.md §7a); (g) when the version declares a start grade or a hold grade and speed, the drive
- * map at full pedal gives the torque they need within the motor, battery and dry-road tyres (§10b).
+ * map at full pedal gives the torque they need within the motor, battery and dry-road tyres (docs/physics.md §9b).
  * Pure: the caller loads the data.
  */
 import 'server-only'

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { simulateLaunch, type MapTable } from '@/physics'
 import { vehicleParamsSchema } from '@/physics/vehicle'
+import { simulateManoeuvre } from '@/physics/drivability'
 import { vehicle } from '@/tests/support/fixtures'
 
 // Full pedal gives 2,000 N·m at 0 km/h falling to 200 N·m at 20 km/h: a spinning wheel, seen as speed,
@@ -18,6 +19,12 @@ describe('which speed the map is looked up on', () => {
     // With road speed the truck barely moves, the map keeps asking for 2,000 N·m and the wheel runs away.
     expect(road.peakSlip).toBeGreaterThan(wheel.peakSlip * 2)
     expect(wheel.timeBeyondPeakSlipS).toBeLessThan(road.timeBeyondPeakSlipS)
+  })
+
+  it('the drivability launch through the set honours it too', () => {
+    const man = (mapSpeedSource: 'road' | 'driven-wheel') =>
+      simulateManoeuvre({ vehicle: { ...vehicle, mapSpeedSource }, loadCase: 'laden', surface: 'packed-snow', drive: FALLING, regen: null, ramps: null, manoeuvre: { kind: 'launch', pedalPct: 100 } }).summary
+    expect(man('driven-wheel').peakSlip).toBeLessThan(man('road').peakSlip / 2)
   })
 
   it('with a map flat over speed both lookups are identical', () => {

@@ -53,6 +53,10 @@ export interface ReleaseConditions {
   maxPeakJerkMps3?: number
   maxTimeTo90S?: number
   comfortSource?: string
+  /** Startability and gradeability, laden: steepest start grade %, and a grade % to hold at a speed km/h (absent: not checked). */
+  startGradePct?: number
+  holdGradePct?: number
+  holdSpeedKmh?: number
 }
 
 /** A gate exception the lead released anyway, with the reason given. */

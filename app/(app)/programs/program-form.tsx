@@ -18,6 +18,8 @@ import { DEFAULT_COMFORT } from '@/app/_lib/sets/drivability-defaults'
 import { tidyProgramValues } from './form-tidy'
 import { BatteryTableFields } from './battery-table-fields'
 import { BatteryCornersFields } from './battery-corners-fields'
+import { MapSpeedField } from './map-speed-field'
+import { GradeFields } from './grade-fields'
 
 type FormIn = z.input<typeof programInputSchema>
 type FormOut = z.output<typeof programInputSchema>
@@ -114,6 +116,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
                 <ScaledNumberInput key={f.key} control={control} name={`params.${f.key}`} label={f.label} unit={f.unit} scale={f.scale} />
               ))}
               {g.group === 'Driveline and motor' && <GearRatiosInput control={control} />}
+              {g.group === 'Driveline and motor' && <MapSpeedField register={register} />}
               {g.group === 'Battery' && <BatteryTableFields control={control} chargeW={params?.batteryChargePowerW} dischargeW={params?.batteryDischargePowerW} />}
             </div>
           </section>
@@ -196,6 +199,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
               <input id="comfortSource" className="field" placeholder="e.g. the program's drivability target sheet" {...register('releaseConditions.comfortSource')} />
             </div>
           </fieldset>
+          <GradeFields control={control} />
         </section>
         {askReason && (
           <section className="card border-amber-300 bg-amber-50">

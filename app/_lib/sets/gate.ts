@@ -10,7 +10,9 @@
  * lead waives each uncovered one with a reason; (e) no open safety concern sits on any of its revisions, whichever set it was
  * found in; (f) when the version declares battery corners and a minimum lift-off deceleration, no
  * corner takes the regen map's lift-off deceleration below it where the nominal pack reaches it
- * (docs/physics.md §7a). Pure: the caller loads the data.
+ * (docs/physics.md §7a); (g) when the version declares a start grade or a hold grade and speed, the drive
+ * map at full pedal gives the torque they need within the motor, battery and dry-road tyres (docs/physics.md §9b).
+ * Pure: the caller loads the data.
  */
 import 'server-only'
 import type { Acknowledgement, ReleaseConditions } from '@/db/schema'
@@ -24,6 +26,7 @@ import type { LoadCase, VehicleParams } from '@/physics/vehicle'
 import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
 import { jackknifeExceptions, LOW_FRICTION, tractionExceptions } from '../review/gate'
 import { checkRampsAgainstMaps, type RampLimits } from '@/maps/ramps'
+import { declaresGrade, gradeChecks, gradeLine } from './grade'
 
 /** Review states in which a revision has been approved by a lead (released and replaced ones were). */
 export const APPROVED_STATES: readonly RevisionState[] = ['approved', 'released', 'retired']
@@ -49,7 +52,7 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'jackknife' | 'lift-off' | 'drive-report' | 'coverage' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'jackknife' | 'lift-off' | 'grade' | 'drive-report' | 'coverage' | 'safety'
   met: boolean
   summary: string
   details: string[]
@@ -142,6 +145,7 @@ export function setGate(input: {
   const cells = traction.reduce((n, e) => n + e.cells.length, 0)
 
   const liftOff = liftOffCondition(parts, vehicle, conditions)
+  const grade = gradeCondition(parts, vehicle, conditions)
   const coverage = setCoverage(conditions, input.reports, input.acknowledgements)
   const uncovered = coverage.filter((c) => c.reports === 0 && c.waiver === null).map((c) => c.key)
   const waived = coverage.filter((c) => c.waiver !== null).length
@@ -199,6 +203,7 @@ export function setGate(input: {
       details: jackknife.map((e) => `${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} lift-off cell(s) above ${Math.round(e.cells[0].allowedNm)} N·m regen, first at ${e.cells[0].speedKmh} km/h`),
     },
     ...(liftOff ? [liftOff] : []),
+    ...(grade ? [grade] : []),
     {
       id: 'drive-report',
       met: nReports > 0,
@@ -245,6 +250,27 @@ export function liftOffCondition(parts: SetGatePart[], vehicle: VehicleParams, c
       const worst = f.points.reduce((a, b) => (b.cornerDecelMps2 < a.cornerDecelMps2 ? b : a))
       return `${f.part.mapName} r${f.part.number}, ${f.corner.label} (${f.corner.socPct} %, ${f.corner.temperatureC} °C), ${loadCaseLabel(f.loadCase)}: ${fmt(worst.cornerDecelMps2)} m/s² instead of ${fmt(worst.nominalDecelMps2)} at ${worst.speedKmh} km/h; ${f.points.length} speed(s) below`
     }),
+  }
+}
+
+/**
+ * The start-and-hold-on-grade condition, or null when the version declares no grade (older versions
+ * judge as before). Laden, dry asphalt, drive map at full pedal (physics/gradeability.ts).
+ */
+export function gradeCondition(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetGateCondition | null {
+  if (!declaresGrade(c)) return null
+  const drive = parts.find((p) => p.kind === 'drive')
+  if (!drive) return { id: 'grade', met: false, summary: 'The version asks for a start or hold on grade, but the set holds no drive map', details: [] }
+  const checks = gradeChecks(vehicle, drive.table, c)
+  const failed = checks.filter((k) => k.verdict !== 'met')
+  const empty = failed.filter((k) => k.verdict === 'traction-short').length
+  return {
+    id: 'grade',
+    met: failed.length === 0,
+    summary: failed.length === 0
+      ? `The drive map at full pedal starts and holds the laden truck on the declared grades (${checks.length} check(s))`
+      : `${failed.length} of ${checks.length} grade requirement(s) not met${empty ? `; ${empty} beyond what the dry-road tyres carry: no single map can satisfy both` : ''}`,
+    details: checks.map(gradeLine),
   }
 }
 

@@ -22,6 +22,7 @@ import { SetGateChecklist } from './set-gate-checklist'
 import { SetHistoryList } from './set-history-list'
 import { SetParts } from './set-parts'
 import { SetReports } from './set-reports'
+import { EvidenceReplay } from './evidence-replay'
 import { WithdrawnBanner } from './withdrawn-banner'
 import { WithdrawPanel } from './withdraw-panel'
 
@@ -33,9 +34,10 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
   const set = await loadSet(id).catch((e) => (e instanceof NotFoundError ? null : Promise.reject(e)))
   if (!set) notFound()
   const firstRelease = set.releases[set.releases.length - 1]
-  const [gate, reports, test, current, audit] = await Promise.all([
+  const [gate, reports, programReports, test, current, audit] = await Promise.all([
     setGateFor(set),
     listReports({ setId: set.id }),
+    listReports({ programId: set.programId }),
     testPackage(set),
     set.status === 'testing' ? null : currentSetRelease(set.programId),
     // Withdrawals and later releases of the program say who withdrew this set's release and what replaced it.
@@ -115,6 +117,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
         <SetDownloads setId={set.id} status={set.status} release={latest} test={{ sha256: test.sha256, bytes: test.bytes.length }} />
       </section>
       <SetReports setId={set.id} reports={reports} canFile={user.role === 'test_driver' && set.status !== 'withdrawn'} />
+      <EvidenceReplay setId={set.id} reports={programReports.filter((r) => r.setId !== set.id).slice(0, 20)} />
       <SetHistoryList events={history} />
     </div>
   )

@@ -385,3 +385,10 @@ export async function currentSetRelease(programId: number) {
     .where(and(eq(setReleases.programId, programId), isNull(setReleases.retiredAt), isNull(setReleases.withdrawnAt)))
   return row ?? null
 }
+
+/** Whether a set with this id exists: a cheap check a page makes before its slow loading starts. */
+export async function setExists(id: number): Promise<boolean> {
+  const db = await getDb()
+  const rows = await db.select({ id: mapSets.id }).from(mapSets).where(eq(mapSets.id, id))
+  return rows.length > 0
+}

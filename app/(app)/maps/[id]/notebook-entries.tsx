@@ -33,7 +33,7 @@ export function NotebookEntries(props: { revisions: RevisionSummary[]; events: R
             {comments.length > 0 && (
               <ul className="text-sm text-slate-700">
                 {comments.map((c) => (
-                  <li key={c.id}><span className="text-slate-500">Comment</span> {c.authorName}: {c.body}</li>
+                  <li key={c.id}><span className="text-slate-500">Comment</span> {c.authorName}: <MarkdownNotes text={c.body} /></li>
                 ))}
               </ul>
             )}

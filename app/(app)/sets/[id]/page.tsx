@@ -23,6 +23,7 @@ import { SetParts } from './set-parts'
 import { SetReports } from './set-reports'
 import { WithdrawnBanner } from './withdrawn-banner'
 import { WithdrawPanel } from './withdraw-panel'
+import { MarkdownNotes } from '@/app/_components/markdown-notes'
 
 export const metadata = { title: 'Map set' }
 
@@ -69,7 +70,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
           {set.createdByName ? ` by ${set.createdByName}` : ''}
           {set.status === 'released' && latest ? ` · released ${formatTime(latest.releasedAt)} by ${latest.releasedByName}` : ''}
         </p>
-        {set.note && <p className="text-sm break-words whitespace-pre-line">{set.note}</p>}
+        <MarkdownNotes text={set.note} />
       </div>
       {set.status === 'withdrawn' && latest?.withdrawnAt && <WithdrawnBanner setNumber={set.number} at={latest.withdrawnAt} by={withdrawnBy(set.id, latest.id, audit)} reason={latest.withdrawReason} />}
       {(set.status === 'withdrawn' || set.status === 'retired') && (

@@ -3,9 +3,9 @@ import remarkGfm from 'remark-gfm'
 
 // Tables scroll inside their own box on a phone; the box is focusable so a keyboard can scroll it.
 const components: Components = {
-  table: ({ node: _node, ...props }) => (
+  table: ({ children }) => (
     <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Table in the notes">
-      <table {...props} />
+      <table>{children}</table>
     </div>
   ),
 }

@@ -73,7 +73,11 @@ const join = (...parts: (string | null | false)[]) => parts.filter(Boolean).join
  */
 export function auditSentence(action: string, d: Details): string {
   const s = sentence(action, d)
-  return s ? `${s.charAt(0).toUpperCase()}${s.slice(1)}${/[.”?!]$/.test(s) ? '' : '.'}` : ''
+  if (!s) return ''
+  // A revision number (r4) or an e-mail address keeps its case at the start of a sentence.
+  const first = s.split(' ')[0]
+  const keep = /^r\d+$/.test(first) || first.includes('@')
+  return `${keep ? s : `${s.charAt(0).toUpperCase()}${s.slice(1)}`}${/[.”?!]$/.test(s) ? '' : '.'}`
 }
 
 function sentence(action: string, d: Details): string {

@@ -392,3 +392,21 @@ export async function setExists(id: number): Promise<boolean> {
   const rows = await db.select({ id: mapSets.id }).from(mapSets).where(eq(mapSets.id, id))
   return rows.length > 0
 }
+
+/**
+ * The release that was in the trucks just before `releasedAt` in this program: released earlier and
+ * not withdrawn by then (a retirement at that moment is this release replacing it). Null for a
+ * program's first release.
+ */
+export async function releaseBefore(programId: number, releasedAt: Date) {
+  const db = await getDb()
+  const [row] = await db
+    .select({ setId: setReleases.setId, setNumber: mapSets.number, releasedAt: setReleases.releasedAt, driveRevisionId: mapSets.driveRevisionId, regenRevisionId: mapSets.regenRevisionId, paramVersion: paramVersions.number })
+    .from(setReleases)
+    .innerJoin(mapSets, eq(mapSets.id, setReleases.setId))
+    .innerJoin(paramVersions, eq(paramVersions.id, mapSets.paramVersionId))
+    .where(and(eq(setReleases.programId, programId), sql`${setReleases.releasedAt} < ${releasedAt}`, or(isNull(setReleases.withdrawnAt), sql`${setReleases.withdrawnAt} > ${releasedAt}`)))
+    .orderBy(desc(setReleases.releasedAt), desc(setReleases.id))
+    .limit(1)
+  return row ?? null
+}

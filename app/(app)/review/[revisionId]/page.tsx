@@ -18,6 +18,7 @@ import { releasedRevisionOfMap } from '@/app/(app)/maps/[id]/released-set'
 import { ReviewActions } from './review-actions'
 import { ReviewComments } from './review-comments'
 import { ChangesSummary } from './changes-summary'
+import { compareWithReleaseBefore } from '@/app/_lib/sets/release-before'
 import { SetsHolding } from './sets-holding'
 
 export const metadata = { title: 'Review' }
@@ -36,6 +37,11 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
     releasedRevisionOfMap(map),
   ])
   const changes = released && released.revision.id !== r.id ? diff(released.revision.table, r.table) : null
+  // In the trucks now: say what it changed against the release before, not "nothing to compare".
+  const previous =
+    released && released.revision.id === r.id
+      ? { kind: map.kind, comparison: await compareWithReleaseBefore({ programId: map.programId, releasedAt: released.releasedAt, drive: map.kind === 'drive' ? { revisionId: r.id } : null, regen: map.kind === 'regen' ? { revisionId: r.id } : null }) }
+      : undefined
   const findings = validate(r.table, limitsFromVehicle(map.programParams))
   const errors = findings.filter((f) => f.severity === 'error').length
   const state = r.state
@@ -71,6 +77,7 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
         number={r.number}
         released={released && { number: released.revision.number, setId: released.setId, setNumber: released.setNumber }}
         changes={changes}
+        previous={previous}
       />
       {actions.length > 0 && <ReviewActions revisionId={r.id} actions={actions} />}
       <SetsHolding revisionId={r.id} kind={map.kind} sets={sets} canMake={EDITORS.includes(user.role)} />

@@ -14,6 +14,8 @@ import { surfaceLabel } from '@/physics/surfaces'
 import { SetStatusBadge } from '../status-badge'
 import { otherSetIds, setHistory, withdrawnBy } from './history'
 import { ReleasePanel } from './release-panel'
+import { ReleaseComparisonView } from './release-comparison'
+import { compareWithReleaseBefore } from '@/app/_lib/sets/release-before'
 import { SetAcknowledgements } from './set-acknowledgements'
 import { SetDownloads } from './set-downloads'
 import { SetFindingsView } from './set-findings'
@@ -47,6 +49,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
   const setNumbers = new Map(others.length ? (await listSets({ ids: others })).map((s) => [s.id, s.number] as const) : [])
   const history = setHistory({ setId: set.id, createdAt: set.createdAt, createdByName: set.createdByName, releases: set.releases, audit, setNumbers })
   const latest = set.releases[0] ?? null
+  const comparison = latest ? await compareWithReleaseBefore({ programId: set.programId, releasedAt: latest.releasedAt, drive: set.drive, regen: set.regen }) : null
   const isLead = user.role === 'lead_engineer'
   const canRelease = isLead && (set.status === 'testing' || set.status === 'retired')
   // What would still block the release with a reason given for every traction exception.
@@ -86,6 +89,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
         </p>
       )}
       <SetParts set={set} />
+      {latest && <ReleaseComparisonView comparison={comparison} paramVersion={set.paramVersion.number} />}
       <SetFindingsView set={set} findings={setFindings(set)} />
       <section aria-labelledby="release-section-heading" className="space-y-3">
         <h2 id="release-section-heading" className="text-lg font-semibold">Release</h2>

@@ -347,20 +347,7 @@ export async function recordSetWithdrawal(tx: Tx, w: { setId: number; programId:
     .where(and(eq(setReleases.setId, w.setId), isNull(setReleases.retiredAt), isNull(setReleases.withdrawnAt)))
     .returning({ id: setReleases.id })
   if (!closed[0]) return { ok: false, restoredSetId: null }
-  const [previous] = await tx
-    .select({ id: setReleases.id, setId: setReleases.setId })
-    .from(setReleases)
-    // Never one whose set has been withdrawn since (a set released again and then withdrawn leaves an older, retired row).
-    .where(
-      and(
-        eq(setReleases.programId, w.programId),
-        isNull(setReleases.withdrawnAt),
-        sql`${setReleases.retiredAt} is not null`,
-        sql.raw('not exists (select 1 from set_releases w where w.set_id = set_releases.set_id and w.withdrawn_at is not null)'),
-      ),
-    )
-    .orderBy(desc(setReleases.releasedAt), desc(setReleases.id))
-    .limit(1)
+  const previous = await releaseToRestore(w.programId, tx)
   const mine = await partsOf(tx, w.setId)
   let restored: number[] = []
   if (previous) {
@@ -372,6 +359,29 @@ export async function recordSetWithdrawal(tx: Tx, w: { setId: number; programId:
   await recordAudit({ actorId: w.actorId, action: 'set.withdraw', entityType: 'map_set', entityId: w.setId, details: { releaseId: closed[0].id, reason: w.reason, restoredSetId: previous?.setId ?? null } }, tx)
   await enqueueMail(w.mail, tx)
   return { ok: true, restoredSetId: previous?.setId ?? null }
+}
+
+/**
+ * The release a withdrawal of the current one brings back: the latest replaced release, never one
+ * whose set has been withdrawn since (a set released again and then withdrawn leaves an older,
+ * retired row). The withdrawal and the lead's confirmation both ask this.
+ */
+export async function releaseToRestore(programId: number, conn?: Pick<Db, 'select'>): Promise<{ id: number; setId: number; setNumber: number } | null> {
+  const [row] = await (conn ?? (await getDb()))
+    .select({ id: setReleases.id, setId: setReleases.setId, setNumber: mapSets.number })
+    .from(setReleases)
+    .innerJoin(mapSets, eq(mapSets.id, setReleases.setId))
+    .where(
+      and(
+        eq(setReleases.programId, programId),
+        isNull(setReleases.withdrawnAt),
+        sql`${setReleases.retiredAt} is not null`,
+        sql.raw('not exists (select 1 from set_releases w where w.set_id = set_releases.set_id and w.withdrawn_at is not null)'),
+      ),
+    )
+    .orderBy(desc(setReleases.releasedAt), desc(setReleases.id))
+    .limit(1)
+  return row ?? null
 }
 
 /** The program's current released set, if any. */

@@ -6,7 +6,7 @@ import { formatTime, shortChecksum } from '@/app/_components/format'
 import { MarkdownNotes } from '@/app/_components/markdown-notes'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { loadRevisionContext } from '@/app/_lib/review/service'
-import { availableActions } from '@/app/_lib/review/states'
+import { availableActions, blockedActions } from '@/app/_lib/review/states'
 import { STATE_LABELS } from '@/domain/revision-states'
 import { NotFoundError } from '@/app/_lib/http/errors'
 import { listReviewComments, listRevisionEvents } from '@/db/queries/review'
@@ -46,6 +46,7 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
   const errors = findings.filter((f) => f.severity === 'error').length
   const state = r.state
   const actions = availableActions(state, user, r.authorId)
+  const blocked = blockedActions(state, user, r.authorId)
   return (
     <div className="space-y-5">
       <div>
@@ -79,7 +80,16 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
         changes={changes}
         previous={previous}
       />
-      {actions.length > 0 && <ReviewActions revisionId={r.id} actions={actions} />}
+      {(actions.length > 0 || blocked.length > 0) && (
+        <ReviewActions
+          revisionId={r.id}
+          actions={actions}
+          blocked={blocked}
+          summaries={{
+            approve: `Approve ${map.name} r${r.number} by ${r.authorName}: it becomes “${STATE_LABELS.approved}”, can go into a map set for release, and ${r.authorName} is told by e-mail.`,
+          }}
+        />
+      )}
       <SetsHolding revisionId={r.id} kind={map.kind} sets={sets} canMake={EDITORS.includes(user.role)} />
       <section id="reports">
         <h2 className="mb-2 text-lg font-semibold">Drive reports on sets holding this revision</h2>

@@ -8,7 +8,7 @@ import { formatTime } from '@/app/_components/format'
 import { SafetyCaution } from '@/app/_components/safety-caution'
 import { listAudit } from '@/db/queries/audit'
 import { listReports } from '@/db/queries/reports'
-import { currentSetRelease, listSets } from '@/db/queries/sets'
+import { currentSetRelease, listSets, releaseToRestore } from '@/db/queries/sets'
 import { loadCaseLabel } from '@/physics/load-cases'
 import { surfaceLabel } from '@/physics/surfaces'
 import { SetStatusBadge } from '../status-badge'
@@ -39,7 +39,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
     setGateFor(set),
     listReports({ setId: set.id }),
     testPackage(set),
-    set.status === 'testing' ? null : currentSetRelease(set.programId),
+    currentSetRelease(set.programId),
     // Withdrawals and later releases of the program say who withdrew this set's release and what replaced it.
     firstRelease
       ? Promise.all([listAudit({ entityType: 'map_set', action: 'set.release', since: firstRelease.releasedAt, limit: 500 }), listAudit({ entityType: 'map_set', action: 'set.withdraw', since: firstRelease.releasedAt, limit: 500 })]).then((x) => x.flat())
@@ -49,8 +49,10 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
   const setNumbers = new Map(others.length ? (await listSets({ ids: others })).map((s) => [s.id, s.number] as const) : [])
   const history = setHistory({ setId: set.id, createdAt: set.createdAt, createdByName: set.createdByName, releases: set.releases, audit, setNumbers })
   const latest = set.releases[0] ?? null
+  const partNames = [set.drive && `drive map ${set.drive.mapName} r${set.drive.number}`, set.regen && `regen map ${set.regen.mapName} r${set.regen.number}`].filter(Boolean).join(' and ')
   const comparison = latest ? await compareWithReleaseBefore({ programId: set.programId, releasedAt: latest.releasedAt, drive: set.drive, regen: set.regen }) : null
   const isLead = user.role === 'lead_engineer'
+  const restore = isLead && set.status === 'released' ? await releaseToRestore(set.programId) : null
   const canRelease = isLead && (set.status === 'testing' || set.status === 'retired')
   // What would still block the release with a reason given for every traction exception.
   const unmet = canRelease
@@ -101,13 +103,18 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
             setId={set.id}
             setNumber={set.number}
             unmet={unmet}
+            summary={`Release Set ${set.number} of ${set.programName}: its ${partNames} go to the program's trucks${current ? `, replacing Set ${current.setNumber}` : ' as its first released set'}; the leads and the maps' authors are e-mailed.`}
             exceptions={gate.exceptions.map((e) => ({
               key: e.key,
               label: `${e.mapKind === 'drive' ? 'Drive' : 'Regen'} map × ${surfaceLabel(e.surface)} × ${loadCaseLabel(e.loadCase)}: ${e.cells.length} cell(s) above the limit`,
             }))}
           />
         )}
-        {isLead && set.status === 'released' && <WithdrawPanel setId={set.id} setNumber={set.number} />}
+        {isLead && set.status === 'released' && <WithdrawPanel
+            setId={set.id}
+            setNumber={set.number}
+            summary={`Withdraw the release of Set ${set.number}: everyone is told not to use it; ${restore ? `Set ${restore.setNumber}, the release before it, goes back to the trucks` : `${set.programName} will have no released set`}.`}
+          />}
         <SetDownloads setId={set.id} status={set.status} release={latest} test={{ sha256: test.sha256, bytes: test.bytes.length }} />
       </section>
       <SetReports setId={set.id} reports={reports} canFile={user.role === 'test_driver' && set.status !== 'withdrawn'} />

@@ -3,6 +3,7 @@ import { useRouter } from 'next/navigation'
 import { useState, type FormEvent } from 'react'
 import { useMutation } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
+import { ConfirmStep } from '@/app/_components/confirm-step'
 
 export interface ExceptionChoice {
   key: string
@@ -14,8 +15,9 @@ export interface ExceptionChoice {
  * The lead's release of a set: a reason for each traction exception (map × surface × load case),
  * then Release. The server judges the gate again and its refusal is shown as it says it.
  */
-export function ReleasePanel({ setId, setNumber, exceptions, unmet }: { setId: number; setNumber: number; exceptions: ExceptionChoice[]; unmet: string[] }) {
+export function ReleasePanel({ setId, setNumber, exceptions, unmet, summary }: { setId: number; setNumber: number; exceptions: ExceptionChoice[]; unmet: string[]; summary: string }) {
   const router = useRouter()
+  const [confirming, setConfirming] = useState(false)
   const [reasons, setReasons] = useState<Record<string, string>>({})
   const [error, setError] = useState<string | null>(null)
   const [done, setDone] = useState<string | null>(null)
@@ -27,11 +29,13 @@ export function ReleasePanel({ setId, setNumber, exceptions, unmet }: { setId: n
       }),
     onSuccess: (r) => {
       setError(null)
+      setConfirming(false)
       setDone(`Set ${setNumber} is released. Package ${r.filename}, SHA-256 ${r.sha256}.`)
       router.refresh()
     },
     onError: (e) => {
       setError(e.message)
+      setConfirming(false)
       router.refresh()
     },
   })
@@ -40,7 +44,8 @@ export function ReleasePanel({ setId, setNumber, exceptions, unmet }: { setId: n
     e.preventDefault()
     const missing = exceptions.filter((x) => !(reasons[x.key] ?? '').trim())
     if (missing.length) return setError(`Give a reason for each traction exception (${missing.length} without one)`)
-    release.mutate()
+    setError(null)
+    setConfirming(true)
   }
 
   return (
@@ -75,9 +80,22 @@ export function ReleasePanel({ setId, setNumber, exceptions, unmet }: { setId: n
       )}
       {error && <p role="alert" className="error-text text-sm">{error}</p>}
       {done && <p role="status" className="rounded bg-accent-soft px-2 py-1 text-sm break-words">{done}</p>}
-      <button type="submit" className="btn-primary" disabled={release.isPending}>
-        {release.isPending ? 'Releasing…' : `Release Set ${setNumber}`}
-      </button>
+      {confirming ? (
+        <ConfirmStep
+          summary={summary}
+          confirmLabel={`Yes, release Set ${setNumber}`}
+          pending={release.isPending}
+          onConfirm={() => release.mutate()}
+          onCancel={() => {
+            setConfirming(false)
+            setTimeout(() => document.getElementById(`release-${setId}`)?.focus(), 0)
+          }}
+        />
+      ) : (
+        <button id={`release-${setId}`} type="submit" className="btn-primary" disabled={release.isPending}>
+          {`Release Set ${setNumber}`}
+        </button>
+      )}
     </form>
   )
 }

@@ -404,19 +404,25 @@ export async function setExists(id: number): Promise<boolean> {
 }
 
 /**
- * The release that was in the trucks just before `releasedAt` in this program: released earlier and
- * not withdrawn by then (a retirement at that moment is this release replacing it). Null for a
+ * The release before one released at `releasedAt` in this program: the one in the trucks just
+ * before (released earlier, not withdrawn by then; a retirement at that moment is this release
+ * replacing it), else the latest earlier release even though it was withdrawn (`withdrawnAt` says
+ * so), so a release after a withdrawal still compares with what was driven before. Null for a
  * program's first release.
  */
 export async function releaseBefore(programId: number, releasedAt: Date) {
   const db = await getDb()
-  const [row] = await db
-    .select({ setId: setReleases.setId, setNumber: mapSets.number, releasedAt: setReleases.releasedAt, driveRevisionId: mapSets.driveRevisionId, regenRevisionId: mapSets.regenRevisionId, paramVersion: paramVersions.number })
-    .from(setReleases)
-    .innerJoin(mapSets, eq(mapSets.id, setReleases.setId))
-    .innerJoin(paramVersions, eq(paramVersions.id, mapSets.paramVersionId))
-    .where(and(eq(setReleases.programId, programId), sql`${setReleases.releasedAt} < ${releasedAt}`, or(isNull(setReleases.withdrawnAt), sql`${setReleases.withdrawnAt} > ${releasedAt}`)))
-    .orderBy(desc(setReleases.releasedAt), desc(setReleases.id))
-    .limit(1)
-  return row ?? null
+  const earlier = (alsoWithdrawn: boolean) =>
+    db
+      .select({ setId: setReleases.setId, setNumber: mapSets.number, releasedAt: setReleases.releasedAt, withdrawnAt: setReleases.withdrawnAt, driveRevisionId: mapSets.driveRevisionId, regenRevisionId: mapSets.regenRevisionId, paramVersion: paramVersions.number })
+      .from(setReleases)
+      .innerJoin(mapSets, eq(mapSets.id, setReleases.setId))
+      .innerJoin(paramVersions, eq(paramVersions.id, mapSets.paramVersionId))
+      .where(and(eq(setReleases.programId, programId), sql`${setReleases.releasedAt} < ${releasedAt}`, alsoWithdrawn ? undefined : or(isNull(setReleases.withdrawnAt), sql`${setReleases.withdrawnAt} > ${releasedAt}`)))
+      .orderBy(desc(setReleases.releasedAt), desc(setReleases.id))
+      .limit(1)
+  const [inTrucks] = await earlier(false)
+  if (inTrucks) return { ...inTrucks, withdrawnAt: null }
+  const [withdrawn] = await earlier(true)
+  return withdrawn ?? null
 }

@@ -11,7 +11,8 @@ export type PartChange =
   | { kind: MapKind; change: 'none-now' }
 
 export interface ReleaseComparison {
-  before: { setId: number; setNumber: number; releasedAt: Date; paramVersion: number }
+  /** `withdrawnAt` set: that release had been withdrawn before this one, so the trucks had no released set between. */
+  before: { setId: number; setNumber: number; releasedAt: Date; withdrawnAt: Date | null; paramVersion: number }
   parts: PartChange[]
 }
 
@@ -47,5 +48,5 @@ export async function compareWithReleaseBefore(set: {
     part('drive', set.drive?.revisionId ?? null, before.driveRevisionId),
     part('regen', set.regen?.revisionId ?? null, before.regenRevisionId),
   ])
-  return { before: { setId: before.setId, setNumber: before.setNumber, releasedAt: before.releasedAt, paramVersion: before.paramVersion }, parts }
+  return { before: { setId: before.setId, setNumber: before.setNumber, releasedAt: before.releasedAt, withdrawnAt: before.withdrawnAt, paramVersion: before.paramVersion }, parts }
 }

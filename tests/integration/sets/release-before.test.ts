@@ -41,7 +41,7 @@ describe('the release before', () => {
     expect(cmp!.parts.find((p) => p.kind === 'regen')).toMatchObject({ change: 'same', number: 1 })
   })
 
-  it('skips a release withdrawn before the later one was made', async () => {
+  it('skips a release withdrawn before the later one was made, unless no other came before', async () => {
     const s = await setSetup()
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
@@ -50,12 +50,33 @@ describe('the release before', () => {
     const regen2 = await saveRevision(s, s.regenMapId, 1, { ...GENTLE_REGEN, values: [[0, 30, 30], [0, 60, 60], [0, 100, 100]] })
     await approve(s, regen2)
     const b = await makeSet(s, { regenRevisionId: regen2 })
-    expect((await releaseOf(s, b))?.before.setId).toBe(a)
+    expect((await releaseOf(s, b))?.before).toMatchObject({ setId: a, withdrawnAt: null })
     // B withdrawn: A is back in the trucks. C then follows A, not the withdrawn B.
     expect((await withdrawSet(b, s.leadCookie, 'Lift-off too sharp')).status).toBe(200)
     const regen3 = await saveRevision(s, s.regenMapId, 2, { ...GENTLE_REGEN, values: [[0, 25, 25], [0, 60, 60], [0, 100, 100]] })
     await approve(s, regen3)
     const c = await makeSet(s, { regenRevisionId: regen3 })
     expect((await releaseOf(s, c))?.before.setId).toBe(a)
+  })
+
+  it('after a withdrawn first release, the next compares with it and says it was withdrawn', async () => {
+    const s = await setSetup()
+    await approve(s, s.driveRevisionId)
+    await approve(s, s.regenRevisionId)
+    const a = await makeSet(s)
+    await releaseOf(s, a)
+    expect((await withdrawSet(a, s.leadCookie, 'Spin at launch')).status).toBe(200)
+    // Both withdrawn revisions are replaced by new ones (a withdrawn revision is never released again).
+    const values = GENTLE.values.map((r) => [...r])
+    values[2][2] -= 10
+    const drive2 = await saveRevision(s, s.mapId, 1, { ...GENTLE, values })
+    const regen2 = await saveRevision(s, s.regenMapId, 1, { ...GENTLE_REGEN, values: [[0, 30, 30], [0, 60, 60], [0, 100, 100]] })
+    await approve(s, drive2)
+    await approve(s, regen2)
+    const b = await makeSet(s, { driveRevisionId: drive2, regenRevisionId: regen2 })
+    const cmp = await releaseOf(s, b)
+    expect(cmp?.before.setId).toBe(a)
+    expect(cmp?.before.withdrawnAt).toBeInstanceOf(Date)
+    expect(cmp?.parts.find((p) => p.kind === 'regen')).toMatchObject({ change: 'changed' })
   })
 })

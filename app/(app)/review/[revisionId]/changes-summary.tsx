@@ -4,7 +4,12 @@ import type { PartChange, ReleaseComparison } from '@/app/_lib/sets/release-befo
 
 /** For the revision in the trucks now: this map's line against the release before, in words. */
 function AgainstBefore({ before, part }: { before: ReleaseComparison['before']; part: PartChange }) {
-  const setLink = <Link href={`/sets/${before.setId}`} className="text-accent underline">set {before.setNumber}</Link>
+  const setLink = (
+    <>
+      <Link href={`/sets/${before.setId}`} className="text-accent underline">set {before.setNumber}</Link>
+      {before.withdrawnAt ? ', since withdrawn' : ''}
+    </>
+  )
   if (part.change === 'same') return <p>The release before it ({setLink}) held the same revision.</p>
   if (part.change !== 'changed') return <p>The release before it ({setLink}) held no map of this kind.</p>
   const c = part.diff

@@ -33,10 +33,17 @@ export function ReleaseComparisonView({ comparison, paramVersion }: { comparison
         <p>This was the program&apos;s first release: there was no earlier release in the trucks to compare with.</p>
       ) : (
         <>
-          <p>
-            Before this release the trucks ran{' '}
-            <Link href={`/sets/${comparison.before.setId}`} className="text-accent underline">Set {comparison.before.setNumber}</Link>, released {formatTime(comparison.before.releasedAt)}.
-          </p>
+          {comparison.before.withdrawnAt ? (
+            <p>
+              The release before it was{' '}
+              <Link href={`/sets/${comparison.before.setId}`} className="text-accent underline">Set {comparison.before.setNumber}</Link>, released {formatTime(comparison.before.releasedAt)} and withdrawn {formatTime(comparison.before.withdrawnAt)}.
+            </p>
+          ) : (
+            <p>
+              Before this release the trucks ran{' '}
+              <Link href={`/sets/${comparison.before.setId}`} className="text-accent underline">Set {comparison.before.setNumber}</Link>, released {formatTime(comparison.before.releasedAt)}.
+            </p>
+          )}
           <ul className="ml-5 list-disc space-y-1">
             {comparison.parts.map((p) => <PartLine key={p.kind} p={p} />)}
             <li>

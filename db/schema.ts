@@ -103,6 +103,8 @@ export const users = pgTable(
     disabled: boolean('disabled').notNull().default(false),
     /** Carried in every session token; raised on a password change, reset or disabling to end all sessions. */
     sessionVersion: integer('session_version').notNull().default(1),
+    /** Set when the account is made by invitation; cleared once a password is set (by the link or by an admin). */
+    invitedAt: timestamp('invited_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },

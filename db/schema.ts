@@ -53,6 +53,8 @@ export interface ReleaseConditions {
   maxPeakJerkMps3?: number
   maxTimeTo90S?: number
   comfortSource?: string
+  /** Replay margin of the gate's optional evidence-replay condition, N·m (absent: no such condition). */
+  replayMarginNm?: number
   /** Startability and gradeability, laden: steepest start grade %, and a grade % to hold at a speed km/h (absent: not checked). */
   startGradePct?: number
   holdGradePct?: number

@@ -54,6 +54,7 @@ FIELDS['releaseConditions.minLiftOffDecelMps2'] = { label: 'Release check: minim
 FIELDS['releaseConditions.maxPeakJerkMps3'] = { label: 'Comfort: largest peak jerk', unit: 'm/s³', scale: 1 }
 FIELDS['releaseConditions.maxTimeTo90S'] = { label: 'Comfort: longest time to 90 % torque', unit: 's', scale: 1 }
 FIELDS['releaseConditions.comfortSource'] = { label: 'Comfort: source of the limits', unit: '', scale: 1 }
+FIELDS['releaseConditions.replayMarginNm'] = { label: 'Release check: replay margin over the evidence', unit: 'N·m', scale: 1 }
 FIELDS['releaseConditions.startGradePct'] = { label: 'Grade: steepest start, laden', unit: '%', scale: 1 }
 FIELDS['releaseConditions.holdGradePct'] = { label: 'Grade: grade to hold, laden', unit: '%', scale: 1 }
 FIELDS['releaseConditions.holdSpeedKmh'] = { label: 'Grade: speed to hold on it', unit: 'km/h', scale: 1 }

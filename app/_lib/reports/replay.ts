@@ -39,7 +39,7 @@ async function chooseLog(report: ReportRow, logId: number | undefined) {
   return (await getLog(done.id))!
 }
 
-export async function replayReport(report: ReportRow, candidateSetId: number, logId?: number): Promise<ReplayAnswer> {
+export async function replayReport(report: ReportRow, candidateSetId: number, logId?: number, marginNm?: number): Promise<ReplayAnswer> {
   const started = performance.now()
   const [driven, candidate] = await Promise.all([getSet(report.setId), getSet(candidateSetId)])
   if (!driven) throw new NotFoundError(`Set ${report.setId}`)
@@ -55,6 +55,7 @@ export async function replayReport(report: ReportRow, candidateSetId: number, lo
       candidate: { ...parts(candidate), vehicle: candidate.paramVersion.params },
       surface: report.surface,
       loadCase: report.loadCase,
+      marginNm,
     }),
   )
   await ingestLog(await getObjectStream(log.objectKey), {

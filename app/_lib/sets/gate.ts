@@ -52,7 +52,7 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'jackknife' | 'lift-off' | 'grade' | 'drive-report' | 'coverage' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'jackknife' | 'lift-off' | 'grade' | 'drive-report' | 'coverage' | 'replay' | 'safety'
   met: boolean
   summary: string
   details: string[]
@@ -114,6 +114,8 @@ export function setGate(input: {
   acknowledgements: Acknowledgement[]
   /** The set's ramp limits, or null when it holds none. */
   ramps?: RampLimits | null
+  /** The evidence logs replayed through the set, when the version declares a replay margin. */
+  replay?: ReplayEvidence[] | null
 }): SetGateResult {
   const { parts, vehicle, conditions } = input
   const kinds = new Set(parts.map((p) => p.kind))
@@ -219,6 +221,7 @@ export function setGate(input: {
           : `${uncovered.length} of ${coverage.length} release condition(s) have no drive report and no waiver`,
       details: coverage.filter((c) => uncovered.includes(c.key)).map((c) => `${surfaceLabel(c.surface)}, ${loadCaseLabel(c.loadCase)}: no drive report`),
     },
+    ...(input.replay && conditions.replayMarginNm !== undefined ? [replayCondition(input.replay, conditions.replayMarginNm)] : []),
     {
       id: 'safety',
       met: input.concerns.length === 0,
@@ -289,5 +292,24 @@ function rampCondition(ramps: RampLimits | null, parts: SetGatePart[]): SetGateC
     met: errors.length === 0,
     summary: errors.length === 0 ? 'The ramp limits fit the maps' : `The ramp limits do not fit the maps (${errors.length} problem(s))`,
     details: errors.map((f) => f.message),
+  }
+}
+
+/** One evidence log replayed through the set: the most its request exceeded what was driven, N·m, and when. */
+export interface ReplayEvidence { reportId: number; setNumber: number; logId: number; fileName: string; worstExcessNm: number; worstAtS: number | null }
+
+/** Replayed over the program's evidence logs, the set never asks for more than was driven by over the margin. */
+function replayCondition(evidence: ReplayEvidence[], marginNm: number): SetGateCondition {
+  const over = evidence.filter((e) => e.worstExcessNm > marginNm)
+  return {
+    id: 'replay',
+    met: over.length === 0,
+    summary:
+      evidence.length === 0
+        ? 'No analysed log on the program’s other sets to replay this set over'
+        : over.length === 0
+          ? `Replayed over ${evidence.length} evidence log(s), the set never asks for more than was driven by over ${marginNm} N·m`
+          : `Replayed over the evidence, the set asks for more than was driven by over ${marginNm} N·m on ${over.length} of ${evidence.length} log(s)`,
+    details: over.map((e) => `${e.fileName} (report ${e.reportId}, set ${e.setNumber}): up to ${Math.round(e.worstExcessNm)} N·m more${e.worstAtS !== null ? ` at ${e.worstAtS.toFixed(1)} s` : ''}`),
   }
 }

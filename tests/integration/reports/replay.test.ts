@@ -62,3 +62,35 @@ describe('replaying a report’s log through a set', () => {
     expect((await replay(reportId, a.cookie, 'setId=abc')).status).toBe(400)
   })
 })
+
+describe('the gate’s evidence replay, when the parameter version declares a margin', () => {
+  it('refuses a set that would ask for more than was driven beyond the margin; the same maps under the new version pass', async () => {
+    const programRoute = await import('@/app/api/programs/[id]/route')
+    const { call } = await import('@/tests/support/api')
+    const { getSetView, gateMet } = await import('@/tests/support/set-fixtures')
+    const s = await setSetup({ drive: SMALL_DRIVE })
+    const driven = await makeSet(s)
+    const reportId = await fileSetReport(driven, s.driverCookie)
+    const up = await upload(reportId, s.driverCookie, generateLog({ seed: 5, durationS: 30, rateHz: 50 }).csv)
+    await analyse(up.body.log.id)
+    // Without a declared margin there is no replay condition.
+    expect(gateMet(await getSetView(driven, s.leadCookie)).replay).toBeUndefined()
+
+    const { program } = (await call(programRoute.GET, { cookie: s.cookie, params: { id: String(s.programId) } })).body
+    const put = await call(programRoute.PUT, { method: 'PUT', cookie: s.cookie, params: { id: String(s.programId) }, body: { name: program.name, description: '', params: program.params, releaseConditions: { ...program.releaseConditions, replayMarginNm: 50 }, reason: 'Judge new sets against the evidence' } })
+    expect(put.status, JSON.stringify(put.body)).toBe(200)
+
+    const rev2 = await saveRevision(s, s.mapId, 1, { ...SMALL_DRIVE, values: SMALL_DRIVE.values.map((row) => row.map((v) => v * 1.5 + 80)) })
+    const stronger = await makeSet(s, { driveRevisionId: rev2 })
+    const view = await getSetView(stronger, s.leadCookie)
+    const replay = view.body.gate.conditions.find((c: { id: string }) => c.id === 'replay')
+    expect(replay.met).toBe(false)
+    expect(replay.details[0]).toMatch(new RegExp(`report ${reportId}, set \\d+\\): up to \\d+ N·m more`))
+
+    const sameMaps = await makeSet(s) // the driven revisions, judged with version 2
+    expect(sameMaps).not.toBe(driven)
+    const same = (await getSetView(sameMaps, s.leadCookie)).body.gate.conditions.find((c: { id: string }) => c.id === 'replay')
+    expect(same.met, JSON.stringify(same)).toBe(true)
+    expect(same.summary).toMatch(/Replayed over 1 evidence log/)
+  })
+})

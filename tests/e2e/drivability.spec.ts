@@ -1,5 +1,6 @@
 import { expect, test, type Page } from '@playwright/test'
 import { DEMO, signIn } from './helpers'
+import { expectAccessible } from './axe'
 
 /** The demo tipper program's id, from the programs list. */
 async function tipperProgram(page: Page): Promise<number> {
@@ -11,6 +12,7 @@ async function tipperProgram(page: Page): Promise<number> {
 /** Save new ramp limits with every tip-in rate set to `rate` (N·m/s); returns the new version's number. */
 async function saveTipIn(page: Page, programId: number, rate: string, reason: string): Promise<number> {
   await page.goto(`/programs/${programId}/ramps`)
+  await expectAccessible(page, 'the ramp limits page')
   const inputs = page.getByLabel(/^Tip-in, row \d+$/)
   for (let i = 0; i < (await inputs.count()); i++) await inputs.nth(i).fill(rate)
   await page.getByLabel('Reason for this change').fill(reason)
@@ -40,6 +42,7 @@ test('an engineer sharpens the tip-in ramp, sees tip-in break the jerk limit, so
   await expect(tipInRows.first()).toBeVisible()
   await expect(tipInRows.filter({ hasText: 'fails: jerk' }).first()).toBeVisible()
   await expect(page.getByTestId('drivability-plots')).toBeVisible()
+  await expectAccessible(page, 'the drivability page')
 
   await saveTipIn(page, programId, '1500', 'Soften the tip-in for comfort')
   const soft = await setWithLatestRamps(page, programId)
@@ -69,4 +72,5 @@ test('a lead replays a report’s log through a candidate set', async ({ page })
   await expect(page.getByTestId('replay-summary')).toContainText('samples')
   await expect(page.getByTestId('replay-more')).toContainText('Asks for more than was driven')
   await expect(page.getByTestId('replay-plots')).toBeVisible()
+  await expectAccessible(page, 'the replay page')
 })

@@ -10,7 +10,7 @@ export const NOT_A_NUMBER = Number.NEGATIVE_INFINITY
 
 // Exact powers of ten. A ≤ 15-digit mantissa m < 2^53 is an exact double, and so is 10^f for f ≤ 22,
 // so m / 10^f is one correctly rounded IEEE division: the same double `Number(s)` returns.
-export const EXACT_POW10: readonly number[] = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15]
+const EXACT_POW10: readonly number[] = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15]
 
 function slowParse(s: string): number {
   const t = s.trim()

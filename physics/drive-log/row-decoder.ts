@@ -48,7 +48,7 @@ export function createRecordDecoder(layout: LogLayout): RecordDecoder {
   const slots = Int32Array.from(used, (u) => u.slot)
   const cols = Int32Array.from(used, (u) => u.index)
   const factors = Float64Array.from(used, (u) => u.factor)
-  const v = new Float64Array(WHEEL0 + wheels)
+  const v = new Float64Array(WHEEL0 + wheels).fill(NaN)
   const wheelSpeedsKmh = new Array<number>(wheels).fill(NaN)
   const sample: LogSample = { timeS: NaN, roadSpeedKmh: NaN, wheelSpeedsKmh, accelPedalPct: NaN, line: 0 }
   // Local bindings: some loaders compile imports to getter calls, which cost more than the parse itself.
@@ -66,7 +66,7 @@ export function createRecordDecoder(layout: LogLayout): RecordDecoder {
 
   return (text, starts, ends, count, line) => {
     if (count !== width) throw countError(count, line)
-    v.fill(NaN)
+    // No reset: every used slot is written below (or the record throws), unused slots stay NaN.
     for (let k = 0; k < n; k++) {
       const c = cols[k]
       const x = parseIn(text, starts[c], ends[c])

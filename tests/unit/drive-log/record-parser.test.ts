@@ -102,6 +102,14 @@ describe('quoted cells through the streaming ingest', () => {
     const bytes = Buffer.from(log)
     for (let c = 1; c < bytes.length; c++) expect(await ingestLog(() => Readable.from([bytes.subarray(0, c), bytes.subarray(c)]))).toEqual(oneShot)
   })
+  it('both paths give physical lines after a quoted cell spanning lines, and drop one byte-order mark before a quoted header', async () => {
+    const bad = `${HEADER},note\n0,10,10,5,"a\nb"\n0.1,x,10,5,c\n`
+    expect(caught(() => ingestLogText(bad))).toMatchObject({ line: 4, column: { index: 2 } })
+    await expect(ingestLog(Readable.from([Buffer.from(bad)]))).rejects.toMatchObject({ line: 4, column: { index: 2 } })
+    const bom = `\uFEFF"time_s",road_speed_kmh,wheel_speed_kmh,accel_pedal_pct\n0,10,10,5\n`
+    expect(ingestLogText(bom).samples).toBe(1)
+    expect(await ingestLog(Readable.from(['\uFEFF', bom.slice(1)]))).toEqual(ingestLogText(bom, { calibrateRadius: false }))
+  })
   it('a quote inside an unquoted number cell is a bad number at its line and column', () => {
     expect(caught(() => ingestLogText(`${HEADER}\n0,10,10,5\n0.1,1"0,10,5\n`))).toMatchObject({ line: 3, column: { index: 2, name: 'road_speed_kmh' }, reason: '"1\\"0" is not a number' })
   })

@@ -47,10 +47,11 @@ export function sniffLog(text: string, final: boolean): LogDialect | null {
 /** Pulls text until the dialect is known; returns the text read so far (unconsumed, BOM removed) and the dialect. */
 export async function readHead(chunks: AsyncIterator<string>): Promise<{ head: string } & LogDialect> {
   let head = ''
+  let first = true
   for (;;) {
     const next = await chunks.next()
     if (!next.done) head += next.value
-    if (head.charCodeAt(0) === 0xfeff) head = head.slice(1)
+    if (first && head !== '') { first = false; if (head.charCodeAt(0) === 0xfeff) head = head.slice(1) } // one mark at most, as in ingestLogText
     const dialect = sniffLog(head, !!next.done)
     if (dialect) return { head, ...dialect }
   }

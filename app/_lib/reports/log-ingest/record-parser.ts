@@ -23,13 +23,12 @@ export const MAX_RECORD_CHARS = 1 << 20
 const QUOTE = 34
 const SPACE = 32
 
+/** A parser fed text chunk by chunk. */
 export interface RecordParser {
   /** Parses the complete records of `chunk` (plus what was left of the previous one). */
   push(chunk: string): void
   /** Parses what is left as the last record; throws if a quoted field is still open. */
   end(): void
-  /** Physical lines finished so far. */
-  readonly lines: number
 }
 
 /** @example const p = createRecordParser(',', '\n', (t, s, e, n, line) => {}); p.push('a,"b,c"\n1,2'); p.end() */
@@ -181,6 +180,5 @@ export function createRecordParser(delimiter: string, newline: LogNewline, onRec
       carry = ''
       if (buf !== '') run(buf, 0, true)
     },
-    get lines() { return line - 1 },
   }
 }

@@ -10,7 +10,7 @@ export const NOT_A_NUMBER = Number.NEGATIVE_INFINITY
 
 // Exact powers of ten. A ≤ 15-digit mantissa m < 2^53 is an exact double, and so is 10^f for f ≤ 22,
 // so m / 10^f is one correctly rounded IEEE division: the same double `Number(s)` returns.
-export const EXACT_POW10: readonly number[] = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15]
+const EXACT_POW10: readonly number[] = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15]
 
 function slowParse(s: string): number {
   const t = s.trim()
@@ -25,19 +25,31 @@ function slowParse(s: string): number {
  */
 export function parseLogNumberIn(s: string, start: number, end: number): number {
   let i = start
-  let neg = false
-  if (end > start && s.charCodeAt(start) === 45) { neg = true; i++ }
+  const neg = end > start && s.charCodeAt(start) === 45
+  if (neg) i++
   const first = i
   let m = 0
-  let frac = -1 // digits after the point; −1: no point seen
+  let d = 0
+  // Integer digits, then (after one point) fraction digits: two loops, so the digit loop tests nothing else.
   for (; i < end; i++) {
-    const c = s.charCodeAt(i)
-    const d = c - 48
-    if (d >= 0 && d <= 9) { m = m * 10 + d; if (frac >= 0) frac++ }
-    else if (c === 46 && frac < 0) frac = 0
-    else return slowParse(s.slice(start, end))
+    d = s.charCodeAt(i) - 48
+    if (d >>> 0 > 9) break
+    m = m * 10 + d
   }
-  const digits = end - first - (frac >= 0 ? 1 : 0)
+  let frac = 0
+  let point = 0
+  if (i < end) {
+    if (d !== -2) return slowParse(s.slice(start, end)) // not a '.'
+    point = 1
+    const p = ++i
+    for (; i < end; i++) {
+      d = s.charCodeAt(i) - 48
+      if (d >>> 0 > 9) return slowParse(s.slice(start, end))
+      m = m * 10 + d
+    }
+    frac = i - p
+  }
+  const digits = end - first - point
   if (digits < 1 || digits > 15) return slowParse(s.slice(start, end))
   const v = frac > 0 ? m / EXACT_POW10[frac] : m
   return neg ? -v : v

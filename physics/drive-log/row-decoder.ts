@@ -1,14 +1,17 @@
-/** Turns the text cells of one log row into a {@link LogSample}, with the line and column of any bad cell. */
+/** Turns the fields of one log record into a {@link LogSample}, with the line and column of any bad cell. */
 import { WHEEL_CHANNELS, type LogChannel, type WheelChannel } from './columns'
 import { LogFormatError } from './errors'
 import type { LogLayout } from './header'
-import { EXACT_POW10, NOT_A_NUMBER as BAD, parseLogNumberIn } from './number-cell'
+import { NOT_A_NUMBER as BAD, parseLogNumberIn } from './number-cell'
 import type { LogSample } from './types'
 
-/** Decodes rows of one layout. The returned sample object is reused: it is valid until the next call. */
+/**
+ * Decodes one record given as field ranges of `text` (field k is `text.slice(starts[k], ends[k])`), as the
+ * record parser yields it. The returned sample object is reused: it is valid until the next call.
+ */
+export type RecordDecoder = (text: string, starts: Int32Array, ends: Int32Array, count: number, line: number) => LogSample
+/** Decodes a record given as cell strings. Same reuse rule as {@link RecordDecoder}. */
 export type RowDecoder = (fields: readonly string[], line: number) => LogSample
-/** Decodes one unquoted CSV line in place (no cell substrings). Same reuse rule as {@link RowDecoder}. */
-export type LineDecoder = (text: string, line: number) => LogSample
 
 // Fixed slots of the scratch vector; wheel speeds follow from WHEEL0 on.
 const TIME = 0, ROAD = 1, ACCEL = 2, BRAKE = 3, TORQUE = 4, MOTOR = 5, CURRENT = 6, VOLTAGE = 7, YAW = 8, WHEEL0 = 9
@@ -18,13 +21,13 @@ const FIXED: readonly [LogChannel, number][] = [
 ]
 
 /**
- * Builds the decoders for `layout`: `fromFields` takes cells already split by a CSV parser, `fromLine` splits
- * an unquoted line at `delimiter` itself. Both read each cell exactly as {@link parseLogNumber} would.
- * Empty / `NaN` cells are missing values (NaN); a missing time, a cell that is not a decimal number, or a
- * wrong field count throws {@link LogFormatError}. Hot path: a flat loop into a reused vector, no per-row allocation.
- * @example createRowDecoders(layout, ',').fromLine('0.02,10,10.4,35', 3).roadSpeedKmh // 10
+ * Builds the decoder for `layout`. Each used cell is read in place by {@link parseLogNumberIn} (exactly
+ * `parseLogNumber` of the cell, no substring). Empty / `NaN` cells are missing values (NaN); a wrong field
+ * count (checked first), a missing time or a cell that is not a decimal number throws {@link LogFormatError}
+ * with the line and the column. Hot path: a flat loop into a reused vector, no per-row allocation.
+ * @example createRecordDecoder(layout)('0.02,10,10.4,35', Int32Array.of(0, 5, 8, 13), Int32Array.of(4, 7, 12, 15), 4, 3).roadSpeedKmh // 10
  */
-export function createRowDecoders(layout: LogLayout, delimiter = ','): { fromFields: RowDecoder; fromLine: LineDecoder } {
+export function createRecordDecoder(layout: LogLayout): RecordDecoder {
   const width = layout.headers.length
   const used: { slot: number; index: number; factor: number; header: string }[] = []
   for (const [ch, slot] of FIXED) {
@@ -45,7 +48,7 @@ export function createRowDecoders(layout: LogLayout, delimiter = ','): { fromFie
   const slots = Int32Array.from(used, (u) => u.slot)
   const cols = Int32Array.from(used, (u) => u.index)
   const factors = Float64Array.from(used, (u) => u.factor)
-  const v = new Float64Array(WHEEL0 + wheels)
+  const v = new Float64Array(WHEEL0 + wheels).fill(NaN)
   const wheelSpeedsKmh = new Array<number>(wheels).fill(NaN)
   const sample: LogSample = { timeS: NaN, roadSpeedKmh: NaN, wheelSpeedsKmh, accelPedalPct: NaN, line: 0 }
   // Local bindings: some loaders compile imports to getter calls, which cost more than the parse itself.
@@ -60,7 +63,16 @@ export function createRowDecoders(layout: LogLayout, delimiter = ','): { fromFie
     const shown = JSON.stringify(cell.length > 40 ? cell.slice(0, 40) + '…' : cell)
     return new LogFormatError('row', line, { index: cols[k] + 1, name: used[k].header }, `${shown} is not a number`)
   }
-  const emit = (line: number): LogSample => {
+
+  return (text, starts, ends, count, line) => {
+    if (count !== width) throw countError(count, line)
+    // No reset: every used slot is written below (or the record throws), unused slots stay NaN.
+    for (let k = 0; k < n; k++) {
+      const c = cols[k]
+      const x = parseIn(text, starts[c], ends[c])
+      if (x === bad) throw cellError(k, text.slice(starts[c], ends[c]), line)
+      v[slots[k]] = x * factors[k]
+    }
     if (v[TIME] !== v[TIME]) throw new LogFormatError('row', line, timeCol, 'time is missing')
     sample.timeS = v[TIME]
     sample.roadSpeedKmh = v[ROAD]
@@ -75,75 +87,6 @@ export function createRowDecoders(layout: LogLayout, delimiter = ','): { fromFie
     sample.line = line
     return sample
   }
-
-  const fromFields: RowDecoder = (row, line) => {
-    if (row.length !== width) throw countError(row.length, line)
-    v.fill(NaN)
-    for (let k = 0; k < n; k++) {
-      const cell = row[cols[k]]
-      const x = parseIn(cell, 0, cell.length)
-      if (x === bad) throw cellError(k, cell, line)
-      v[slots[k]] = x * factors[k]
-    }
-    return emit(line)
-  }
-
-  // Per column of the file: target slot (−1 = not read), factor, and index into `used` for messages.
-  const colSlot = new Int32Array(width).fill(-1)
-  const colFactor = new Float64Array(width)
-  const colUsed = new Int32Array(width)
-  used.forEach((u, k) => { colSlot[u.index] = u.slot; colFactor[u.index] = u.factor; colUsed[u.index] = k })
-  const dc = delimiter.charCodeAt(0)
-  const pow10 = EXACT_POW10
-
-  // One pass over the line: unread cells are skipped with indexOf, read cells are parsed while scanning
-  // (the same fast path as parseLogNumberIn; anything else goes to it with the cell's range).
-  const fromLine: LineDecoder = (text, line) => {
-    v.fill(NaN)
-    const len = text.length
-    let f = 0
-    let i = 0
-    for (;;) {
-      const slot = f < width ? colSlot[f] : -1
-      if (slot < 0) {
-        const j = text.indexOf(delimiter, i)
-        f++
-        if (j < 0) break
-        i = j + 1
-        continue
-      }
-      const start = i
-      let neg = false
-      if (i < len && text.charCodeAt(i) === 45) { neg = true; i++ }
-      const first = i
-      let m = 0
-      let frac = -1
-      let fast = true
-      for (; i < len; i++) {
-        const c = text.charCodeAt(i)
-        if (c === dc) break
-        const d = c - 48
-        if (d >= 0 && d <= 9) { m = m * 10 + d; if (frac >= 0) frac++ }
-        else if (c === 46 && frac < 0) frac = 0
-        else { fast = false; const j = text.indexOf(delimiter, i); i = j < 0 ? len : j; break }
-      }
-      const digits = i - first - (frac >= 0 ? 1 : 0)
-      let x: number
-      if (fast && digits >= 1 && digits <= 15) { x = frac > 0 ? m / pow10[frac] : m; if (neg) x = -x }
-      else x = parseIn(text, start, i)
-      if (x === bad) {
-        const found = text.split(delimiter).length // error path only: a wrong field count is reported first, as fromFields does
-        throw found !== width ? countError(found, line) : cellError(colUsed[f], text.slice(start, i), line)
-      }
-      v[slot] = x * colFactor[f]
-      f++
-      if (i >= len) break
-      i++ // past the delimiter
-    }
-    if (f !== width) throw countError(f, line)
-    return emit(line)
-  }
-  return { fromFields, fromLine }
 }
 
 /** The drive-wheel channels of a layout in the order their speeds fill `LogSample.wheelSpeedsKmh`. @example layoutWheelChannels(layout) // ['wheelLeft', 'wheelRight'] */
@@ -151,7 +94,19 @@ export function layoutWheelChannels(layout: LogLayout): WheelChannel[] {
   return WHEEL_CHANNELS.filter((ch) => layout.byChannel[ch] !== undefined)
 }
 
-/** The cells decoder of {@link createRowDecoders}. @example createRowDecoder(layout)(['0.02', '10', '10.4', '35'], 3).roadSpeedKmh // 10 */
+/**
+ * {@link createRecordDecoder} for cells already split into strings (tests, callers with arrays): the cells are
+ * laid end to end in one string and decoded by their ranges, so both forms read a cell identically.
+ * @example createRowDecoder(layout)(['0.02', '10', '10.4', '35'], 3).roadSpeedKmh // 10
+ */
 export function createRowDecoder(layout: LogLayout): RowDecoder {
-  return createRowDecoders(layout).fromFields
+  const decode = createRecordDecoder(layout)
+  let starts = new Int32Array(16)
+  let ends = new Int32Array(16)
+  return (fields, line) => {
+    if (fields.length > starts.length) { starts = new Int32Array(fields.length); ends = new Int32Array(fields.length) }
+    let at = 0
+    for (let k = 0; k < fields.length; k++) { starts[k] = at; at += fields[k].length; ends[k] = at }
+    return decode(fields.join(''), starts, ends, fields.length, line)
+  }
 }

@@ -4,6 +4,7 @@ import { getDb } from '../client'
 import { mapRevisions, maps, users, vehiclePrograms } from '../schema'
 import { recordAudit } from './audit'
 import { insertRevision, revisionSummaryColumns } from './revisions'
+import { revisionTable } from './revision-tables'
 
 export interface MapSummary {
   id: number
@@ -87,13 +88,23 @@ export async function createMap(
 export async function getRevisionWithMap(revisionId: number) {
   const db = await getDb()
   const rows = await db
-    .select({ map: mapWithProgramColumns, revision: { ...revisionSummaryColumns, table: mapRevisions.table } })
+    .select({ map: mapWithProgramColumns, revision: revisionSummaryColumns })
     .from(mapRevisions)
     .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
     .where(eq(mapRevisions.id, revisionId))
-  return rows[0] ?? null
+  return withTable(rows[0])
+}
+
+/**
+ * Adds the revision's table from the revision-table cache: the row read each time carries only what
+ * can change (the map, its program, the revision's state and author name), never the table itself.
+ */
+async function withTable<T extends { revision: { id: number } }>(row: T | undefined): Promise<(T & { revision: T['revision'] & { table: MapTable } }) | null> {
+  if (!row) return null
+  const table = await revisionTable(row.revision.id)
+  return table && { ...row, revision: { ...row.revision, table } }
 }
 
 /** The latest revision of every map, with its table and the program's parameters, in one query (the overview's findings). */
@@ -111,13 +122,13 @@ export async function listLatestRevisions() {
 export async function getMapWithRevision(mapId: number, number?: number) {
   const db = await getDb()
   const rows = await db
-    .select({ map: mapWithProgramColumns, revision: { ...revisionSummaryColumns, table: mapRevisions.table } })
+    .select({ map: mapWithProgramColumns, revision: revisionSummaryColumns })
     .from(maps)
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
     .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, number ?? latestNumberOf)))
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
     .where(eq(maps.id, mapId))
-  return rows[0] ?? null
+  return withTable(rows[0])
 }
 
 /**

@@ -7,6 +7,7 @@ import { runApiLoad } from './api-load'
 import { runEditorPage } from './editor-page'
 import { runHistoryGrowth } from './history-growth'
 import { runLogIngest } from './log-ingest'
+import { runPlotPages } from './plot-pages'
 import { printResult, writeResults, type BenchResult } from './report'
 import { startServer, type BenchServer } from './server'
 import { runSlipSweep } from './slip-sweep'
@@ -33,6 +34,7 @@ async function main(): Promise<void> {
     server = await startServer()
     const s = server
     await attempt('editor-page', () => runEditorPage(s), results)
+    await attempt('plot-pages', () => runPlotPages(s), results)
     await attempt('api-load', () => runApiLoad(s), results)
   } catch (e) {
     console.error(`server benchmarks: could not start the server: ${e instanceof Error ? e.message : String(e)}`)

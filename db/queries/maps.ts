@@ -1,6 +1,7 @@
 import { and, asc, eq, sql } from 'drizzle-orm'
 import type { MapTable } from '../../maps'
-import { getDb } from '../client'
+import { getDb, type Db } from '../client'
+import { prepared } from '../prepared'
 import { mapRevisions, maps, users, vehiclePrograms } from '../schema'
 import { recordAudit } from './audit'
 import { insertRevision, revisionSummaryColumns } from './revisions'
@@ -118,16 +119,30 @@ export async function listLatestRevisions() {
     .orderBy(asc(vehiclePrograms.name), asc(maps.kind), asc(maps.name))
 }
 
-/** A map, its program and one revision of it (the latest when `number` is omitted) in one round trip; null when either is missing. */
+/** A map, its program and the summary of one of its revisions (the latest without a number): built once per database. */
+function mapWithRevisionStatement(db: Db, which: 'latest' | 'numbered') {
+  return prepared(db, `map-with-revision-${which}`, (d) =>
+    d
+      .select({ map: mapWithProgramColumns, revision: revisionSummaryColumns })
+      .from(maps)
+      .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+      .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, which === 'latest' ? latestNumberOf : sql.placeholder('number'))))
+      .innerJoin(users, eq(users.id, mapRevisions.authorId))
+      .where(eq(maps.id, sql.placeholder('mapId')))
+      .prepare(`map_with_revision_${which}`),
+  )
+}
+
+/**
+ * A map, its program and one revision of it (the latest when `number` is omitted) in one round
+ * trip, the table from the revision-table cache; null when either is missing. The hottest read
+ * (every GET of a map, the editor, the compare page): a statement prepared once.
+ */
 export async function getMapWithRevision(mapId: number, number?: number) {
   const db = await getDb()
-  const rows = await db
-    .select({ map: mapWithProgramColumns, revision: revisionSummaryColumns })
-    .from(maps)
-    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
-    .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, number ?? latestNumberOf)))
-    .innerJoin(users, eq(users.id, mapRevisions.authorId))
-    .where(eq(maps.id, mapId))
+  const rows = number === undefined
+    ? await mapWithRevisionStatement(db, 'latest').execute({ mapId })
+    : await mapWithRevisionStatement(db, 'numbered').execute({ mapId, number })
   return withTable(rows[0])
 }
 

@@ -8,6 +8,13 @@ import dynamic from 'next/dynamic'
 import type { Data, Layout } from 'plotly.js'
 import { dataAsText, layoutAsText, plotConfig } from './plot-text'
 
+/**
+ * The plot library is the slowest thing these pages wait for (several MB to fetch and run): start it
+ * as soon as any page that can plot runs its scripts, instead of when the first plot mounts.
+ */
+export const loadPlotLibrary = () => import('./plotly-component')
+if (typeof window !== 'undefined') void loadPlotLibrary().catch(() => undefined) // a failure shows where the plot mounts
+
 const PlotlyComponent = dynamic(() => import('./plotly-component'), {
   ssr: false,
   loading: () => <div className="grid h-full min-h-40 place-items-center text-sm text-slate-500">Loading plot…</div>,

@@ -20,6 +20,7 @@ import type { AnalysisResult } from '../physics/drive-log/types'
 import { SURFACE_IDS, type SurfaceId } from '../physics/surfaces'
 import { LOAD_CASE_IDS } from '../physics/load-cases'
 import type { LoadCase, VehicleParams } from '../physics/vehicle'
+import type { BatteryCorner } from '../physics/battery'
 import { LINK_KINDS, type LinkKind } from '../domain/one-time-links'
 import { LOG_STATUSES, type LogStatus } from '../domain/log-statuses'
 import { MAIL_STATUSES, type MailStatus } from '../domain/mail-statuses'
@@ -41,6 +42,12 @@ export interface ReleaseConditions {
   surfaces: SurfaceId[]
   loadCases: LoadCase[]
   marginPct: number
+  /** Design lateral acceleration at the tyres, m/s²; absent in versions saved before it existed (physics default applies). */
+  designLateralAccelMps2?: number
+  /** Battery states for the lift-off check (added later; absent = none). */
+  batteryCorners?: BatteryCorner[]
+  /** Least lift-off deceleration a corner may leave, m/s² (absent = corners shown, nothing found). */
+  minLiftOffDecelMps2?: number
 }
 
 /** A gate exception the lead released anyway, with the reason given. */

@@ -1,8 +1,8 @@
 import { and, eq, sql } from 'drizzle-orm'
 import type { Db } from './client'
 import type { Role } from '../domain/roles'
-import { maps, paramVersions, users, vehiclePrograms } from './schema'
-import { demoTipper, demoTractor } from './demo/programs'
+import { maps, paramVersions, users, vehiclePrograms, type ReleaseConditions } from './schema'
+import { DEMO_BATTERY_CORNERS, demoTipper, demoTractor } from './demo/programs'
 import { demoMapHistories } from './demo/maps'
 import { insertRevision } from './queries/revisions'
 
@@ -22,8 +22,20 @@ export const DEMO_USERS: { email: string; name: string; role: Role }[] = [
 ]
 
 export const DEMO_PROGRAMS = [
-  { name: 'BX-64 Tipper', description: 'Demo: 6×4 battery-electric tipper for quarry and site work (invented numbers).', params: demoTipper },
-  { name: 'BX-64 Tractor', description: 'Demo: 6×4 battery-electric tractor with a three-axle semitrailer (invented numbers).', params: demoTractor },
+  // The tipper declares a minimum lift-off deceleration (0.3 m/s², invented), so its sets show the
+  // battery-corner finding; the tractor's corners are shown on the physics page without a minimum.
+  {
+    name: 'BX-64 Tipper',
+    description: 'Demo: 6×4 battery-electric tipper for quarry and site work (invented numbers).',
+    params: demoTipper,
+    releaseConditions: { surfaces: ['wet-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'], marginPct: 10, batteryCorners: DEMO_BATTERY_CORNERS, minLiftOffDecelMps2: 0.3 } satisfies ReleaseConditions,
+  },
+  {
+    name: 'BX-64 Tractor',
+    description: 'Demo: 6×2 battery-electric tractor (tag axle) with a three-axle semitrailer (invented numbers).',
+    params: demoTractor,
+    releaseConditions: { surfaces: ['wet-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'], marginPct: 10, batteryCorners: DEMO_BATTERY_CORNERS } satisfies ReleaseConditions,
+  },
 ]
 
 export interface SeedResult {

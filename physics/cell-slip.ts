@@ -1,16 +1,20 @@
 /**
  * Quasi-steady slip prediction for one map cell: motor torque → wheel force → drive-axle load
- * (with load transfer) → force ratio Fx/Fz → slip on the rising Magic Formula branch.
+ * (with load transfer) → force ratio Fx/Fz → slip on the rising branch of the program's drive-tyre
+ * curve for the surface, and the lateral acceleration the drive axle can still hold (friction ellipse).
  */
-import { driveAxleLimitN, driveAxleLoadN, steerLiftForceN } from './axle-model'
+import { driveAxleLoadN, steerLiftForceN } from './axle-model'
 import { deliverableAtShaft } from './envelope'
 import { motorTorqueFromWheel, overallRatio } from './driveline'
-import { PhysicsInputError, requireFinite } from './errors'
+import { requireFinite } from './errors'
+import { driveCurveFor } from './drive-curve'
+import { lateralCapacityMps2 } from './friction-ellipse'
 import { axleLoadsFor } from './load-case'
-import { SURFACES, type Surface, type SurfaceId } from './surfaces'
+import type { Surface, SurfaceId } from './surfaces'
 import { gradeCos } from './traction'
-import { checkCoeffs, peakForceRatio, slipSolverFor } from './tyre'
+import { peakForceRatio, slipSolverFor } from './tyre'
 import { kmhToMps } from './units'
+import { criticalAxleLoadN, criticalForceRatio, drivenAxlesFor, drivenLimitN } from './tandem'
 import type { LoadCase } from './load-cases'
 import type { VehicleParams } from './vehicle'
 
@@ -36,6 +40,8 @@ export interface CellSlipResult {
   /** Longitudinal force of the drive axle on the road, driving > 0, braking < 0. */
   wheelForceN: number
   driveAxleLoadN: number
+  /** Load on the driven axle that limits (the lighter of an open 6×4, the driven axle of a 6×2; the group otherwise), N. */
+  criticalAxleLoadN: number
   /** Traction (drive) or lock-up (regen) force limit, positive. */
   limitForceN: number
   /** What sets the limit: the tyre peak, or (drive only, rare) the steer axle unloading completely. */
@@ -48,15 +54,11 @@ export interface CellSlipResult {
   lock: boolean
   /** Motor torque that would just reach the limit (positive drive, negative regen). */
   motorTorqueAtLimitNm: number
+  /** Largest steady lateral acceleration the drive axle can still hold with this longitudinal force, m/s² (0 beyond the peak). */
+  lateralCapacityMps2: number
 }
 
-/** Resolves a surface id or object. @example resolveSurface('ice').coeffs.D // 0.1 */
-export function resolveSurface(s: Surface | SurfaceId): Surface {
-  const surface = typeof s === 'string' ? SURFACES[s] : s
-  if (!surface) throw new PhysicsInputError('surface', `unknown surface "${String(s)}"`)
-  checkCoeffs(surface.coeffs, 'surface.coeffs')
-  return surface
-}
+export { resolveSurface } from './drive-curve'
 
 /**
  * Validates once and returns a fast evaluator (motorTorqueNm, roadSpeedKmh) → {@link CellSlipResult}.
@@ -65,20 +67,21 @@ export function resolveSurface(s: Surface | SurfaceId): Surface {
 export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadSpeedKmh: number) => CellSlipResult {
   const { vehicle, gearIndex = 0, applyEnvelope = true } = ctx
   const { model } = axleLoadsFor(vehicle, ctx.loadCase)
-  const surface = resolveSurface(ctx.surface)
-  const coeffs = surface.coeffs
   const cosG = gradeCos(ctx.gradeRad ?? 0)
+  const coeffs = driveCurveFor(vehicle, model, ctx.surface, cosG)
   const G = overallRatio(vehicle, gearIndex)
   const R = vehicle.wheelRadiusM
   const mu = peakForceRatio(coeffs)
-  const driveLimit = driveAxleLimitN(model, mu, cosG, 'drive')
-  const regenLimit = driveAxleLimitN(model, mu, cosG, 'regen')
+  const driven = drivenAxlesFor(vehicle)
+  const driveLimit = drivenLimitN(model, driven, mu, cosG, 'drive')
+  const regenLimit = drivenLimitN(model, driven, mu, cosG, 'regen')
   const driveLimitedBy = driveLimit >= steerLiftForceN(model, cosG) ? 'steer-axle-lift' : 'tyre'
   const atDrive = motorTorqueFromWheel(vehicle, driveLimit * R, gearIndex)
   const atRegen = motorTorqueFromWheel(vehicle, -regenLimit * R, gearIndex)
   // Per cell only the two inputs are validated: the curve, ratio and efficiency were checked above.
   const solve = slipSolverFor(coeffs)
   const eta = vehicle.drivelineEfficiency
+  const W0 = model.staticDriveAxleLoadN
   return (motorTorqueNm, roadSpeedKmh) => {
     requireFinite('motorTorqueNm', motorTorqueNm)
     requireFinite('roadSpeedKmh', roadSpeedKmh)
@@ -93,14 +96,17 @@ export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadS
     const load = driveAxleLoadN(model, force, cosG)
     const limit = regen ? regenLimit : driveLimit
     const utilisation = Math.abs(force) / limit
-    const slip = load > 0 ? solve(force / load) : force === 0 ? 0 : null
+    const ratio = criticalForceRatio(driven, load, force)
+    const slip = ratio === null ? null : solve(ratio)
     const beyond = slip === null
+    const lateral = beyond ? 0 : lateralCapacityMps2(mu, load, force, W0)
     return {
       requestedTorqueNm: motorTorqueNm,
       deliveredTorqueNm: delivered,
       envelopeLimited: delivered !== motorTorqueNm,
       wheelForceN: force,
       driveAxleLoadN: load,
+      criticalAxleLoadN: criticalAxleLoadN(driven, load, force),
       limitForceN: limit,
       limitedBy: regen ? 'tyre' : driveLimitedBy,
       utilisation,
@@ -108,6 +114,7 @@ export function prepareCellSlip(ctx: CellContext): (motorTorqueNm: number, roadS
       spin: beyond && !regen,
       lock: beyond && regen,
       motorTorqueAtLimitNm: regen ? atRegen : atDrive,
+      lateralCapacityMps2: lateral,
     }
   }
 }

@@ -4,7 +4,7 @@
  * - `trailer-empty` / `trailer-laden`: the tractor at its kerb mass and empty CG (a tractor carries
  *   its payload in the trailer; the fifth-wheel load is computed, not assumed) plus the
  *   semitrailer at its empty / gross mass and CG.
- * For a 6×4 the tandem is one axle at its centre (the wheelbase is measured to it).
+ * A tandem is one group at its load centre (the wheelbase is measured to it); physics/tandem.ts shares it between axles.
  */
 import { STANDARD_GRAVITY } from './constants'
 import { PhysicsInputError } from './errors'

@@ -8,7 +8,7 @@
  * No rollback: at standstill the vehicle is held unless the drive force beats grade and rolling resistance.
  */
 import { driveAxleLoadN } from './axle-model'
-import { resolveSurface } from './cell-slip'
+import { driveCurveFor } from './drive-curve'
 import { SEA_LEVEL_AIR_DENSITY, SLIP_SPEED_FLOOR_MPS, STANDARD_GRAVITY } from './constants'
 import { deliverableAtShaft } from './envelope'
 import { overallRatio, wheelTorqueFromMotor } from './driveline'
@@ -17,6 +17,7 @@ import { axleLoadsFor } from './load-case'
 import type { Surface, SurfaceId } from './surfaces'
 import { gradeCos } from './traction'
 import { magicFormula, magicFormulaSlope, peakSlip } from './tyre'
+import { drivenAxlesFor } from './tandem'
 import type { LoadCase } from './load-cases'
 import type { VehicleParams } from './vehicle'
 
@@ -60,8 +61,8 @@ export type TorqueRequest = (pedalPct: number, speedKmh: number) => number
 export function runSimulation(o: SimOptions, pedal: (t: number) => number, request: TorqueRequest, v0: number, crossKmh: number[], stopKmh = -1): SimRun {
   const { vehicle: v, gearIndex = 0 } = o
   const { model } = axleLoadsFor(v, o.loadCase)
-  const coeffs = resolveSurface(o.surface).coeffs
   const cosG = gradeCos(o.gradeRad ?? 0)
+  const coeffs = driveCurveFor(v, model, o.surface, cosG)
   const sinG = Math.sin(o.gradeRad ?? 0)
   const noSlip = o.tyre === 'no-slip'
   const T = requirePositive('durationS', o.durationS)
@@ -76,6 +77,10 @@ export function runSimulation(o: SimOptions, pedal: (t: number) => number, reque
   const J = Math.max(v.driveWheelsInertiaKgM2 + v.motorInertiaKgM2 * G * G, 1e-4 * m * R * R)
   const W0c = model.staticDriveAxleLoadN * cosG
   const k = model.transferHeightM / model.wheelbaseM
+  // The equivalent wheel is the critical driven axle (docs/physics.md §6a): its force ratio r gives the
+  // tandem force F = r·α·W0c / (φ − r·(α·k + d)); for 4×2 and locked 6×4 (α = φ = 1, d = 0) the one-axle form.
+  const dr = drivenAxlesFor(v)
+  const aW0c = dr.loadShare * W0c
   const res = !o.ignoreResistances
   const rollN = res ? v.rollingResistanceCoeff * m * STANDARD_GRAVITY * cosG : 0
   const gradeN = res ? m * STANDARD_GRAVITY * sinG : 0
@@ -124,9 +129,11 @@ export function runSimulation(o: SimOptions, pedal: (t: number) => number, reque
       const vDen = Math.max(Math.abs(V), SLIP_SPEED_FLOOR_MPS)
       kappa = (w * R - V) / vDen
       const r = magicFormula(kappa, coeffs)
-      const den = Math.max(1 - r * k, 0.05) // guard: 1 − μ·He/L > 0 for any real truck (μ ≤ 1, He/L < 1); 0.05 is a numerical floor
-      fx = (r * W0c) / den
-      const g = (h * Math.max(0, (magicFormulaSlope(kappa, coeffs) * W0c) / (den * den))) / vDen
+      const d = r >= 0 ? dr.transferDrive : dr.transferRegen
+      // guard: φ − μ·(α·He/L ± d) > 0 for any real truck (μ ≤ 1, He/L < 1, |ε| ≤ 0.5); 0.05·φ is a numerical floor
+      const den = Math.max(dr.forceShare - r * (dr.loadShare * k) - Math.abs(r) * d, 0.05 * dr.forceShare)
+      fx = (r * aW0c) / den
+      const g = (h * Math.max(0, (magicFormulaSlope(kappa, coeffs) * aW0c * dr.forceShare) / (den * den))) / vDen
       const b1 = h * (tw - R * fx)
       const n = net(fx, V)
       let dw: number, dV: number

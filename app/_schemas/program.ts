@@ -4,12 +4,37 @@ import { LOAD_CASE_IDS } from '@/physics/load-cases'
 import { SURFACE_IDS } from '@/physics/surfaces'
 import { atMost } from './text'
 
-/** What the release gate checks a set's maps over: surfaces × load cases, and the traction margin. */
+/** A battery state the regen and drive checks evaluate, e.g. "Full and cold": 95 %, −10 °C. */
+export const batteryCornerSchema = z.object({
+  label: z.string().trim().min(1, 'Name the battery corner').max(40, atMost('A battery corner name', 40)),
+  socPct: z.number({ error: 'State of charge must be a number (%)' }).min(0, 'State of charge is 0 % or more').max(100, 'State of charge is at most 100 %'),
+  temperatureC: z.number({ error: 'Battery temperature must be a number (°C)' }).min(-40, 'Battery temperature is −40 °C or more').max(80, 'Battery temperature is at most 80 °C'),
+})
+
+/**
+ * What the release gate checks a set's maps over: surfaces × load cases, and the traction margin.
+ * Battery corners and the minimum lift-off deceleration were added later and are optional: without
+ * corners nothing is checked; with corners but no minimum they are shown and nothing is found.
+ */
 export const releaseConditionsSchema = z.object({
   surfaces: z.array(z.enum(SURFACE_IDS, { error: `each surface must be one of ${SURFACE_IDS.join(', ')}` })).min(1, 'Name at least one surface').max(SURFACE_IDS.length),
   loadCases: z.array(z.enum(LOAD_CASE_IDS, { error: `each load case must be one of ${LOAD_CASE_IDS.join(', ')}` })).min(1, 'Name at least one load case').max(LOAD_CASE_IDS.length),
   marginPct: z.number().min(0, 'The margin is 0 % or more').max(50, 'The margin is at most 50 %'),
+  /** Steady lateral acceleration at the tyres of the sharpest curve taken at speed, m/s²; absent = the physics default, DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 (physics/lateral-margin.ts). */
+  designLateralAccelMps2: z
+    .number({ error: 'The design lateral acceleration must be a number (m/s²)' })
+    .min(0.5, 'The design lateral acceleration is at least 0.5 m/s²')
+    .max(6, 'The design lateral acceleration is at most 6 m/s²')
+    .optional(),
+  batteryCorners: z.array(batteryCornerSchema).max(8, 'At most 8 battery corners').optional(),
+  minLiftOffDecelMps2: z.number({ error: 'The minimum lift-off deceleration must be a number (m/s²)' }).min(0, 'The minimum lift-off deceleration is 0 m/s² or more').max(5, 'The minimum lift-off deceleration is at most 5 m/s²').optional(),
 })
+
+/** Suggested corners for a new program's release conditions (the engineer edits them). */
+export const SUGGESTED_BATTERY_CORNERS = [
+  { label: 'Full and cold', socPct: 95, temperatureC: -10 },
+  { label: 'Half and warm', socPct: 50, temperatureC: 25 },
+]
 
 export const DEFAULT_RELEASE_CONDITIONS = { surfaces: ['wet-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'], marginPct: 10 } satisfies z.input<typeof releaseConditionsSchema>
 

@@ -1,5 +1,6 @@
 /** Plain data types shared by the drive-log decoder, analyser and ingest. */
 import type { MapKind } from '../table'
+import type { DriveTyreParams } from '../drive-tyre'
 import type { Surface, SurfaceId } from '../surfaces'
 import type { LogColumnRef } from './errors'
 
@@ -42,8 +43,10 @@ export interface LogAnalyserOptions {
   map?: { rowAxis: readonly number[]; colAxis: readonly number[] }
   /** 'drive' indexes rows by accelerator pedal; 'regen' by brake pedal, counting only accelerator-released time. */
   kind?: MapKind
-  /** Surface whose Magic Formula peak slip is the default spin/lock threshold. */
+  /** Surface whose peak slip (with the drive tyre below) is the default spin/lock threshold. */
   surface?: Surface | SurfaceId
+  /** The program's drive tyre; absent = the default truck tyre. */
+  driveTyre?: DriveTyreParams | null
   thresholds?: SlipThresholds
   /** A time step longer than this is a gap (nothing integrated across it), s. Default 1. */
   maxGapS?: number

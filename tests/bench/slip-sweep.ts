@@ -34,12 +34,12 @@ export async function runSlipSweep(): Promise<BenchResult> {
   for (const surface of SURFACE_IDS)
     for (const loadCase of loadCases)
       for (const row of slipGrid({ vehicle, loadCase, surface, ...map }))
-        for (const c of row) if (c.driveAxleLoadN > 0) slipForForceRatio(c.wheelForceN / c.driveAxleLoadN, SURFACES[surface].coeffs, stats)
+        for (const c of row) if (c.driveAxleLoadN > 0) slipForForceRatio(c.wheelForceN / c.driveAxleLoadN, SURFACES[surface].passengerCarCoeffs, stats)
 
   // Magic Formula inputs: seeded slips across the rising branch and beyond, over all surfaces.
   const rnd = mulberry32(7)
   const slips = Float64Array.from({ length: 4096 }, () => rnd() * 0.4)
-  const coeffs = SURFACE_IDS.map((s) => SURFACES[s].coeffs)
+  const coeffs = SURFACE_IDS.map((s) => SURFACES[s].passengerCarCoeffs)
   let sink = 0
   const mfBatch = (): number => {
     const t0 = now()

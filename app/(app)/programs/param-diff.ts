@@ -1,7 +1,7 @@
 import { jsonChanges, type JsonChange } from '@/domain/json-changes'
 import { loadCaseLabel } from '@/physics/load-cases'
 import { surfaceLabel } from '@/physics/surfaces'
-import { TRAILER_FIELDS, VEHICLE_FIELDS } from './program-fields'
+import { DRIVE_TYRE_FIELDS, TRAILER_FIELDS, VEHICLE_FIELDS } from './program-fields'
 
 /** What one parameter version holds, as far as the diff is concerned (plain JSON). */
 export interface VersionContent {
@@ -23,7 +23,7 @@ interface FieldInfo {
   label: string
   unit: string
   scale: number
-  kind?: 'surfaces' | 'loadCases' | 'trailer'
+  kind?: 'surfaces' | 'loadCases' | 'trailer' | 'driveTyre' | 'corners' | 'group'
 }
 
 const FIELDS: Record<string, FieldInfo> = { 'params.axleLayout': { label: 'Axle layout', unit: '', scale: 1 } }
@@ -32,11 +32,24 @@ for (const g of VEHICLE_FIELDS) {
   if (g.group === 'Driveline and motor') FIELDS['params.gearRatios'] = { label: 'Gear ratios, lowest first', unit: ':1', scale: 1 }
 }
 FIELDS['params.gearRatios'] ??= { label: 'Gear ratios, lowest first', unit: ':1', scale: 1 }
+FIELDS['params.tandem'] = { label: 'Tandem details', unit: '', scale: 1, kind: 'group' }
+FIELDS['params.batteryPowerTable'] = { label: 'Battery power table', unit: '', scale: 1, kind: 'group' }
+FIELDS['params.tandem.interAxleDifferential'] = { label: 'Inter-axle differential', unit: '', scale: 1 }
+FIELDS['params.tandem.drivenAxle'] = { label: 'Driven axle of the tandem', unit: '', scale: 1 }
+FIELDS['params.tandem.drivenLoadShare'] = { label: 'Driven axle’s share of the group load', unit: '%', scale: 0.01 }
+FIELDS['params.tandem.interAxleTransfer'] = { label: 'Inter-axle load transfer', unit: 'N/N', scale: 1 }
+FIELDS['params.batteryPowerTable.socPct'] = { label: 'Battery table: state-of-charge breakpoints', unit: '%', scale: 1 }
+FIELDS['params.batteryPowerTable.temperatureC'] = { label: 'Battery table: temperature breakpoints', unit: '°C', scale: 1 }
 FIELDS['params.trailer'] = { label: 'Semitrailer', unit: '', scale: 1, kind: 'trailer' }
 for (const f of TRAILER_FIELDS) FIELDS[`params.trailer.${f.key}`] = { label: f.label, unit: f.unit, scale: 1 }
+FIELDS['params.driveTyre'] = { label: 'Drive tyre', unit: '', scale: 1, kind: 'driveTyre' }
+for (const f of DRIVE_TYRE_FIELDS) FIELDS[`params.driveTyre.${f.key}`] = { label: `Drive tyre: ${f.label}`, unit: f.unit, scale: f.scale ?? 1 }
 FIELDS['releaseConditions.surfaces'] = { label: 'Release check: surfaces', unit: '', scale: 1, kind: 'surfaces' }
 FIELDS['releaseConditions.loadCases'] = { label: 'Release check: load cases', unit: '', scale: 1, kind: 'loadCases' }
 FIELDS['releaseConditions.marginPct'] = { label: 'Release check: traction margin', unit: '%', scale: 1 }
+FIELDS['releaseConditions.designLateralAccelMps2'] = { label: 'Release check: design lateral acceleration', unit: 'm/s²', scale: 1 }
+FIELDS['releaseConditions.batteryCorners'] = { label: 'Release check: battery corners', unit: '', scale: 1, kind: 'corners' }
+FIELDS['releaseConditions.minLiftOffDecelMps2'] = { label: 'Release check: minimum lift-off deceleration', unit: 'm/s²', scale: 1 }
 
 /** Rows follow the program form's order; a gear sits with the gear ratios, unknown paths come last. */
 const ORDER = Object.keys(FIELDS)
@@ -51,6 +64,10 @@ export function fieldInfo(path: string): FieldInfo {
   if (known) return known
   const gear = /^params\.gearRatios\[(\d+)\]$/.exec(path)
   if (gear) return { label: `Gear ${Number(gear[1]) + 1} ratio`, unit: ':1', scale: 1 }
+  const corner = /^releaseConditions\.batteryCorners\[(\d+)\]\.(label|socPct|temperatureC)$/.exec(path)
+  if (corner) return { label: `Release check: battery corner ${Number(corner[1]) + 1} ${({ label: 'name', socPct: 'state of charge', temperatureC: 'temperature' } as const)[corner[2] as 'label']}`, unit: ({ label: '', socPct: '%', temperatureC: '°C' } as const)[corner[2] as 'label'], scale: 1 }
+  const power = /^params\.batteryPowerTable\.(charge|discharge)PowerW\[(\d+)\]\[(\d+)\]$/.exec(path)
+  if (power) return { label: `Battery table: ${power[1]} power, SoC row ${Number(power[2]) + 1}, temperature column ${Number(power[3]) + 1}`, unit: 'kW', scale: 1000 }
   return { label: path, unit: '', scale: 1 }
 }
 
@@ -61,9 +78,13 @@ const tidy = (v: number) => Number(v.toPrecision(12))
 
 /** A stored value in the field's display unit: `93 %`, `4.1:1`, `Wet asphalt, Ice`, `—` for none. */
 export function formatValue(value: unknown, info: Pick<FieldInfo, 'unit' | 'scale' | 'kind'>): string {
-  if (value === null || value === undefined) return info.kind === 'trailer' ? 'none' : '—'
+  if (value === null || value === undefined) return info.kind === 'trailer' || info.kind === 'group' ? 'none' : info.kind === 'driveTyre' ? 'default truck tyre' : '—'
+  if (info.kind === 'group') return isObject(value) ? 'given' : String(value)
   if (info.kind === 'trailer') return isObject(value) ? 'coupled' : String(value)
+  if (info.kind === 'driveTyre') return isObject(value) ? 'stated' : String(value)
   if (info.kind === 'surfaces' && Array.isArray(value)) return value.length ? value.map((s) => surfaceLabel(String(s))).join(', ') : 'none'
+  if (info.kind === 'corners' && Array.isArray(value))
+    return value.length ? value.map((c) => (isObject(c) ? `${String(c.label)} (${String(c.socPct)} %, ${String(c.temperatureC)} °C)` : String(c))).join('; ') : 'none'
   if (info.kind === 'loadCases' && Array.isArray(value)) return value.length ? value.map((c) => loadCaseLabel(String(c))).join(', ') : 'none'
   const unit = (n: string) => (info.unit === '' ? n : info.unit.startsWith(':') ? `${n}${info.unit}` : `${n} ${info.unit}`)
   if (typeof value === 'number') return unit(String(tidy(value / info.scale)))

@@ -1,3 +1,4 @@
+import { DEFAULT_DRIVE_TYRE, type DriveTyreParams } from '@/physics/drive-tyre'
 import type { TrailerParams, VehicleParams } from '@/physics/vehicle'
 
 /** One numeric field of the program form: stored in SI, shown in `unit` (value shown = stored ÷ scale). */
@@ -22,7 +23,7 @@ export const VEHICLE_FIELDS: { group: string; fields: NumberField<NumKeys<Vehicl
   {
     group: 'Geometry',
     fields: [
-      { key: 'wheelbaseM', label: 'Wheelbase (steer axle to drive axle or tandem centre)', unit: 'm' },
+      { key: 'wheelbaseM', label: 'Wheelbase (steer axle to drive axle or the tandem group’s load centre)', unit: 'm' },
       { key: 'emptyCgToFrontAxleM', label: 'Empty CG behind steer axle', unit: 'm' },
       { key: 'emptyCgHeightM', label: 'Empty CG height', unit: 'm' },
       { key: 'ladenCgToFrontAxleM', label: 'Laden CG behind steer axle', unit: 'm' },
@@ -82,4 +83,41 @@ export const TRAILER_START: TrailerParams = {
   emptyCgHeightM: 1.3,
   ladenCgToKingpinM: 4,
   ladenCgHeightM: 2,
+}
+
+/** The drive tyre's fields; blank = the default truck tyre shown in the hint (physics/drive-tyre.ts). */
+export const DRIVE_TYRE_FIELDS: NumberField<keyof DriveTyreParams>[] = [
+  {
+    key: 'slipStiffnessPerLoad',
+    label: 'Slip stiffness per unit load C_κ/F_z',
+    unit: '1/unit slip',
+    hint: `Slope of the force-ratio/slip curve at zero slip; the tyre keeps it on every surface. Heavy-truck radials about 8–20. Blank: ${DEFAULT_DRIVE_TYRE.slipStiffnessPerLoad}.`,
+  },
+  {
+    key: 'peakMuLoadSensitivity',
+    label: 'Peak μ load sensitivity k',
+    unit: '',
+    hint: `μ = μ_surface·(1 − k·(F_z/F_z,nom − 1)): 0.1 loses 1 % of μ per 10 % overload. Blank: ${DEFAULT_DRIVE_TYRE.peakMuLoadSensitivity} (none).`,
+  },
+  {
+    key: 'nominalLoadPerTyreN',
+    label: 'Nominal load per drive tyre F_z,nom',
+    unit: 'kN',
+    scale: 1000,
+    hint: `The load at which the surface table’s μ holds. Blank: ${DEFAULT_DRIVE_TYRE.nominalLoadPerTyreN / 1000} kN.`,
+  },
+  { key: 'shapeC', label: 'Shape factor C', unit: '', hint: `Magic Formula C, 1–2; sets sliding/peak grip. Blank: ${DEFAULT_DRIVE_TYRE.shapeC}.` },
+  { key: 'shapeE', label: 'Curvature factor E', unit: '', hint: `Magic Formula E, below 1; moves the peak along the slip axis. Blank: ${DEFAULT_DRIVE_TYRE.shapeE}.` },
+  { key: 'tyreCount', label: 'Tyres on the driven axle(s)', unit: '', hint: 'All of them, duals counted two per side. Blank: 4 for a 4×2, 8 for a 6×4.' },
+]
+
+/** Parameters without a drive-tyre object whose fields are all blank, so leaving them blank is no change. */
+export function withoutBlankTyre<P extends { driveTyre?: DriveTyreParams | null }>(params: P): P {
+  const t = params.driveTyre
+  if (t && Object.values(t).every((v) => v === undefined || v === null || Number.isNaN(v))) {
+    const rest = { ...params }
+    delete rest.driveTyre
+    return rest
+  }
+  return params
 }

@@ -11,7 +11,12 @@ import { jsonChanges } from '@/domain/json-changes'
 import { LOAD_CASES } from '@/physics/load-cases'
 import { SURFACE_IDS, surfaceLabel } from '@/physics/surfaces'
 import { ScaledNumberInput } from './scaled-number-input'
-import { TRAILER_FIELDS, TRAILER_START, VEHICLE_FIELDS } from './program-fields'
+import { DRIVE_TYRE_FIELDS, TRAILER_FIELDS, TRAILER_START, VEHICLE_FIELDS, withoutBlankTyre } from './program-fields'
+import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
+import { TandemFields } from './tandem-fields'
+import { tidyProgramValues } from './form-tidy'
+import { BatteryTableFields } from './battery-table-fields'
+import { BatteryCornersFields } from './battery-corners-fields'
 
 type FormIn = z.input<typeof programInputSchema>
 type FormOut = z.output<typeof programInputSchema>
@@ -48,7 +53,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
   const releaseConditions = useWatch({ control, name: 'releaseConditions' })
   const changed =
     props.programId !== undefined &&
-    jsonChanges({ params: initial.params, releaseConditions: initial.releaseConditions }, { params, releaseConditions }).length > 0
+    jsonChanges(tidyProgramValues({ params: initial.params, releaseConditions: initial.releaseConditions }), tidyProgramValues({ params: withoutBlankTyre(params), releaseConditions })).length > 0
   const askReason = props.programId !== undefined && (changed || reasonAsked)
 
   const save = useMutation({
@@ -74,7 +79,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
       setError('reason', { type: 'required', message: REASON_NEEDED }, { shouldFocus: true })
       return
     }
-    save.mutate({ ...v, reason: askReason ? v.reason : '' })
+    save.mutate({ ...tidyProgramValues({ ...v, params: withoutBlankTyre(v.params) }), reason: askReason ? v.reason : '' })
   })
 
   return (
@@ -90,7 +95,8 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
             <label htmlFor="axleLayout" className="label">Axle layout</label>
             <select id="axleLayout" className="field" {...register('params.axleLayout')}>
               <option value="4x2">4×2</option>
-              <option value="6x4">6×4 (tandem drive)</option>
+              <option value="6x4">6×4 (tandem, both axles driven)</option>
+              <option value="6x2">6×2 (tandem, one axle driven)</option>
             </select>
           </div>
           <div className="md:col-span-2">
@@ -98,6 +104,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
             <textarea id="description" rows={2} className="field" {...register('description')} />
           </div>
         </div>
+        <TandemFields control={control} register={register} />
         {VEHICLE_FIELDS.map((g) => (
           <section key={g.group} className="card">
             <h2 className="mb-3 font-semibold">{g.group}</h2>
@@ -106,9 +113,22 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
                 <ScaledNumberInput key={f.key} control={control} name={`params.${f.key}`} label={f.label} unit={f.unit} scale={f.scale} />
               ))}
               {g.group === 'Driveline and motor' && <GearRatiosInput control={control} />}
+              {g.group === 'Battery' && <BatteryTableFields control={control} chargeW={params?.batteryChargePowerW} dischargeW={params?.batteryDischargePowerW} />}
             </div>
           </section>
         ))}
+        <section className="card" aria-labelledby="drive-tyre-title">
+          <h2 id="drive-tyre-title" className="font-semibold">Drive tyre</h2>
+          <p className="mb-3 text-sm text-slate-600">
+            The slip model: each surface sets the peak grip μ, the tyre keeps its own stiffness and shape. Leave a field blank for
+            the default truck tyre; versions saved before these fields existed use it too.
+          </p>
+          <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+            {DRIVE_TYRE_FIELDS.map((f) => (
+              <ScaledNumberInput key={f.key} control={control} name={`params.driveTyre.${f.key}`} label={f.label} unit={f.unit} scale={f.scale} hint={f.hint} />
+            ))}
+          </div>
+        </section>
         <section className="card">
           <label className="flex items-center gap-2 font-semibold">
             <input
@@ -155,9 +175,17 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
             legend="Load cases"
             options={LOAD_CASES.filter((c) => !c.trailer || hasTrailer || (releaseConditions?.loadCases ?? []).includes(c.id)).map((c) => ({ id: c.id, label: c.label }))}
           />
-          <div className="max-w-xs">
+          <div className="grid max-w-2xl gap-4 sm:grid-cols-2">
             <ScaledNumberInput control={control} name="releaseConditions.marginPct" label="Traction margin (cells stay this far below the limit)" unit="%" />
+            <ScaledNumberInput
+              control={control}
+              name="releaseConditions.designLateralAccelMps2"
+              label="Design lateral acceleration"
+              unit="m/s²"
+              hint={`Steady lateral acceleration at the tyres of the sharpest curve taken at speed (an exit ramp). With a semitrailer, lift-off regen that leaves the drive axle less lateral grip than this is a jackknife finding. Blank: ${DEFAULT_DESIGN_LATERAL_ACCEL_MPS2} m/s².`}
+            />
           </div>
+          <BatteryCornersFields control={control} register={register} />
         </section>
         {askReason && (
           <section className="card border-amber-300 bg-amber-50">

@@ -12,6 +12,8 @@ export function ScaledNumberInput<T extends FieldValues>(props: {
   label: string
   unit: string
   scale?: number
+  /** Help text under the field. */
+  hint?: string
 }) {
   const scale = props.scale ?? 1
   const { field, fieldState } = useController({ control: props.control, name: props.name })
@@ -29,6 +31,7 @@ export function ScaledNumberInput<T extends FieldValues>(props: {
         className="field"
         value={text}
         aria-invalid={Boolean(fieldState.error)}
+        aria-describedby={props.hint ? `${id}-hint` : undefined}
         onBlur={field.onBlur}
         onChange={(e) => {
           setText(e.target.value)
@@ -36,6 +39,7 @@ export function ScaledNumberInput<T extends FieldValues>(props: {
           field.onChange(t === '' ? undefined : toStored(Number(t), scale))
         }}
       />
+      {props.hint && <p id={`${id}-hint`} className="mt-0.5 text-xs text-slate-600">{props.hint}</p>}
       {fieldState.error && <p className="error-text">{fieldState.error.message}</p>}
     </div>
   )

@@ -24,13 +24,15 @@ export interface MapEditorProps {
   limits: MapLimits | null
   /** The program's vehicle, for the traction shading (null: no shading offered). */
   vehicle?: VehicleParams | null
+  /** The program's design lateral acceleration, m/s² (release condition; absent = the physics default). */
+  designLateralAccelMps2?: number
   base: { number: number; table: MapTable }
   canSave: boolean
 }
 
 const when = (iso: string) => new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })
 
-export default function MapEditor({ mapId, limits, vehicle = null, base: pageBase, canSave }: MapEditorProps) {
+export default function MapEditor({ mapId, limits, vehicle = null, designLateralAccelMps2, base: pageBase, canSave }: MapEditorProps) {
   const [pageBaseState] = useState(pageBase)
   const draft = useMapDraft(mapId, pageBaseState)
   const [system, setSystem] = useState<UnitSystem>('metric')
@@ -43,7 +45,7 @@ export default function MapEditor({ mapId, limits, vehicle = null, base: pageBas
   }, [])
   const { table, apply, undo, redo } = draft
   const [shading, setShading] = useState<ShadingChoice | null>(null)
-  const traction = useTractionShade(table, vehicle, shading)
+  const traction = useTractionShade(table, vehicle, shading, designLateralAccelMps2)
 
   useUndoKeys(undo, redo, useCallback(() => gridApi.current?.isEditing() ?? false, []))
 
@@ -77,7 +79,7 @@ export default function MapEditor({ mapId, limits, vehicle = null, base: pageBas
             Discard edits
           </button>
         )}
-        <TractionShadingControls vehicle={vehicle} choice={shading} onChange={setShading} spinCount={traction.spinCount} kind={table.kind} />
+        <TractionShadingControls vehicle={vehicle} choice={shading} onChange={setShading} counts={traction} kind={table.kind} />
         <span className="ml-auto"><UnitSwitch value={system} onChange={setSystem} /></span>
       </div>
       <Toolbar table={table} range={range} units={units} limits={limits} onApply={apply} undo={undo} redo={redo} canUndo={draft.canUndo} canRedo={draft.canRedo} />

@@ -1,7 +1,8 @@
 'use client'
 /**
  * The physics overlay as a cell shading in the grid: pick a load case and a surface and every
- * cell is shaded by how much of the drive axle's grip it asks for (red beyond the tyre's peak).
+ * cell is shaded by how much of the drive axle's grip it asks for (red beyond the tyre's peak), with
+ * the count of cells that leave the drive axle less lateral grip than the design curve needs.
  * Computed in the browser on the unsaved draft, so the engineer sees the margin while typing.
  */
 import { useMemo } from 'react'
@@ -17,20 +18,41 @@ export interface ShadingChoice {
   surface: SurfaceId
 }
 
-/** The shading function for a table, or undefined when shading is off or the physics refuses the input. */
-export function useTractionShade(table: MapTable, vehicle: VehicleParams | null, choice: ShadingChoice | null) {
-  return useMemo(() => {
-    if (!vehicle || !choice) return { shade: undefined, spinCount: 0 }
-    try {
-      const o = mapOverlay({ vehicle, loadCase: choice.loadCase, surface: choice.surface, gradeRad: 0, map: table })
-      return { shade: shadeFromOverlay(o), spinCount: o.spinCount }
-    } catch {
-      return { shade: undefined, spinCount: 0 }
-    }
-  }, [table, vehicle, choice])
+/** What the shading shows besides the colours. */
+export interface ShadingCounts {
+  spinCount: number
+  /** Cells below the design lateral acceleration (friction ellipse), with the design value, m/s². */
+  lateralShortCount: number
+  designLateralAccelMps2: number | null
+  /** Free rolling already below the design value: the surface, not the map, is short. */
+  surfaceShort: boolean
+  /** Lift-off cells of a regen map on a semitrailer case that are lateral-short; null when not applicable. */
+  liftOffJackknifeCells: number | null
 }
 
-export function TractionShadingControls(props: { vehicle: VehicleParams | null; choice: ShadingChoice | null; onChange: (c: ShadingChoice | null) => void; spinCount: number; kind: MapTable['kind'] }) {
+const NONE: ShadingCounts = { spinCount: 0, lateralShortCount: 0, designLateralAccelMps2: null, surfaceShort: false, liftOffJackknifeCells: null }
+
+/** The shading function for a table, or undefined when shading is off or the physics refuses the input. */
+export function useTractionShade(table: MapTable, vehicle: VehicleParams | null, choice: ShadingChoice | null, designLateralAccelMps2?: number) {
+  return useMemo(() => {
+    if (!vehicle || !choice) return { shade: undefined, ...NONE }
+    try {
+      const o = mapOverlay({ vehicle, loadCase: choice.loadCase, surface: choice.surface, gradeRad: 0, map: table, designLateralAccelMps2 })
+      return {
+        shade: shadeFromOverlay(o),
+        spinCount: o.spinCount,
+        lateralShortCount: o.lateralShortCount,
+        designLateralAccelMps2: o.designLateralAccelMps2,
+        surfaceShort: o.freeRollingLateralMps2 < o.designLateralAccelMps2,
+        liftOffJackknifeCells: o.liftOffJackknifeCells,
+      }
+    } catch {
+      return { shade: undefined, ...NONE }
+    }
+  }, [table, vehicle, choice, designLateralAccelMps2])
+}
+
+export function TractionShadingControls(props: { vehicle: VehicleParams | null; choice: ShadingChoice | null; onChange: (c: ShadingChoice | null) => void; counts: ShadingCounts; kind: MapTable['kind'] }) {
   if (!props.vehicle) return null
   const cases = loadCasesFor(props.vehicle)
   const c = props.choice
@@ -48,11 +70,25 @@ export function TractionShadingControls(props: { vehicle: VehicleParams | null; 
           <select aria-label="Shading surface" className="field w-auto py-0.5" value={c.surface} onChange={(e) => props.onChange({ ...c, surface: e.target.value as SurfaceId })}>
             {SURFACE_IDS.map((s) => <option key={s} value={s}>{SURFACES[s].label}</option>)}
           </select>
-          <span data-testid="shading-spin-count" className={props.spinCount ? 'font-semibold text-danger' : 'text-slate-600'}>
-            {props.spinCount} cell(s) beyond the tyre’s peak ({props.kind === 'drive' ? 'wheel spin' : 'lock-up'})
+          <span data-testid="shading-spin-count" className={props.counts.spinCount ? 'font-semibold text-danger' : 'text-slate-600'}>
+            {props.counts.spinCount} cell(s) beyond the tyre’s peak ({props.kind === 'drive' ? 'wheel spin' : 'lock-up'})
           </span>
+          <LateralNote counts={props.counts} />
         </>
       )}
     </div>
+  )
+}
+
+/** The friction-ellipse check in words: lateral grip left for the design curve, and the jackknife finding on lift-off. */
+function LateralNote({ counts: c }: { counts: ShadingCounts }) {
+  if (c.designLateralAccelMps2 === null) return null
+  const design = `${c.designLateralAccelMps2} m/s²`
+  if (c.surfaceShort) return <span data-testid="shading-lateral" className="text-slate-600">· this surface cannot hold {design} lateral even free rolling</span>
+  return (
+    <span data-testid="shading-lateral" className={c.lateralShortCount ? 'font-semibold text-danger' : 'text-slate-600'}>
+      · {c.lateralShortCount} cell(s) leave the drive axle less than {design} lateral grip
+      {c.liftOffJackknifeCells ? ` — ${c.liftOffJackknifeCells} on lift-off: jackknife risk in a curve` : ''}
+    </span>
   )
 }

@@ -4,13 +4,17 @@
  * and the motor-shaft torque that reaches it. Pure; the traction route and the physics page share it.
  */
 import 'server-only'
-import { cellSlip, deliverableTorqueLimit, loadCasesFor, SURFACE_IDS, SURFACES, type LoadCase, type SurfaceId, type VehicleParams } from '@/physics'
+import { axleLoadsFor, cellSlip, deliverableTorqueLimit, driveCurveFor, loadCasesFor, peakSlip, SURFACE_IDS, SURFACES, type LoadCase, type SurfaceId, type VehicleParams } from '@/physics'
 
 export interface TractionRow {
   surface: SurfaceId
   surfaceLabel: string
   peakMu: number
   loadCase: LoadCase
+  /** Peak μ of the program's drive tyre at this load case's static tyre load (differs from peakMu with load sensitivity). */
+  tyreMu: number
+  /** Slip ratio at the drive tyre's peak on this surface and load. */
+  tyrePeakSlip: number
   /** Largest tractive force of the drive axle, kN. */
   driveLimitKN: number
   /** Motor-shaft torque that just reaches it (gear 0), N·m. */
@@ -33,11 +37,14 @@ export function tractionTable(vehicle: VehicleParams): TractionRow[] {
     loadCasesFor(vehicle).map((loadCase) => {
       const drive = cellSlip({ vehicle, loadCase, surface, motorTorqueNm: 1, roadSpeedKmh: LOW_SPEED_KMH })
       const regen = cellSlip({ vehicle, loadCase, surface, motorTorqueNm: -1, roadSpeedKmh: LOW_SPEED_KMH })
+      const curve = driveCurveFor(vehicle, axleLoadsFor(vehicle, loadCase).model, surface, 1)
       return {
         surface,
         surfaceLabel: SURFACES[surface].label,
         peakMu: SURFACES[surface].peakMu,
         loadCase,
+        tyreMu: curve.D,
+        tyrePeakSlip: peakSlip(curve),
         driveLimitKN: drive.limitForceN / 1000,
         driveTorqueAtLimitNm: drive.motorTorqueAtLimitNm,
         lowSpeedEnvelopeNm: envelope,

@@ -139,6 +139,7 @@ async function analyseLog(logId: number, hooks: { checkpoint: () => void; onProg
     map: { rowAxis: part.table.rowAxis, colAxis: part.table.colAxis },
     kind: part.kind,
     surface: report.surface,
+    driveTyre: set.paramVersion.params.driveTyre,
     onProgress: hooks.onProgress,
   })
   return { sizeBytes: log.sizeBytes, analysis: { ...result, basis } }

@@ -6,7 +6,7 @@
 import 'server-only'
 import type { ReleaseConditions } from '@/db/schema'
 import type { MapTable } from '@/maps'
-import { slipGrid, SURFACE_IDS, SURFACES, type SurfaceId } from '@/physics'
+import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2, hasTrailer, lateralMargin, slipGrid, SURFACE_IDS, SURFACES, type SurfaceId } from '@/physics'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
 
 export interface TractionException {
@@ -33,6 +33,33 @@ export function tractionExceptions(table: MapTable, vehicle: VehicleParams, c: R
         }),
       )
       if (cells.length) out.push({ key: `traction:${surface}:${loadCase}`, surface, loadCase, cells })
+    }
+  }
+  return out
+}
+
+/**
+ * The jackknife finding of a regen map on a tractor: per surface × semitrailer load case, the cells of
+ * the lift-off row (the first row, brake pedal released) whose regen takes the drive axle's remaining
+ * lateral capacity (friction ellipse) below the design lateral acceleration that the free-rolling axle
+ * holds. `allowedNm` is the regen torque at which the capacity just equals the design value. A surface
+ * that cannot hold the design value even free rolling is left out: the map cannot help there.
+ */
+export function jackknifeExceptions(table: MapTable, vehicle: VehicleParams, c: ReleaseConditions): TractionException[] {
+  if (table.kind !== 'regen' || !vehicle.trailer) return []
+  const design = c.designLateralAccelMps2 ?? DEFAULT_DESIGN_LATERAL_ACCEL_MPS2
+  const out: TractionException[] = []
+  for (const surface of c.surfaces) {
+    for (const loadCase of c.loadCases.filter(hasTrailer)) {
+      const margin = lateralMargin({ vehicle, loadCase, surface, gradeRad: 0 }, 'regen', design)
+      if (margin.torqueAtDesignNm === null) continue
+      const allowed = margin.torqueAtDesignNm
+      const grid = slipGrid({ vehicle, loadCase, surface, gradeRad: 0, ...table })
+      const cells: TractionException['cells'] = []
+      grid[0].forEach((cell, col) => {
+        if (cell.lateralCapacityMps2 < design) cells.push({ row: 0, col, pedalPct: table.rowAxis[0], speedKmh: table.colAxis[col], torqueNm: Math.abs(cell.deliveredTorqueNm), allowedNm: allowed })
+      })
+      if (cells.length) out.push({ key: `jackknife:${surface}:${loadCase}`, surface, loadCase, cells })
     }
   }
   return out

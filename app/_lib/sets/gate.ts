@@ -3,9 +3,13 @@
  * map, each revision approved; (b) validation finds no error in either map under the set's
  * parameter version; (c) no cell of either map asks for more than the traction limit less the
  * version's margin in any of its release conditions — or the lead acknowledges each exception
- * (map × surface × load case) with a reason; (c′) both maps export exactly to the C header; (d) at least one drive report was filed on this
+ * (map × surface × load case) with a reason; (c″) on a tractor, no lift-off cell of the regen map takes
+ * the drive axle's lateral capacity below the design lateral acceleration (the jackknife finding), or
+ * the lead acknowledges it likewise; (c′) both maps export exactly to the C header; (d) at least one drive report was filed on this
  * exact set; (e) no open safety concern sits on any of its revisions, whichever set it was
- * found in. Pure: the caller loads the data.
+ * found in; (f) when the version declares battery corners and a minimum lift-off deceleration, no
+ * corner takes the regen map's lift-off deceleration below it where the nominal pack reaches it
+ * (docs/physics.md §7a). Pure: the caller loads the data.
  */
 import 'server-only'
 import type { Acknowledgement, ReleaseConditions } from '@/db/schema'
@@ -14,8 +18,10 @@ import { STATE_LABELS } from '@/domain/revision-states'
 import { limitsFromVehicle, MapError, toFixedTable, validate, type MapKind, type MapTable } from '@/maps'
 import { surfaceLabel, type SurfaceId } from '@/physics/surfaces'
 import { loadCaseLabel } from '@/physics/load-cases'
+import { liftOffFindings } from '@/physics/battery'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
-import { LOW_FRICTION, tractionExceptions } from '../review/gate'
+import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
+import { jackknifeExceptions, LOW_FRICTION, tractionExceptions } from '../review/gate'
 
 /** Review states in which a revision has been approved by a lead (released and replaced ones were). */
 export const APPROVED_STATES: readonly RevisionState[] = ['approved', 'released', 'retired']
@@ -31,6 +37,8 @@ export interface SetGatePart {
 
 export interface SetTractionException {
   key: string
+  /** 'traction': cells above the traction limit less the margin; 'jackknife': lift-off regen cells below the design lateral acceleration. */
+  finding: 'traction' | 'jackknife'
   mapKind: MapKind
   revisionId: number
   surface: SurfaceId
@@ -39,7 +47,7 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'drive-report' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'jackknife' | 'lift-off' | 'drive-report' | 'safety'
   met: boolean
   summary: string
   details: string[]
@@ -53,12 +61,13 @@ export interface SetGateResult {
   unacknowledged: string[]
 }
 
-export const exceptionKey = (kind: MapKind, surface: SurfaceId, loadCase: LoadCase) => `traction:${kind}:${surface}:${loadCase}`
+export const exceptionKey = (kind: MapKind, surface: SurfaceId, loadCase: LoadCase, finding: SetTractionException['finding'] = 'traction') => `${finding}:${kind}:${surface}:${loadCase}`
 
 export function setTractionExceptions(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetTractionException[] {
-  return parts.flatMap((p) =>
-    tractionExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase), mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
-  )
+  return parts.flatMap((p) => [
+    ...tractionExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase), finding: 'traction' as const, mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
+    ...jackknifeExceptions(p.table, vehicle, c).map((e) => ({ key: exceptionKey(p.kind, e.surface, e.loadCase, 'jackknife'), finding: 'jackknife' as const, mapKind: p.kind, revisionId: p.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells })),
+  ])
 }
 
 export function setGate(input: {
@@ -90,10 +99,17 @@ export function setGate(input: {
   const exceptions = setTractionExceptions(parts, vehicle, conditions)
   const acked = new Set(input.acknowledgements.filter((a) => a.reason.trim()).map((a) => a.key))
   const unacknowledged = exceptions.filter((e) => !acked.has(e.key)).map((e) => e.key)
+  const traction = exceptions.filter((e) => e.finding === 'traction')
+  const tractionOpen = traction.filter((e) => !acked.has(e.key)).length
+  const jackknife = exceptions.filter((e) => e.finding === 'jackknife')
+  const jackknifeOpen = jackknife.filter((e) => !acked.has(e.key)).length
+  const design = conditions.designLateralAccelMps2 ?? DEFAULT_DESIGN_LATERAL_ACCEL_MPS2
   const lowMu = conditions.surfaces.some((s) => LOW_FRICTION.includes(s))
   const bothLoads = conditions.loadCases.includes('empty') && conditions.loadCases.includes('laden')
   const declared = lowMu && bothLoads
-  const cells = exceptions.reduce((n, e) => n + e.cells.length, 0)
+  const cells = traction.reduce((n, e) => n + e.cells.length, 0)
+
+  const liftOff = liftOffCondition(parts, vehicle, conditions)
 
   const all: SetGateCondition[] = [
     {
@@ -127,14 +143,25 @@ export function setGate(input: {
     },
     {
       id: 'traction',
-      met: declared && unacknowledged.length === 0,
+      met: declared && tractionOpen === 0,
       summary: !declared
         ? 'The parameter version’s release conditions must include a low-friction surface and both the empty and laden load cases'
-        : exceptions.length === 0
+        : traction.length === 0
           ? `No cell above the traction limit less ${conditions.marginPct} % (${conditions.surfaces.length} surfaces × ${conditions.loadCases.length} load cases, both maps)`
-          : `${cells} cell(s) above the traction limit less ${conditions.marginPct} %; ${unacknowledged.length} of ${exceptions.length} exception(s) not acknowledged`,
-      details: exceptions.map((e) => `${e.mapKind} map, ${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} cell(s), first at ${e.cells[0].pedalPct} % / ${e.cells[0].speedKmh} km/h`),
+          : `${cells} cell(s) above the traction limit less ${conditions.marginPct} %; ${tractionOpen} of ${traction.length} exception(s) not acknowledged`,
+      details: traction.map((e) => `${e.mapKind} map, ${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} cell(s), first at ${e.cells[0].pedalPct} % / ${e.cells[0].speedKmh} km/h`),
     },
+    {
+      id: 'jackknife',
+      met: jackknifeOpen === 0,
+      summary: !vehicle.trailer
+        ? 'No semitrailer: no jackknife check on lift-off regen'
+        : jackknife.length === 0
+          ? `Lift-off regen leaves the drive axle at least ${design} m/s² of lateral grip on every declared surface the axle holds it on free rolling (semitrailer cases)`
+          : `Lift-off regen takes the drive axle below ${design} m/s² of lateral grip in ${jackknife.reduce((n, e) => n + e.cells.length, 0)} cell(s): a tractor can jackknife in a curve; ${jackknifeOpen} of ${jackknife.length} finding(s) not acknowledged`,
+      details: jackknife.map((e) => `${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} lift-off cell(s) above ${Math.round(e.cells[0].allowedNm)} N·m regen, first at ${e.cells[0].speedKmh} km/h`),
+    },
+    ...(liftOff ? [liftOff] : []),
     {
       id: 'drive-report',
       met: input.reports > 0,
@@ -149,4 +176,28 @@ export function setGate(input: {
     },
   ]
   return { ok: all.every((c) => c.met), conditions: all, exceptions, unacknowledged }
+}
+
+const fmt = (x: number) => x.toFixed(2)
+
+/**
+ * The lift-off condition of a set, or null when the version declares no battery corners or no minimum
+ * (older versions: the gate judges as before). Evaluated on the regen map over the declared load cases.
+ */
+export function liftOffCondition(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetGateCondition | null {
+  const corners = c.batteryCorners ?? []
+  if (!corners.length || c.minLiftOffDecelMps2 === undefined) return null
+  const min = c.minLiftOffDecelMps2
+  const findings = parts.filter((p) => p.kind === 'regen').flatMap((p) => liftOffFindings(vehicle, p.table, c.loadCases, corners, min).map((f) => ({ ...f, part: p })))
+  return {
+    id: 'lift-off',
+    met: findings.length === 0,
+    summary: findings.length === 0
+      ? `Lift-off regen keeps at least ${fmt(min)} m/s² at every battery corner (${corners.map((k) => k.label).join(', ')}) wherever the nominal pack gives it`
+      : `At ${new Set(findings.map((f) => f.corner.label)).size} battery corner(s) lift-off regen falls below ${fmt(min)} m/s²`,
+    details: findings.map((f) => {
+      const worst = f.points.reduce((a, b) => (b.cornerDecelMps2 < a.cornerDecelMps2 ? b : a))
+      return `${f.part.mapName} r${f.part.number}, ${f.corner.label} (${f.corner.socPct} %, ${f.corner.temperatureC} °C), ${loadCaseLabel(f.loadCase)}: ${fmt(worst.cornerDecelMps2)} m/s² instead of ${fmt(worst.nominalDecelMps2)} at ${worst.speedKmh} km/h; ${f.points.length} speed(s) below`
+    }),
+  }
 }

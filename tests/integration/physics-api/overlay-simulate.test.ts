@@ -27,6 +27,11 @@ describe('GET /api/maps/:id/revisions/:number/overlay', () => {
     expect(res.body.spin[11]).toHaveLength(13)
     expect(res.body.spinCount).toBeGreaterThan(0)
     expect(res.body.gradePct).toBe(0)
+    // Friction ellipse: lateral grip left per cell, against the default design value (the fixture's conditions state none).
+    expect(res.body.lateralCapacityMps2[11]).toHaveLength(13)
+    expect(res.body.designLateralAccelMps2).toBe(1.5)
+    expect(res.body.freeRollingLateralMps2).toBeCloseTo(0.1 * 9.80665, 9) // ice, level: μ·g
+    expect(res.body.liftOffJackknifeCells).toBeNull() // a drive map
     const laden = await call(overlayRoute.GET, { cookie, path: `${path}?loadCase=laden&surface=ice&gradePct=5`, params: { id: ctx.driveId, number: 'latest' } })
     expect(laden.body.spinCount).toBeLessThan(res.body.spinCount)
   })

@@ -240,7 +240,7 @@ describe('GENTLE fixture sanity', () => {
     await approve(s, s.regenRevisionId)
     const id = await makeSet(s)
     await fileSetReport(id, s.driverCookie)
-    expect(gateMet(await getSetView(id, s.leadCookie))).toEqual({ parts: true, approved: true, validation: true, exportable: true, traction: true, 'drive-report': true, safety: true })
+    expect(gateMet(await getSetView(id, s.leadCookie))).toEqual({ parts: true, approved: true, validation: true, exportable: true, traction: true, jackknife: true, 'drive-report': true, safety: true })
   })
 })
 

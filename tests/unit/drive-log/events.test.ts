@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { DEFAULT_SPIN_SLIP, SURFACES, peakSlip } from '@/physics'
+import { DEFAULT_SPIN_SLIP, peakSlip } from '@/physics'
 import { analyse, series } from './helpers'
 
 // 50 Hz at a steady 36 km/h (10 m/s). Truth, built here:
@@ -35,14 +35,23 @@ describe('wheel-spin and lock-up events', () => {
     expect(lock.start).toMatchObject({ accelPedalPct: 0, brakePedalPct: 60 })
     expect(result.shortExcursions).toBe(1)
   })
-  it('uses the surface curve’s peak slip as threshold (ice: κ* = tan(tan(π/4))/B = tan(1)/4 ≈ 0.389)', () => {
-    const { result } = analyse(truthLog(), { surface: 'ice' })
-    expect(result.thresholds.spinSlip).toBeCloseTo(Math.tan(1) / 4, 12)
-    expect(result.thresholds.source).toBe('surface')
-    // The spin exceeds 0.389 only from κ = 0.39 (i = 119, t = 2.38 s) to 0.44.
-    expect(result.events[0].startS).toBeCloseTo(2.38, 12)
-    expect(result.events[0].durationS).toBeCloseTo(0.12, 12)
-    expect(analyse(truthLog(), { surface: 'dry-asphalt' }).result.thresholds.spinSlip).toBe(peakSlip(SURFACES['dry-asphalt'].coeffs))
+  it('uses the drive tyre’s peak slip on the surface as threshold (brush model: κ* ≈ κ_sl = 3·μ/(C_κ/F_z), Pacejka ch. 3)', () => {
+    // Default truck tyre, C_κ/F_z = 12: dry (μ 1) κ* ≈ 3/12 = 0.25; the spin exceeds it from κ = 0.25 (i = 105, t = 2.10 s) to 0.44.
+    const dry = analyse(truthLog(), { surface: 'dry-asphalt' }).result
+    expect(dry.thresholds.spinSlip).toBe(peakSlip({ B: 12 / 1.5, C: 1.5, D: 1, E: 0.3 }))
+    expect(dry.thresholds.spinSlip).toBeCloseTo(0.25, 3)
+    expect(dry.thresholds.source).toBe('surface')
+    expect(dry.events[0].startS).toBeCloseTo(2.1, 12)
+    expect(dry.events[0].durationS).toBeCloseTo(0.4, 12)
+    // Ice (μ 0.1): κ* ≈ 0.025, so the whole excursion from κ = 0.2 is spin.
+    const ice = analyse(truthLog(), { surface: 'ice' }).result
+    expect(ice.thresholds.spinSlip).toBeCloseTo(0.025, 4)
+    expect(ice.events[0].startS).toBeCloseTo(2.0, 12)
+    // A softer program tyre, C_κ/F_z = 8: κ* ≈ 3/8 = 0.375 on dry; spin from κ = 0.38 (i = 118, t = 2.36 s).
+    const soft = analyse(truthLog(), { surface: 'dry-asphalt', driveTyre: { slipStiffnessPerLoad: 8 } }).result
+    expect(soft.thresholds.spinSlip).toBeCloseTo(0.375, 3)
+    expect(soft.events[0].startS).toBeCloseTo(2.36, 12)
+    expect(soft.events[0].durationS).toBeCloseTo(0.14, 12)
   })
   it('explicit thresholds win, and the lock threshold may differ', () => {
     const { result } = analyse(truthLog(), { thresholds: { spinSlip: 0.5, lockSlip: 0.9, minDurationS: 0 } })

@@ -32,6 +32,15 @@ const mf = (k: number, c: { B: number; C: number; D: number; E: number }) => {
   return c.D * Math.sin(c.C * Math.atan(x - c.E * (x - Math.atan(x))))
 }
 
+/** The default truck drive tyre (physics/drive-tyre.ts: C_κ/F_z = 12, C = 1.5, E = 0.3) on a surface of peak μ: B = 12/(C·μ). */
+const truckCurve = (mu: number) => ({ B: 12 / (1.5 * mu), C: 1.5, D: mu, E: 0.3 })
+/** Rising-branch inverse by plain bisection on the in-test formula. */
+function bisect(f: (k: number) => number, target: number, hi: number): number {
+  let lo = 0
+  for (let i = 0; i < 200; i++) { const m = (lo + hi) / 2; if (f(m) < target) lo = m; else hi = m }
+  return (lo + hi) / 2
+}
+
 function driveMap(torques: number[]): MapTable {
   const colAxis = [0, 5, 10, 20]
   return { kind: 'drive', rowAxis: torques.map((_, i) => i * (100 / (torques.length - 1))), colAxis, values: torques.map((t) => colAxis.map(() => t)) }
@@ -58,28 +67,27 @@ describe('mapOverlay: traction-limit torque per speed', () => {
 })
 
 describe('mapOverlay: slip heat map', () => {
-  it('predicts the slip the Magic Formula gives for the cell force ratio on wet asphalt (E = 1, closed-form inverse)', () => {
+  it('predicts the slip the drive-tyre curve gives for the cell force ratio on wet asphalt', () => {
     const T = 1200
     const o = mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'wet-asphalt', map: driveMap([0, T]) })
     const fx = (T * G * eta) / R
     const wr = W * (a / L) + (fx * h) / L // rear load with load transfer
     const ratio = fx / wr
-    // Wet asphalt B = 12, C = 2.3, D = 0.82, E = 1: u = atan(Bκ), so κ = tan(tan(asin(ratio/D)/C))/B.
-    const kappa = Math.tan(Math.tan(Math.asin(ratio / 0.82) / 2.3)) / 12
+    const kappa = bisect((k) => mf(k, truckCurve(0.82)), ratio, 0.2)
     expect(o.slip[1][0]).toBeCloseTo(kappa, 9)
     expect(o.utilisation[1][0]).toBeCloseTo(fx / gillespieDriveLimitN(0.82), 9)
     expect(o.slip[0][0]).toBe(0)
     expect(o.spin[1][0]).toBe(false)
   })
 
-  it('on dry asphalt (E = 0.97) the predicted slip reproduces the force ratio through the formula', () => {
+  it('on dry asphalt the predicted slip reproduces the force ratio through the formula', () => {
     const T = 2000
     const o = mapOverlay({ vehicle: v, loadCase: 'empty', surface: 'dry-asphalt', map: driveMap([0, T]) })
     const fx = (T * G * eta) / R
     const ratio = fx / (W * (a / L) + (fx * h) / L)
     const kappa = o.slip[1][2]
     expect(kappa).not.toBeNull()
-    expect(mf(kappa ?? NaN, { B: 10, C: 1.9, D: 1, E: 0.97 })).toBeCloseTo(ratio, 9)
+    expect(mf(kappa ?? NaN, truckCurve(1))).toBeCloseTo(ratio, 9)
   })
 
   it('marks cells beyond the peak as spin with no slip, and counts them', () => {
@@ -90,8 +98,11 @@ describe('mapOverlay: slip heat map', () => {
     expect(o.utilisation[1][0]).toBeCloseTo(0.5, 9)
     expect(o.utilisation[2][0]).toBeCloseTo(1.5, 9)
     expect(o.spinCount).toBe(4)
-    // Packed snow B = 5, C = 2, E = 1: peak where atan(atan(Bκ)) = π/4, κ = tan(1)/5.
-    expect(o.tyrePeakSlip).toBeCloseTo(Math.tan(1) / 5, 9)
+    // Peak where C·atan(u) = π/2, u = x − E(x − atan x) = tan(π/3) = √3 with C = 1.5, E = 0.3; κ = x/B.
+    const x = bisect((y) => y - 0.3 * (y - Math.atan(y)), Math.sqrt(3), 10)
+    expect(o.tyrePeakSlip).toBeCloseTo(x / truckCurve(0.3).B, 9)
+    // and near the brush model's full-sliding slip κ_sl = 3·μ/(C_κ/F_z) = 0.075 (Pacejka ch. 3).
+    expect(o.tyrePeakSlip).toBeCloseTo(0.075, 4)
   })
 
   it('changes with the load case: laden puts more load on the drive axle, so less of the grip is used', () => {

@@ -4,6 +4,8 @@ import { linearDriveMap, regenMap, tractor } from '@/tests/support/fixtures'
 
 const g = 9.80665
 const ref = (k: number, c: { B: number; C: number; D: number; E: number }) => c.D * Math.sin(c.C * Math.atan(c.B * k - c.E * (c.B * k - Math.atan(c.B * k))))
+/** The default truck drive tyre (physics/drive-tyre.ts: C_κ/F_z = 12, C = 1.5, E = 0.3, no load sensitivity) on a surface of peak μ: B = 12/(C·μ). */
+const truckCurve = (mu: number) => ({ B: 12 / (1.5 * mu), C: 1.5, D: mu, E: 0.3 })
 /** Independent inversion by plain bisection on the in-test formula. */
 function bisectSlip(ratio: number, c: { B: number; C: number; D: number; E: number }, hi: number): number {
   let lo = 0
@@ -18,7 +20,7 @@ describe('cellSlip', () => {
     const Wr = (19000 * g * 2.3) / 3.8 + (F * 1.6) / 3.8 // static + transfer = 122 376.475 N
     expect(r.wheelForceN).toBeCloseTo(F, 9)
     expect(r.driveAxleLoadN).toBeCloseTo(Wr, 6)
-    expect(r.slip as number).toBeCloseTo(bisectSlip(F / Wr, SURFACES['dry-asphalt'].coeffs, 0.18), 9)
+    expect(r.slip as number).toBeCloseTo(bisectSlip(F / Wr, truckCurve(1), 0.25), 9)
     expect(r.spin).toBe(false)
     expect(r.envelopeLimited).toBe(false)
     // limit = min(μ·W0/(1 − μ·h/L), steer-lift m·g·(L − a)/h) with μ = 1:
@@ -49,7 +51,8 @@ describe('cellSlip', () => {
       const r = at(tLim * (1 - 1e-9), 10)
       expect(r.utilisation).toBeCloseTo(1, 7)
       if (r.limitedBy === 'steer-axle-lift') continue // μ = 1 laden: the steer axle lifts before the tyre peaks
-      expect(Math.abs(r.slip as number)).toBeCloseTo(peakSlip(SURFACES[id].coeffs), 3)
+      expect(Math.abs(r.slip as number)).toBeCloseTo(peakSlip(truckCurve(SURFACES[id].peakMu)), 3)
+      expect(Math.abs(r.slip as number)).toBeCloseTo((3 * SURFACES[id].peakMu) / 12, 3) // brush model: κ_sl = 3·μ/(C_κ/F_z) (Pacejka ch. 3)
       expect(at(tLim * 1.001, 10).slip).toBeNull()
     }
   })

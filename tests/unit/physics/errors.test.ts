@@ -31,8 +31,10 @@ describe('PhysicsInputError', () => {
   it('unknown surface or missing trailer', () => {
     const fromJson: SurfaceId = JSON.parse('"sand"') // untyped data, as it would arrive from a request body
     expect(catchErr(() => cellSlip({ vehicle: tractor, loadCase: 'laden', surface: fromJson, motorTorqueNm: 1, roadSpeedKmh: 5 })).field).toBe('surface')
-    const bad = { ...SURFACES.ice, coeffs: { B: -4, C: 2, D: 0.1, E: 1 } }
-    expect(catchErr(() => cellSlip({ vehicle: tractor, loadCase: 'laden', surface: bad, motorTorqueNm: 1, roadSpeedKmh: 5 })).field).toBe('surface.coeffs.B')
+    const bad = { ...SURFACES.ice, peakMu: -0.1 }
+    expect(catchErr(() => cellSlip({ vehicle: tractor, loadCase: 'laden', surface: bad, motorTorqueNm: 1, roadSpeedKmh: 5 })).field).toBe('surface.peakMu')
+    const badTyre = { ...tractor, driveTyre: { shapeC: 0.8 } }
+    expect(catchErr(() => cellSlip({ vehicle: badTyre, loadCase: 'laden', surface: 'ice', motorTorqueNm: 1, roadSpeedKmh: 5 })).field).toBe('vehicle.driveTyre.shapeC')
     expect(catchErr(() => axleLoadsFor({ ...tractor, trailer: null }, 'trailer-laden')).field).toBe('loadCase')
   })
 })

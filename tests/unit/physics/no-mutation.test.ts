@@ -24,6 +24,6 @@ describe('no input is mutated', () => {
     simulateLaunch({ vehicle: inputs.vehicle, loadCase: 'laden', surface: 'packed-snow', map: inputs.drive, pedal: inputs.pedal, durationS: 2 })
     simulateLiftOff({ vehicle: inputs.rigid, loadCase: 'laden', surface: 'ice', map: inputs.regen, initialSpeedKmh: 50, durationS: 2 })
     expect(inputs).toEqual(before)
-    expect(SURFACES['dry-asphalt'].coeffs).toEqual({ B: 10, C: 1.9, D: 1, E: 0.97 })
+    expect(SURFACES['dry-asphalt'].passengerCarCoeffs).toEqual({ B: 10, C: 1.9, D: 1, E: 0.97 })
   })
 })

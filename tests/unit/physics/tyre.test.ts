@@ -15,12 +15,12 @@ describe('magicFormula', () => {
     expect(magicFormula(0.5, dry)).toBeCloseTo(0.959374724159496, 13)
     expect(magicFormula(1, dry)).toBeCloseTo(0.9145219580128047, 13)
     // Wet B=12 C=2.3 D=0.82 E=1 at κ=0.05, snow B=5 C=2 D=0.3 E=1 at κ=0.2 (Python 3).
-    expect(magicFormula(0.05, SURFACES['wet-asphalt'].coeffs)).toBeCloseTo(0.7449264625605146, 13)
-    expect(magicFormula(0.2, SURFACES['packed-snow'].coeffs)).toBeCloseTo(0.29145487699448563, 13)
+    expect(magicFormula(0.05, SURFACES['wet-asphalt'].passengerCarCoeffs)).toBeCloseTo(0.7449264625605146, 13)
+    expect(magicFormula(0.2, SURFACES['packed-snow'].passengerCarCoeffs)).toBeCloseTo(0.29145487699448563, 13)
   })
   it('agrees with the in-test formula and is odd in slip (property)', () => {
     fc.assert(fc.property(fc.double({ min: -2, max: 2, noNaN: true }), fc.constantFrom(...SURFACE_IDS), (k, id) => {
-      const c = SURFACES[id].coeffs
+      const c = SURFACES[id].passengerCarCoeffs
       expect(magicFormula(k, c)).toBeCloseTo(ref(k, c.B, c.C, c.D, c.E), 12)
       expect(magicFormula(-k, c)).toBeCloseTo(-magicFormula(k, c), 14)
     }))
@@ -44,7 +44,7 @@ describe('peakSlip / peakForceRatio', () => {
   })
   it('makes the numerical derivative vanish for every surface', () => {
     for (const id of SURFACE_IDS) {
-      const c = SURFACES[id].coeffs
+      const c = SURFACES[id].passengerCarCoeffs
       const kp = peakSlip(c)
       const d = 1e-6
       const deriv = (ref(kp + d, c.B, c.C, c.D, c.E) - ref(kp - d, c.B, c.C, c.D, c.E)) / (2 * d)
@@ -63,7 +63,7 @@ describe('peakSlip / peakForceRatio', () => {
 describe('slipForForceRatio', () => {
   it('round-trips slip → ratio → slip to 1e-9 on the rising branch (property)', () => {
     fc.assert(fc.property(fc.constantFrom(...SURFACE_IDS), fc.double({ min: -0.95, max: 0.95, noNaN: true }), (id, f) => {
-      const c = SURFACES[id].coeffs
+      const c = SURFACES[id].passengerCarCoeffs
       const k = f * peakSlip(c)
       const back = slipForForceRatio(magicFormula(k, c), c)
       expect(back).not.toBeNull()
@@ -78,7 +78,7 @@ describe('slipForForceRatio', () => {
     const k = slipForForceRatio(-0.5, dry) as number
     expect(k).toBeLessThan(0)
     expect(ref(k, 10, 1.9, 1, 0.97)).toBeCloseTo(-0.5, 12)
-    expect(slipForForceRatio(0.11, SURFACES.ice.coeffs)).toBeNull() // ice peak μ 0.1
+    expect(slipForForceRatio(0.11, SURFACES.ice.passengerCarCoeffs)).toBeNull() // ice peak μ 0.1
   })
   it('inverts monotone curves below their asymptote', () => {
     const mono = { B: 8, C: 0.9, D: 1, E: 0.5 }
@@ -88,7 +88,7 @@ describe('slipForForceRatio', () => {
   })
   it('needs on average at most 8 Magic-Formula-equivalent evaluations per solve', () => {
     const stats: SolveStats = { solves: 0, mfEvaluations: 0 }
-    for (const id of SURFACE_IDS) for (let i = 1; i <= 200; i++) slipForForceRatio((SURFACES[id].coeffs.D * i) / 201, SURFACES[id].coeffs, stats)
+    for (const id of SURFACE_IDS) for (let i = 1; i <= 200; i++) slipForForceRatio((SURFACES[id].passengerCarCoeffs.D * i) / 201, SURFACES[id].passengerCarCoeffs, stats)
     expect(stats.solves).toBe(1000)
     expect(stats.mfEvaluations / stats.solves).toBeLessThanOrEqual(8)
   })

@@ -43,6 +43,25 @@ describe('parameter version diff', () => {
     ])
   })
 
+  it('labels the tandem, battery-table and battery-corner fields in display units', () => {
+    const rc = { surfaces: ['ice'], loadCases: ['empty'], marginPct: 10 }
+    const table = { socPct: [10, 95], temperatureC: [-10, 25], chargePowerW: [[60_000, 250_000], [25_000, 120_000]], dischargePowerW: [[1, 1], [1, 1]] }
+    const rows = versionDiff(
+      { params: { ...params, batteryPowerTable: table }, releaseConditions: rc },
+      {
+        params: { ...params, tandem: { drivenLoadShare: 0.6 }, batteryPowerTable: { ...table, chargePowerW: [[60_000, 250_000], [30_000, 120_000]] } },
+        releaseConditions: { ...rc, batteryCorners: [{ label: 'Full and cold', socPct: 95, temperatureC: -10 }], minLiftOffDecelMps2: 0.3 },
+      },
+    )
+    expect(rows.map((r) => [r.label, r.from, r.to])).toEqual(expect.arrayContaining([
+      ['Driven axle’s share of the group load', '—', '60 %'],
+      ['Battery table: charge power, SoC row 2, temperature column 1', '25 kW', '30 kW'],
+      ['Tandem details', 'none', 'given'],
+      ['Release check: battery corners', '—', 'Full and cold (95 %, -10 °C)'],
+      ['Release check: minimum lift-off deceleration', '—', '0.3 m/s²'],
+    ]))
+  })
+
   it('keeps an unknown path as its own label', () => {
     expect(fieldInfo('params.somethingNew')).toEqual({ label: 'params.somethingNew', unit: '', scale: 1 })
     expect(formatValue(null, fieldInfo('params.somethingNew'))).toBe('—')
@@ -58,5 +77,17 @@ describe('choosing the versions to compare', () => {
     expect(chooseVersions([4, 3, 2, 1], 1, 4)).toEqual({ from: 1, to: 4 })
     expect(chooseVersions([4, 3, 2, 1], null, 3)).toEqual({ from: 2, to: 3 })
     expect(chooseVersions([4, 3, 2, 1], 2, null)).toEqual({ from: 2, to: 4 })
+  })
+})
+
+describe('versionDiff: the drive tyre', () => {
+  it('a tyre stated on a version that had none is one row plus a row per stated field, in display units', () => {
+    const rc = { surfaces: ['ice'], loadCases: ['empty'], marginPct: 10 }
+    const rows = versionDiff({ params: { axleLayout: '4x2' }, releaseConditions: rc }, { params: { axleLayout: '4x2', driveTyre: { nominalLoadPerTyreN: 28_000 } }, releaseConditions: { ...rc, designLateralAccelMps2: 2 } })
+    expect(rows.map((r) => [r.label, r.from, r.to])).toEqual([
+      ['Drive tyre', 'default truck tyre', 'stated'],
+      ['Drive tyre: Nominal load per drive tyre F_z,nom', '—', '28 kN'],
+      ['Release check: design lateral acceleration', '—', '2 m/s²'],
+    ])
   })
 })

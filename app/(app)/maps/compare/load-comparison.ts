@@ -29,6 +29,7 @@ export async function loadComparison(a: RevisionRef, b: RevisionRef, q: Record<s
   const vehicle = sa.map.programParams
   const loadCases = loadCasesFor(vehicle)
   const choice = initialChoice(q, loadCases)
+  const design = sa.map.programReleaseConditions?.designLateralAccelMps2
   const toSide = (s: NonNullable<typeof sa>): Side => ({ mapId: s.map.id, mapName: s.map.name, number: s.rev.number, message: s.rev.message, checksum: s.rev.checksum, table: s.rev.table })
   return {
     ok: true,
@@ -41,7 +42,7 @@ export async function loadComparison(a: RevisionRef, b: RevisionRef, q: Record<s
       b: toSide(sb),
       diff: diff(sa.rev.table, sb.rev.table),
       initialChoice: choice,
-      initialOverlays: { a: overlayFor(vehicle, sa.rev.table, choice), b: overlayFor(vehicle, sb.rev.table, choice) },
+      initialOverlays: { a: overlayFor(vehicle, sa.rev.table, choice, design), b: overlayFor(vehicle, sb.rev.table, choice, design) },
     },
   }
 }

@@ -98,7 +98,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
             unmet={unmet}
             exceptions={gate.exceptions.map((e) => ({
               key: e.key,
-              label: `${e.mapKind === 'drive' ? 'Drive' : 'Regen'} map × ${surfaceLabel(e.surface)} × ${loadCaseLabel(e.loadCase)}: ${e.cells.length} cell(s) above the limit`,
+              label: `${e.mapKind === 'drive' ? 'Drive' : 'Regen'} map × ${surfaceLabel(e.surface)} × ${loadCaseLabel(e.loadCase)}: ${e.cells.length} ${e.finding === 'jackknife' ? 'lift-off cell(s) below the design lateral acceleration (jackknife risk)' : 'cell(s) above the limit'}`,
             }))}
           />
         )}

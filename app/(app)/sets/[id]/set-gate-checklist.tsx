@@ -6,6 +6,8 @@ export function SetGateChecklist({ gate, programId }: { gate: SetGateResult; pro
   const links: Partial<Record<SetGateCondition['id'], { href: string; label: string }>> = {
     validation: { href: '#findings', label: 'findings above' },
     traction: { href: `/programs/${programId}/physics`, label: 'traction limits of the program' },
+    jackknife: { href: `/programs/${programId}/physics`, label: 'traction limits of the program' },
+    'lift-off': { href: `/programs/${programId}/physics`, label: 'lift-off at the battery corners' },
     'drive-report': { href: '#reports', label: 'drive reports below' },
     safety: { href: '#reports', label: 'drive reports below' },
   }
@@ -36,7 +38,7 @@ export function SetGateChecklist({ gate, programId }: { gate: SetGateResult; pro
         })}
       </ul>
       {gate.exceptions.length > 0 && (
-        <p className="mt-2 text-xs text-slate-600">Traction exceptions stay open here until a lead engineer gives a reason for each one when releasing.</p>
+        <p className="mt-2 text-xs text-slate-600">Traction and jackknife exceptions stay open here until a lead engineer gives a reason for each one when releasing.</p>
       )}
     </section>
   )

@@ -4,6 +4,7 @@ import type { MapSetFull, SetPart } from '@/db/queries/sets'
 import { STATE_LABELS } from '@/domain/revision-states'
 import { loadCaseLabel } from '@/physics/load-cases'
 import { surfaceLabel } from '@/physics/surfaces'
+import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
 
 function PartCard({ kind, part }: { kind: 'drive' | 'regen'; part: SetPart | null }) {
   const title = kind === 'drive' ? 'Drive map (accelerator)' : 'Regen map (brake pedal)'
@@ -53,7 +54,8 @@ export function SetParts({ set }: { set: MapSetFull }) {
             <dd>{formatTime(pv.createdAt)}</dd>
             <dt className="text-slate-600">Release checks</dt>
             <dd className="min-w-0">
-              {c.surfaces.map(surfaceLabel).join(', ')}; {c.loadCases.map(loadCaseLabel).join(', ')}; margin {c.marginPct} %
+              {c.surfaces.map(surfaceLabel).join(', ')}; {c.loadCases.map(loadCaseLabel).join(', ')}; margin {c.marginPct} %; design lateral acceleration{' '}
+              {c.designLateralAccelMps2 ?? `${DEFAULT_DESIGN_LATERAL_ACCEL_MPS2} (default)`} m/s²
             </dd>
           </dl>
           <p className="mt-2 text-sm">

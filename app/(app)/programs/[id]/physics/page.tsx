@@ -5,12 +5,14 @@ import { pageId } from '@/app/_lib/http/page-params'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { tractionTable } from '@/app/_lib/physics/traction'
+import { batteryCornerRows } from '@/app/_lib/physics/battery-corners'
 import { overlayFor } from '@/app/_lib/physics/overlay'
-import { getMapWithRevision, listMaps } from '@/db/queries/maps'
+import { getMapWithLatest, getMapWithRevision, listMaps } from '@/db/queries/maps'
 import { getProgram } from '@/db/queries/programs'
-import { loadCasesFor, type VehicleParams } from '@/physics'
+import { loadCasesFor } from '@/physics'
 import { PhysicsWorkbench } from './physics-workbench'
 import { initialState, type InitialPlots, type PhysicsState, type ProgramMap } from './physics-state'
+import { BatteryCornersTable } from './battery-corners-table'
 
 export const metadata = { title: 'Program physics' }
 
@@ -19,13 +21,15 @@ export const metadata = { title: 'Program physics' }
  * the page loads (both cached by revision on the server). Null when there is nothing to plot or the
  * choice is refused; the client then asks the overlay route, which names the problem.
  */
-async function firstPlots(params: VehicleParams, s: PhysicsState): Promise<InitialPlots | null> {
+async function firstPlots(s: PhysicsState): Promise<InitialPlots | null> {
   if (!s.map) return null
   const found = await getMapWithRevision(s.map, s.rev)
   if (!found) return null
   const choice = { loadCase: s.loadCase, surface: s.surface, gradePct: s.gradePct }
+  const { table } = found.revision
   try {
-    return { map: s.map, rev: s.rev, choice, table: found.revision.table, overlay: overlayFor(params, found.revision.table, choice) }
+    // Judged as the overlay route judges it: the map's program, its design lateral acceleration.
+    return { map: s.map, rev: s.rev, choice, table, overlay: overlayFor(found.map.programParams, table, choice, found.map.programReleaseConditions?.designLateralAccelMps2) }
   } catch {
     return null
   }
@@ -39,7 +43,13 @@ export default async function ProgramPhysicsPage(props: { params: Promise<{ id: 
   if (!program) notFound()
   const maps: ProgramMap[] = listed.filter((m) => m.latestNumber !== null).map((m) => ({ id: m.id, name: m.name, kind: m.kind, latestNumber: m.latestNumber ?? 1 }))
   const loadCases = loadCasesFor(program.params)
-  const initialPlots = await firstPlots(program.params, initialState(query, maps, loadCases))
+  const corners = program.releaseConditions.batteryCorners ?? []
+  // Only read the regen maps' tables when there are corners to evaluate them at; both reads at once.
+  const [initialPlots, regenFound] = await Promise.all([
+    firstPlots(initialState(query, maps, loadCases)),
+    Promise.all(corners.length ? maps.filter((m) => m.kind === 'regen').map((m) => getMapWithLatest(m.id)) : []),
+  ])
+  const regen = regenFound.filter((m) => m !== null).map((m) => ({ name: m.map.name, number: m.latest.number, table: m.latest.table }))
   return (
     <div className="space-y-4">
       <div>
@@ -59,6 +69,7 @@ export default async function ProgramPhysicsPage(props: { params: Promise<{ id: 
         query={query}
         canEdit={EDITORS.includes(user.role)}
       />
+      <BatteryCornersTable rows={batteryCornerRows(program.params, program.releaseConditions, regen)} minDecelMps2={program.releaseConditions.minLiftOffDecelMps2} hasTable={Boolean(program.params.batteryPowerTable)} />
     </div>
   )
 }

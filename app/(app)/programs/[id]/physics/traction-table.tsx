@@ -19,7 +19,8 @@ export function TractionTable({ programId, initial, units: u }: { programId: num
       <h2 className="text-lg font-semibold">Traction limits</h2>
       <p className="text-sm text-slate-600">
         Largest force the drive axle can put on the road before the tyres pass their peak, with the load transfer of that force
-        (level road, lowest gear). “Motor can give” is the motor and battery limit at {tableNumber(u.speedOut(5))} {u.speed}.
+        (level road, lowest gear). For a tandem it is the group’s total when the axle that limits first — the lighter one of an
+        open 6×4, the driven one of a 6×2 — reaches its peak. “Motor can give” is the motor and battery limit at {tableNumber(u.speedOut(5))} {u.speed}.
       </p>
       <div className="overflow-x-auto">
         <table className="w-full text-sm tabular-nums" data-testid="traction-table">
@@ -39,7 +40,9 @@ export function TractionTable({ programId, initial, units: u }: { programId: num
               const spins = r.lowSpeedEnvelopeNm > r.driveTorqueAtLimitNm
               return (
                 <tr key={`${r.surface}-${r.loadCase}`} className="border-t border-line">
-                  <td className="py-1">{r.surfaceLabel} <span className="text-slate-500">μ {r.peakMu}</span></td>
+                  <td className="py-1">
+                    {r.surfaceLabel} <span className="text-slate-500">μ {Math.abs(r.tyreMu - r.peakMu) < 5e-4 ? r.peakMu : `${r.peakMu} → ${tableNumber(r.tyreMu, 3)} at this load`}, peak slip {tableNumber(r.tyrePeakSlip, 3)}</span>
+                  </td>
                   <td>{LOAD_CASE_LABELS[r.loadCase]}</td>
                   <td className="text-right">{tableNumber(r.driveLimitKN)}{r.driveLimitedBy === 'steer-axle-lift' ? ' (steer axle lifts)' : ''}</td>
                   <td className={`text-right ${spins ? 'font-semibold text-danger' : ''}`} title={spins ? 'Full pedal at low speed can spin the drive axle' : undefined}>

@@ -56,6 +56,20 @@ export interface Acknowledgement {
   reason: string
 }
 
+/**
+ * A lead's waiver of a release condition (surface × load case) that no drive report on the set covers:
+ * key `coverage:<surface>:<loadCase>`, why, who and when. Kept with the release, like the acknowledgements.
+ */
+export interface CoverageWaiverRecord {
+  key: string
+  reason: string
+  surface: SurfaceId
+  loadCase: LoadCase
+  byId: number
+  byName: string
+  at: string
+}
+
 /** An acknowledgement as a set release keeps it: which exception, why, who and when. */
 export interface AcknowledgementRecord extends Acknowledgement {
   mapKind: MapKind
@@ -401,6 +415,8 @@ export const setReleases = pgTable(
       .references(() => users.id),
     releasedAt: timestamp('released_at', { withTimezone: true }).notNull().defaultNow(),
     acknowledgements: jsonb('acknowledgements').$type<AcknowledgementRecord[]>().notNull().default([]),
+    /** Release conditions without a covering drive report, waived by the lead with a reason (none in older releases). */
+    coverageWaivers: jsonb('coverage_waivers').$type<CoverageWaiverRecord[]>().notNull().default([]),
     /** Object key, file name, size and SHA-256 of the frozen package; null only for releases older than frozen packages. */
     packageKey: text('package_key'),
     packageName: text('package_name'),

@@ -5,7 +5,7 @@ import type { MapKind, MapTable } from '../../maps/table'
 import type { RevisionState } from '../../domain/revision-states'
 import type { VehicleParams } from '../../physics/vehicle'
 import { getDb, type Db } from '../client'
-import { driveReports, mapRevisions, maps, mapSets, paramVersions, revisionEvents, setReleases, users, vehiclePrograms, type AcknowledgementRecord, type ReleaseConditions } from '../schema'
+import { driveReports, mapRevisions, maps, mapSets, paramVersions, revisionEvents, setReleases, users, vehiclePrograms, type AcknowledgementRecord, type CoverageWaiverRecord, type ReleaseConditions } from '../schema'
 import { recordAudit } from './audit'
 import { enqueueMail, type OutgoingMail } from './mail'
 
@@ -36,6 +36,7 @@ export interface SetRelease {
   releasedBy: number
   releasedByName: string
   acknowledgements: AcknowledgementRecord[]
+  coverageWaivers: CoverageWaiverRecord[]
   packageKey: string | null
   packageName: string | null
   packageBytes: number | null
@@ -114,6 +115,7 @@ export async function listSetReleases(setId: number, conn?: Db): Promise<SetRele
       releasedBy: setReleases.releasedBy,
       releasedByName: users.name,
       acknowledgements: setReleases.acknowledgements,
+      coverageWaivers: setReleases.coverageWaivers,
       packageKey: setReleases.packageKey,
       packageName: setReleases.packageName,
       packageBytes: setReleases.packageBytes,
@@ -271,6 +273,7 @@ export async function recordSetRelease(
     releasedBy: number
     releasedAt: Date
     acknowledgements: AcknowledgementRecord[]
+    coverageWaivers: CoverageWaiverRecord[]
     package: { key: string; name: string; bytes: number; sha256: string; manifest: Record<string, unknown> }
     revisionIds: number[]
     mail: OutgoingMail[]
@@ -297,6 +300,7 @@ export async function recordSetRelease(
       releasedBy: r.releasedBy,
       releasedAt: r.releasedAt,
       acknowledgements: r.acknowledgements,
+      coverageWaivers: r.coverageWaivers,
       packageKey: r.package.key,
       packageName: r.package.name,
       packageBytes: r.package.bytes,
@@ -314,7 +318,7 @@ export async function recordSetRelease(
     await moveRevisions(tx, old.filter((id) => !r.revisionIds.includes(id)), ['released'], 'retired', 'release', r.releasedBy, `Replaced by the release of set ${r.setId}`)
   }
   await recordAudit(
-    { actorId: r.releasedBy, action: 'set.release', entityType: 'map_set', entityId: r.setId, details: { releaseId: row.id, packageSha256: r.package.sha256, acknowledgements: r.acknowledgements.map((a) => ({ key: a.key, reason: a.reason })), replacedSetId: prior[0]?.setId ?? null } },
+    { actorId: r.releasedBy, action: 'set.release', entityType: 'map_set', entityId: r.setId, details: { releaseId: row.id, packageSha256: r.package.sha256, acknowledgements: r.acknowledgements.map((a) => ({ key: a.key, reason: a.reason })), coverageWaivers: r.coverageWaivers.map((w) => ({ key: w.key, reason: w.reason })), replacedSetId: prior[0]?.setId ?? null } },
     tx,
   )
   await enqueueMail(r.mail, tx)

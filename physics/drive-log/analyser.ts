@@ -12,6 +12,7 @@ import { createEventDetector } from './events'
 import { createOccupancy } from './occupancy'
 import { createReservoir } from './reservoir'
 import { createSeries } from './series'
+import { createWheelCombiner, DEFAULT_DRIVE_TRACK_WIDTH_M, type WheelCombiner } from './wheel-speed'
 import { resolveThresholds } from './thresholds'
 import type { AnalysisResult, EventPoint, LogAnalyserOptions, LogSample } from './types'
 
@@ -36,8 +37,10 @@ function checkAxis(name: string, axis: readonly number[]): void {
 
 /**
  * Creates an analyser. Slip per sample follows SAE J670 / ISO 8855 through the physics `slipRatio`
- * (κ = (ΩR − V)/max(|V|, 0.5 m/s)) for each logged drive wheel; the sample's slip is the wheel value of
- * largest magnitude, so one wheel spinning on an open differential is not averaged away.
+ * (κ = (ΩR − V)/max(|V|, 0.5 m/s)) for each judged drive-wheel speed: side wheels corrected for the turn by
+ * yaw rate, or a left/right pair averaged (`wheel-speed.ts`), then divided by the radius calibration's ratio.
+ * The sample's slip is the judged value of largest magnitude. Events need |κ| and |wheel − road| beyond their
+ * thresholds above the minimum speed, with hysteresis on the way out (`thresholds.ts`).
  * Throws {@link LogFormatError} when time is not finite or goes backwards; PhysicsInputError for bad options.
  * @example const a = createLogAnalyser({ surface: 'wet-asphalt' }); a.push(sample); a.finish().events
  */
@@ -58,7 +61,25 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
   let distM = 0, drawnJ = 0, regenJ = 0, hasPower = false, maxRoad = -Infinity
   let moving = 0, slipMin = Infinity, slipMax = -Infinity, sumAbs = 0, maxAbs = 0
   let finished = false
-  let eventOpen = false
+  let openKind: 'spin' | 'lock' | null = null
+  let yawCorrected = 0, leftRightMean = 0, uncorrected = 0
+  let turn: 'yaw' | 'mean' | 'none' = 'none'
+  const trackWidthM = opts.trackWidthM === undefined ? DEFAULT_DRIVE_TRACK_WIDTH_M : requirePositive('trackWidthM', opts.trackWidthM)
+  let combiner: WheelCombiner | null = null
+  let judged = new Float64Array(0)
+  const cal = opts.radiusCalibration ?? null
+  // ρ = R_nom/R_eff from the calibration pass: the wheel speeds the tyre really has are v_w/ρ.
+  const wheelScale = cal && cal.status === 'applied' && cal.ratio !== null && cal.ratio > 0 ? 1 / cal.ratio : 1
+  const spinExit = th.spinSlip * th.exitFraction, lockExit = th.lockSlip * th.exitFraction
+
+  /** Spin or lock with hysteresis: entry needs |κ| and |Δv| beyond the entry thresholds, staying in only the exit ones. */
+  function eventState(k: number, dvKmh: number): 'spin' | 'lock' | null {
+    if (openKind === 'spin' && k > spinExit && dvKmh > th.exitSpeedDiffKmh) return 'spin'
+    if (openKind === 'lock' && k < -lockExit && -dvKmh > th.exitSpeedDiffKmh) return 'lock'
+    if (k > th.spinSlip && dvKmh >= th.minSpeedDiffKmh) return 'spin'
+    if (k < -th.lockSlip && -dvKmh >= th.minSpeedDiffKmh) return 'lock'
+    return null
+  }
   const point: EventPoint = { timeS: 0, slip: 0, roadSpeedKmh: 0, accelPedalPct: 0, brakePedalPct: null }
   const seriesRow = [NaN, NaN, NaN, NaN, NaN, NaN]
 
@@ -74,14 +95,17 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
     let wheelKmh = NaN
     if (fin(road) && fin(pedal)) {
       const ws = s.wheelSpeedsKmh
+      if (combiner === null || combiner.size !== ws.length) { combiner = createWheelCombiner(opts.wheelChannels ?? ws.map(() => undefined), trackWidthM); judged = new Float64Array(combiner.size) }
+      turn = combiner.combine(ws, s.yawRateRadS, judged, wheelScale)
       const vRoad = road / 3.6 // m/s, as kmhToMps
       const den = Math.max(Math.abs(vRoad), SLIP_SPEED_FLOOR_MPS)
-      for (let w = 0; w < ws.length; w++) {
-        if (!fin(ws[w])) continue
+      for (let w = 0; w < judged.length; w++) {
+        const v = judged[w]
+        if (!fin(v)) continue
         // physics slipRatio(kmhToMps(wheel), kmhToMps(road)) written out: this loop runs per wheel per row,
         // and its argument checks are already done here (both finite). A unit test pins the two equal.
-        const k = (ws[w] / 3.6 - vRoad) / den
-        if (!(Math.abs(k) <= Math.abs(kappa))) { kappa = k; wheelKmh = ws[w] }
+        const k = (v / 3.6 - vRoad) / den
+        if (!(Math.abs(k) <= Math.abs(kappa))) { kappa = k; wheelKmh = v }
       }
     }
     const complete = kappa === kappa
@@ -91,7 +115,7 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
     else {
       const dt = t - prevT
       if (dt === 0) dup++
-      if (dt > maxGapS) { gapCount++; gapS += dt; if (eventOpen) { detector.interrupt(); eventOpen = false } }
+      if (dt > maxGapS) { gapCount++; gapS += dt; if (openKind !== null) { detector.interrupt(); openKind = null } }
       else {
         if (fin(road) && prevRoad === prevRoad) distM += (0.5 * (prevRoad + road) / 3.6) * dt
         if (power === power && prevPower === prevPower) {
@@ -103,13 +127,14 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
     }
     const brake = fin(s.brakePedalPct) ? s.brakePedalPct : NaN
     if (complete) {
+      if (turn === 'yaw') yawCorrected++; else if (turn === 'mean') leftRightMean++; else uncorrected++
       const isMoving = Math.max(Math.abs(road), Math.abs(wheelKmh)) >= th.minSpeedKmh
-      const state = isMoving ? (kappa > th.spinSlip ? 'spin' : kappa < -th.lockSlip ? 'lock' : null) : null
-      if (state !== null || eventOpen) { // most samples are in band with no event open: skip the call
+      const state = isMoving ? eventState(kappa, wheelKmh - road) : null
+      if (state !== null || openKind !== null) { // most samples are in band with no event open: skip the call
         point.timeS = t; point.slip = kappa; point.roadSpeedKmh = road; point.accelPedalPct = pedal
         point.brakePedalPct = brake === brake ? brake : null
         detector.sample(state, point, line)
-        eventOpen = state !== null
+        openKind = state
       }
       if (isMoving) {
         moving++
@@ -120,7 +145,7 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
         if (kappa > slipMax) slipMax = kappa
         reservoir.add(a)
       }
-    } else { incomplete++; if (eventOpen) { detector.interrupt(); eventOpen = false } }
+    } else { incomplete++; if (openKind !== null) { detector.interrupt(); openKind = null } }
     if (road > maxRoad) maxRoad = road
     // Occupancy state held until the next sample: drive by accelerator, regen by brake with the accelerator released.
     const occOk = complete && (kind === 'drive' || (brake === brake && pedal <= releasedPct))
@@ -163,6 +188,8 @@ export function createLogAnalyser(opts: LogAnalyserOptions = {}): LogAnalyser {
         quantiles: reservoir.exact ? 'exact' : 'reservoir',
       },
       thresholds: th,
+      turns: { yawCorrected, leftRightMean, uncorrected, trackWidthM },
+      calibration: cal,
       events: detector.events.slice(),
       eventsDropped: detector.dropped,
       shortExcursions: detector.short,

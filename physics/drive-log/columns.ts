@@ -1,6 +1,6 @@
 /**
  * The drive-log column model: which columns Mapwright reads, their units, and the exact factor that
- * converts each one to the analyser's working unit (s, km/h, %, N·m, rpm, A, V).
+ * converts each one to the analyser's working unit (s, km/h, %, N·m, rpm, A, V, rad/s).
  * Names are snake_case with the unit last. Factors for US units are from NIST SP 811 via `../units`.
  */
 import { KMH_PER_MPH, NM_PER_LBF_FT, mpsToKmh, radSToRpm, rpmToRadS } from '../units'
@@ -8,11 +8,14 @@ import { KMH_PER_MPH, NM_PER_LBF_FT, mpsToKmh, radSToRpm, rpmToRadS } from '../u
 /** A quantity the analyser consumes. Wheel channels are drive wheels: one combined or per wheel. */
 export type LogChannel =
   | 'time' | 'roadSpeed' | 'accelPedal' | 'brakePedal' | 'motorTorque' | 'motorSpeed'
-  | 'batteryCurrent' | 'batteryVoltage'
+  | 'batteryCurrent' | 'batteryVoltage' | 'yawRate'
   | 'wheel' | 'wheelLeft' | 'wheelRight' | 'wheelLeft2' | 'wheelRight2'
 
 /** The drive-wheel channels, in the order their speeds appear in `LogSample.wheelSpeedsKmh`. */
-export const WHEEL_CHANNELS: readonly LogChannel[] = Object.freeze(['wheel', 'wheelLeft', 'wheelRight', 'wheelLeft2', 'wheelRight2'])
+export const WHEEL_CHANNELS: readonly WheelChannel[] = Object.freeze(['wheel', 'wheelLeft', 'wheelRight', 'wheelLeft2', 'wheelRight2'])
+
+/** A drive-wheel channel. */
+export type WheelChannel = 'wheel' | 'wheelLeft' | 'wheelRight' | 'wheelLeft2' | 'wheelRight2'
 
 /** Channels a log must have; a wheel channel is required too (any one of {@link WHEEL_CHANNELS}). */
 export const REQUIRED_CHANNELS: readonly LogChannel[] = Object.freeze(['time', 'roadSpeed', 'accelPedal'])
@@ -37,7 +40,7 @@ const col = (name: string, channel: LogChannel, unit: string, factor: number, de
 const RAD_S_TO_KMH_PER_M = mpsToKmh(1)
 const RPM_TO_KMH_PER_M = mpsToKmh(rpmToRadS(1))
 
-const WHEELS: readonly [LogChannel, string, string][] = [
+const WHEELS: readonly [WheelChannel, string, string][] = [
   ['wheel', 'wheel_speed', 'drive-wheel speed (one value for the driven axle)'],
   ['wheelLeft', 'wheel_speed_left', 'left drive wheel speed'],
   ['wheelRight', 'wheel_speed_right', 'right drive wheel speed'],
@@ -49,9 +52,9 @@ const WHEELS: readonly [LogChannel, string, string][] = [
 export const DRIVE_LOG_COLUMNS: readonly LogColumnSpec[] = Object.freeze([
   col('time_s', 'time', 's', 1, 'time since the log started'),
   col('time_ms', 'time', 'ms', 1e-3, 'time since the log started'),
-  col('road_speed_kmh', 'roadSpeed', 'km/h', 1, 'vehicle speed over ground'),
-  col('road_speed_mph', 'roadSpeed', 'mph', KMH_PER_MPH, 'vehicle speed over ground'),
-  col('road_speed_mps', 'roadSpeed', 'm/s', mpsToKmh(1), 'vehicle speed over ground'),
+  col('road_speed_kmh', 'roadSpeed', 'km/h', 1, 'vehicle speed over ground, from a non-driven axle or satellite positioning (never from driven wheels)'),
+  col('road_speed_mph', 'roadSpeed', 'mph', KMH_PER_MPH, 'vehicle speed over ground, from a non-driven axle or satellite positioning (never from driven wheels)'),
+  col('road_speed_mps', 'roadSpeed', 'm/s', mpsToKmh(1), 'vehicle speed over ground, from a non-driven axle or satellite positioning (never from driven wheels)'),
   ...WHEELS.flatMap(([ch, base, what]) => [
     col(`${base}_kmh`, ch, 'km/h', 1, `${what}, tread surface speed Ω·R`),
     col(`${base}_mph`, ch, 'mph', KMH_PER_MPH, `${what}, tread surface speed Ω·R`),
@@ -66,6 +69,8 @@ export const DRIVE_LOG_COLUMNS: readonly LogColumnSpec[] = Object.freeze([
   col('motor_speed_rad_s', 'motorSpeed', 'rad/s', radSToRpm(1), 'motor shaft speed'),
   col('battery_current_a', 'batteryCurrent', 'A', 1, 'pack current, positive when discharging'),
   col('battery_voltage_v', 'batteryVoltage', 'V', 1, 'pack terminal voltage'),
+  col('yaw_rate_deg_s', 'yawRate', '°/s', Math.PI / 180, 'yaw rate, positive turning left (ISO 8855, z axis up)'),
+  col('yaw_rate_rad_s', 'yawRate', 'rad/s', 1, 'yaw rate, positive turning left (ISO 8855, z axis up)'),
 ])
 
 const BY_NAME: ReadonlyMap<string, LogColumnSpec> = new Map(DRIVE_LOG_COLUMNS.map((c) => [c.name, c]))

@@ -1,5 +1,5 @@
 /** Turns the text cells of one log row into a {@link LogSample}, with the line and column of any bad cell. */
-import { WHEEL_CHANNELS, type LogChannel } from './columns'
+import { WHEEL_CHANNELS, type LogChannel, type WheelChannel } from './columns'
 import { LogFormatError } from './errors'
 import type { LogLayout } from './header'
 import { EXACT_POW10, NOT_A_NUMBER as BAD, parseLogNumberIn } from './number-cell'
@@ -11,10 +11,10 @@ export type RowDecoder = (fields: readonly string[], line: number) => LogSample
 export type LineDecoder = (text: string, line: number) => LogSample
 
 // Fixed slots of the scratch vector; wheel speeds follow from WHEEL0 on.
-const TIME = 0, ROAD = 1, ACCEL = 2, BRAKE = 3, TORQUE = 4, MOTOR = 5, CURRENT = 6, VOLTAGE = 7, WHEEL0 = 8
+const TIME = 0, ROAD = 1, ACCEL = 2, BRAKE = 3, TORQUE = 4, MOTOR = 5, CURRENT = 6, VOLTAGE = 7, YAW = 8, WHEEL0 = 9
 const FIXED: readonly [LogChannel, number][] = [
   ['time', TIME], ['roadSpeed', ROAD], ['accelPedal', ACCEL], ['brakePedal', BRAKE],
-  ['motorTorque', TORQUE], ['motorSpeed', MOTOR], ['batteryCurrent', CURRENT], ['batteryVoltage', VOLTAGE],
+  ['motorTorque', TORQUE], ['motorSpeed', MOTOR], ['batteryCurrent', CURRENT], ['batteryVoltage', VOLTAGE], ['yawRate', YAW],
 ]
 
 /**
@@ -70,6 +70,7 @@ export function createRowDecoders(layout: LogLayout, delimiter = ','): { fromFie
     sample.motorSpeedRpm = v[MOTOR]
     sample.batteryCurrentA = v[CURRENT]
     sample.batteryVoltageV = v[VOLTAGE]
+    sample.yawRateRadS = v[YAW]
     for (let w = 0; w < wheels; w++) wheelSpeedsKmh[w] = v[WHEEL0 + w]
     sample.line = line
     return sample
@@ -143,6 +144,11 @@ export function createRowDecoders(layout: LogLayout, delimiter = ','): { fromFie
     return emit(line)
   }
   return { fromFields, fromLine }
+}
+
+/** The drive-wheel channels of a layout in the order their speeds fill `LogSample.wheelSpeedsKmh`. @example layoutWheelChannels(layout) // ['wheelLeft', 'wheelRight'] */
+export function layoutWheelChannels(layout: LogLayout): WheelChannel[] {
+  return WHEEL_CHANNELS.filter((ch) => layout.byChannel[ch] !== undefined)
 }
 
 /** The cells decoder of {@link createRowDecoders}. @example createRowDecoder(layout)(['0.02', '10', '10.4', '35'], 3).roadSpeedKmh // 10 */

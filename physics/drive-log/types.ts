@@ -3,6 +3,7 @@ import type { MapKind } from '../table'
 import type { DriveTyreParams } from '../drive-tyre'
 import type { Surface, SurfaceId } from '../surfaces'
 import type { LogColumnRef } from './errors'
+import type { WheelChannel } from './columns'
 
 /**
  * One logged instant in working units. NaN (or undefined for the optional fields) marks a missing
@@ -23,6 +24,8 @@ export interface LogSample {
   /** Pack current, A, positive when discharging. */
   batteryCurrentA?: number
   batteryVoltageV?: number
+  /** Yaw rate ψ̇, rad/s, positive turning left (ISO 8855: z axis up). */
+  yawRateRadS?: number
   /** 1-based line in the file (for error messages); defaults to sample count + 1. */
   line?: number
 }
@@ -35,6 +38,31 @@ export interface SlipThresholds {
   lockSlip?: number
   /** Shorter excursions are not reported as events, s. Default 0.1. */
   minDurationS?: number
+  /** An event ends when |κ| falls below this fraction of its entry threshold (hysteresis). Default 0.75. */
+  exitFraction?: number
+  /** An event also needs |wheel − road| above this to start, km/h. Default 2. */
+  minSpeedDiffKmh?: number
+  /** …and ends when |wheel − road| falls below this, km/h. Default 1. */
+  exitSpeedDiffKmh?: number
+  /** Slip is judged (events and statistics) only when road or wheel speed is at least this, km/h. Default 5. */
+  minSpeedKmh?: number
+}
+
+/** Outcome of the per-log effective-radius calibration (see `radius-calibration.ts`). */
+export interface RadiusCalibration {
+  /** 'applied': wheel speeds divided by `ratio`; 'rejected': beyond the bound, not applied; 'insufficient': too little data. */
+  status: 'applied' | 'rejected' | 'insufficient'
+  /** Wheel-to-road speed ratio ρ = R_nom/R_eff on straight, steady zero-torque stretches; null when there were none. */
+  ratio: number | null
+  /** R_eff/R_nom − 1 = 1/ρ − 1, %; null when there were no stretches. */
+  radiusChangePct: number | null
+  /** Qualifying time, s, and samples. */
+  seconds: number
+  samples: number
+  /** Largest |radiusChangePct| applied, %. */
+  boundPct: number
+  /** One sentence for the report page. */
+  reason: string
 }
 
 /** Options of {@link createLogAnalyser}. Nothing here is mutated. */
@@ -60,6 +88,12 @@ export interface LogAnalyserOptions {
   maxEvents?: number
   /** The time column, for the position in a time-order error. */
   timeColumn?: LogColumnRef
+  /** Channel of each `wheelSpeedsKmh` entry (from the layout); unnamed entries are judged as independent wheels. */
+  wheelChannels?: readonly WheelChannel[]
+  /** Drive-axle track width for the yaw-rate correction, m. Default 1.8. */
+  trackWidthM?: number
+  /** A calibration from a first pass over the same log; applied when its status is 'applied'. */
+  radiusCalibration?: RadiusCalibration
 }
 
 /** Conditions at one instant of an event. */
@@ -123,7 +157,7 @@ export interface AnalysisResult {
   /** From V·I by the trapezoid rule; null when the log has no voltage or current. */
   energy: { drawnKWh: number; regeneratedKWh: number; netKWh: number } | null
   slip: {
-    /** Samples moving faster than the slip floor (road or wheel ≥ 1.8 km/h); the statistics use these. */
+    /** Samples with road or wheel speed ≥ thresholds.minSpeedKmh (5 km/h); the statistics use these. */
     movingSamples: number
     min: number | null
     max: number | null
@@ -134,7 +168,20 @@ export interface AnalysisResult {
     p99Abs: number | null
     quantiles: 'exact' | 'reservoir'
   }
-  thresholds: { spinSlip: number; lockSlip: number; minDurationS: number; minSpeedKmh: number; source: 'option' | 'surface' | 'default' }
+  thresholds: {
+    spinSlip: number
+    lockSlip: number
+    exitFraction: number
+    minSpeedDiffKmh: number
+    exitSpeedDiffKmh: number
+    minDurationS: number
+    minSpeedKmh: number
+    source: 'option' | 'surface' | 'default'
+  }
+  /** How the wheel speeds were judged: samples corrected by yaw rate, by the left/right mean, or neither. */
+  turns: { yawCorrected: number; leftRightMean: number; uncorrected: number; trackWidthM: number }
+  /** The radius calibration applied (or refused) on this log; null when none was run. */
+  calibration: RadiusCalibration | null
   events: SlipEvent[]
   /** Events beyond maxEvents, counted only. */
   eventsDropped: number

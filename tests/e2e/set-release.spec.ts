@@ -62,9 +62,15 @@ test('a set from build to frozen release: test package, a report from a phone, a
   const acks = await lead.locator('[data-testid^="ack-traction:"]').all()
   expect(acks.length).toBeGreaterThan(0)
   for (const a of acks) await a.fill('Closed-course running only for this build; drivers briefed')
+  // One report covers one surface × load case; the lead waives the other release conditions, each with a reason.
+  await expect(lead.getByTestId('set-gate-coverage')).toHaveAttribute('data-met', 'false')
+  const waivers = await lead.locator('[data-testid^="waive-coverage:"]').all()
+  expect(waivers.length).toBeGreaterThan(0)
+  for (const w of waivers) await w.fill('Only the wet pad was open; snow runs are booked for the next build')
   await lead.getByRole('button', { name: /^Release Set \d+$/ }).click()
   await expect(lead.getByTestId('set-status')).toHaveText('Released', { timeout: 30_000 })
   await expect(lead.getByTestId('set-acknowledgements')).toContainText('Closed-course running only for this build')
+  await expect(lead.getByTestId('set-coverage')).toContainText('waived: “Only the wet pad was open')
 
   // The release package: the manifest's hashes match its files; two downloads are the same bytes, the SHA-256 shown.
   const href = (await lead.getByTestId('release-package-link').getAttribute('href'))!

@@ -63,6 +63,19 @@ export async function fileSetReport(setId: number, driverCookie: string, over: R
   return res.body.report.id as number
 }
 
+/**
+ * One clean report per release condition of the set (each declared surface × load case), so the gate's coverage
+ * condition is met; returns the report ids in the order of the gate's coverage grid.
+ */
+export async function fileCoveringReports(setId: number, driverCookie: string, over: Record<string, unknown> = {}) {
+  const view = await getSetView(setId, driverCookie)
+  if (view.status !== 200) throw new Error(`fixture set view: ${JSON.stringify(view.body)}`)
+  const ids: number[] = []
+  for (const c of view.body.gate.coverage as { surface: string; loadCase: string }[])
+    ids.push(await fileSetReport(setId, driverCookie, { surface: c.surface, loadCase: c.loadCase, payloadKg: c.loadCase === 'empty' ? 0 : 18_000, ...over }))
+  return ids
+}
+
 export const getSetView = (id: number, cookie: string) => call(setRoute.GET, { cookie, params: { id: String(id) } })
 export const releaseSet = (id: number, cookie: string, acknowledgements: { key: string; reason: string }[] = []) => call(releaseRoute.POST, { method: 'POST', cookie, params: { id: String(id) }, body: { acknowledgements } })
 export const withdrawSet = (id: number, cookie: string, reason: string) => call(withdrawRoute.POST, { method: 'POST', cookie, params: { id: String(id) }, body: { reason } })

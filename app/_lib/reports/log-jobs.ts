@@ -133,7 +133,8 @@ async function analyseLog(logId: number, hooks: { checkpoint: () => void; onProg
   if (!part) throw new Error(`log ${logId}: set ${set.id} holds no map`)
   const basis: AnalysisBasis = { setId: set.id, setNumber: set.number, paramVersionId: set.paramVersion.id, paramVersion: set.paramVersion.number, occupancyMap: part.kind, occupancyRevisionId: part.revisionId }
   hooks.checkpoint()
-  const result = await ingestLog(await getObjectStream(log.objectKey), {
+  // Opened twice: the radius calibration reads the log once before the analysis.
+  const result = await ingestLog(() => getObjectStream(log.objectKey), {
     mapping: log.mapping,
     wheelRadiusM: set.paramVersion.params.wheelRadiusM,
     map: { rowAxis: part.table.rowAxis, colAxis: part.table.colAxis },

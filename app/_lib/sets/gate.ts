@@ -6,7 +6,8 @@
  * (map × surface × load case) with a reason; (c″) on a tractor, no lift-off cell of the regen map takes
  * the drive axle's lateral capacity below the design lateral acceleration (the jackknife finding), or
  * the lead acknowledges it likewise; (c′) both maps export exactly to the C header; (d) at least one drive report was filed on this
- * exact set; (e) no open safety concern sits on any of its revisions, whichever set it was
+ * exact set; (d′) the set's drive reports together cover every release condition (surface × load case), or the
+ * lead waives each uncovered one with a reason; (e) no open safety concern sits on any of its revisions, whichever set it was
  * found in; (f) when the version declares battery corners and a minimum lift-off deceleration, no
  * corner takes the regen map's lift-off deceleration below it where the nominal pack reaches it
  * (docs/physics.md §7a). Pure: the caller loads the data.
@@ -47,10 +48,21 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'jackknife' | 'lift-off' | 'drive-report' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'jackknife' | 'lift-off' | 'drive-report' | 'coverage' | 'safety'
   met: boolean
   summary: string
   details: string[]
+}
+
+/** One release condition (surface × load case) and the drive-report evidence for it. */
+export interface CoverageCell {
+  key: string
+  surface: SurfaceId
+  loadCase: LoadCase
+  /** Drive reports on the set driven on this surface with this load case. */
+  reports: number
+  /** The lead's reason when no report covers it and it was waived; null otherwise. */
+  waiver: string | null
 }
 
 export interface SetGateResult {
@@ -59,9 +71,26 @@ export interface SetGateResult {
   exceptions: SetTractionException[]
   /** Keys of exceptions without an acknowledgement. */
   unacknowledged: string[]
+  /** Every release condition, in the order the parameter version declares them (surface-major). */
+  coverage: CoverageCell[]
+  /** Keys of coverage cells with no report and no waiver. */
+  uncovered: string[]
 }
 
 export const exceptionKey = (kind: MapKind, surface: SurfaceId, loadCase: LoadCase, finding: SetTractionException['finding'] = 'traction') => `${finding}:${kind}:${surface}:${loadCase}`
+export const coverageKey = (surface: SurfaceId, loadCase: LoadCase) => `coverage:${surface}:${loadCase}`
+
+/** The coverage grid: reports per declared surface × load case, and the waivers (with a reason) of empty cells. */
+export function setCoverage(c: ReleaseConditions, reports: readonly { surface: SurfaceId; loadCase: LoadCase }[], waivers: readonly Acknowledgement[]): CoverageCell[] {
+  return c.surfaces.flatMap((surface) =>
+    c.loadCases.map((loadCase) => {
+      const key = coverageKey(surface, loadCase)
+      const n = reports.filter((r) => r.surface === surface && r.loadCase === loadCase).length
+      const w = n === 0 ? waivers.find((a) => a.key === key && a.reason.trim()) : undefined
+      return { key, surface, loadCase, reports: n, waiver: w ? w.reason.trim() : null }
+    }),
+  )
+}
 
 export function setTractionExceptions(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetTractionException[] {
   return parts.flatMap((p) => [
@@ -74,8 +103,8 @@ export function setGate(input: {
   parts: SetGatePart[]
   vehicle: VehicleParams
   conditions: ReleaseConditions
-  /** Reports filed on this set. */
-  reports: number
+  /** Reports filed on this set: the surface and load case each was driven with. */
+  reports: readonly { surface: SurfaceId; loadCase: LoadCase }[]
   /** Open safety concerns on any revision of the set: report id and the set it was filed on. */
   concerns: { reportId: number; setNumber: number }[]
   acknowledgements: Acknowledgement[]
@@ -110,6 +139,10 @@ export function setGate(input: {
   const cells = traction.reduce((n, e) => n + e.cells.length, 0)
 
   const liftOff = liftOffCondition(parts, vehicle, conditions)
+  const coverage = setCoverage(conditions, input.reports, input.acknowledgements)
+  const uncovered = coverage.filter((c) => c.reports === 0 && c.waiver === null).map((c) => c.key)
+  const waived = coverage.filter((c) => c.waiver !== null).length
+  const nReports = input.reports.length
 
   const all: SetGateCondition[] = [
     {
@@ -164,9 +197,18 @@ export function setGate(input: {
     ...(liftOff ? [liftOff] : []),
     {
       id: 'drive-report',
-      met: input.reports > 0,
-      summary: input.reports === 0 ? 'No drive report has been filed on this set' : `${input.reports} drive report(s) on this set`,
+      met: nReports > 0,
+      summary: nReports === 0 ? 'No drive report has been filed on this set' : `${nReports} drive report(s) on this set`,
       details: [],
+    },
+    {
+      id: 'coverage',
+      met: uncovered.length === 0,
+      summary:
+        uncovered.length === 0
+          ? `Drive reports cover every release condition (${coverage.length})${waived ? `, ${waived} waived by the lead` : ''}`
+          : `${uncovered.length} of ${coverage.length} release condition(s) have no drive report and no waiver`,
+      details: coverage.filter((c) => uncovered.includes(c.key)).map((c) => `${surfaceLabel(c.surface)}, ${loadCaseLabel(c.loadCase)}: no drive report`),
     },
     {
       id: 'safety',
@@ -175,7 +217,7 @@ export function setGate(input: {
       details: input.concerns.map((c) => `drive report ${c.reportId} (set ${c.setNumber})`),
     },
   ]
-  return { ok: all.every((c) => c.met), conditions: all, exceptions, unacknowledged }
+  return { ok: all.every((c) => c.met), conditions: all, exceptions, unacknowledged, coverage, uncovered }
 }
 
 const fmt = (x: number) => x.toFixed(2)

@@ -2,7 +2,7 @@ import 'server-only'
 import { strToU8, zipSync, type Zippable } from 'fflate'
 import { sha256Hex, verifiedChecksum } from '@/db/checksum'
 import { SAFETY_CAUTION, toCHeader, toCsv, toJson, type MapKind, type MapTable } from '@/maps'
-import type { AcknowledgementRecord, ReleaseConditions } from '@/db/schema'
+import type { AcknowledgementRecord, CoverageWaiverRecord, ReleaseConditions } from '@/db/schema'
 import type { VehicleParams } from '@/physics/vehicle'
 
 export type PackageMode = 'release' | 'test'
@@ -24,6 +24,8 @@ export interface PackageRecord {
   }[]
   paramVersion: { number: number; reason: string; createdAt: string; params: VehicleParams; releaseConditions: ReleaseConditions }
   acknowledgements: AcknowledgementRecord[]
+  /** Release conditions no drive report covered, waived by the lead (absent or empty: none). */
+  coverageWaivers?: CoverageWaiverRecord[]
   evidenceReportIds: number[]
   /** Release: who released and when. Test: who asked for the package and when it was built. */
   madeBy: string
@@ -77,6 +79,8 @@ export function buildSetPackage(rec: PackageRecord, mode: PackageMode) {
     checksumAlgorithm: 'revision checksum: SHA-256 of the canonical JSON of the table (docs/map-formats.md); file sha256: SHA-256 of the file bytes',
     parameterVersion: { number: rec.paramVersion.number, reason: rec.paramVersion.reason, createdAt: rec.paramVersion.createdAt, file: `parameters-v${rec.paramVersion.number}.json` },
     acknowledgements: rec.acknowledgements.map((a) => ({ key: a.key, map: a.mapKind, revisionId: a.revisionId, surface: a.surface, loadCase: a.loadCase, reason: a.reason, by: a.byName, at: a.at, ...(a.cells !== undefined ? { cells: a.cells } : {}) })),
+    // Only when there are any, so packages without waivers keep the bytes they always had.
+    ...(rec.coverageWaivers?.length ? { coverageWaivers: rec.coverageWaivers.map((w) => ({ key: w.key, surface: w.surface, loadCase: w.loadCase, reason: w.reason, by: w.byName, at: w.at })) } : {}),
     evidenceReports: rec.evidenceReportIds,
     [test ? 'builtBy' : 'releasedBy']: rec.madeBy,
     [test ? 'builtAt' : 'releasedAt']: rec.madeAt,

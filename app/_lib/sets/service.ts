@@ -9,7 +9,7 @@ import { getParamVersionByNumber, latestParamVersion } from '@/db/queries/param-
 import { listReports } from '@/db/queries/reports'
 import { listRevisionEvents } from '@/db/queries/review'
 import { createSet, getSet, openSafetyConcerns, recordSetRelease, recordSetWithdrawal, SET_STATUS_LABELS, type MapSetFull, type SetPart } from '@/db/queries/sets'
-import type { Acknowledgement, AcknowledgementRecord } from '@/db/schema'
+import type { Acknowledgement, AcknowledgementRecord, CoverageWaiverRecord } from '@/db/schema'
 import { crossChecks, limitsFromVehicle, validate, type CrossCheck, type Finding } from '@/maps'
 import type { SessionUser } from '../auth/session'
 import { ConflictError, ForbiddenError, HttpError, NotFoundError, ValidationError, isUniqueViolation } from '../http/errors'
@@ -31,11 +31,19 @@ const partsOf = (set: MapSetFull): SetPart[] => [set.drive, set.regen].filter((p
 
 const gateParts = (set: MapSetFull): SetGatePart[] => partsOf(set).map((p) => ({ kind: p.kind, revisionId: p.revisionId, number: p.number, mapName: p.mapName, state: p.state, table: p.table }))
 
-/** The gate of a set as it stands, with these acknowledgements (by default those its latest release recorded). */
-export async function setGateFor(set: MapSetFull, acknowledgements: Acknowledgement[] = set.releases[0]?.acknowledgements ?? []): Promise<SetGateResult> {
+/**
+ * The gate of a set as it stands, with these acknowledgements and coverage waivers (by default those its latest
+ * release recorded). Traction keys (`traction:…`) acknowledge exceptions; coverage keys (`coverage:…`) waive conditions.
+ */
+export async function setGateFor(set: MapSetFull, acknowledgements: Acknowledgement[] = recordedAcks(set)): Promise<SetGateResult> {
   const reports = await listReports({ setId: set.id })
   const concerns = await openSafetyConcerns(partsOf(set).map((p) => p.revisionId))
-  return setGate({ parts: gateParts(set), vehicle: set.paramVersion.params, conditions: set.paramVersion.releaseConditions, reports: reports.length, concerns, acknowledgements })
+  return setGate({ parts: gateParts(set), vehicle: set.paramVersion.params, conditions: set.paramVersion.releaseConditions, reports, concerns, acknowledgements })
+}
+
+const recordedAcks = (set: MapSetFull): Acknowledgement[] => {
+  const r = set.releases[0]
+  return r ? [...r.acknowledgements, ...r.coverageWaivers] : []
 }
 
 export interface SetFindings {
@@ -77,7 +85,7 @@ async function approversOf(revisionId: number): Promise<string[]> {
   return [...new Set(events.filter((e) => e.action === 'approve').map((e) => e.actorName))]
 }
 
-async function packageRecord(set: MapSetFull, acknowledgements: AcknowledgementRecord[], madeBy: string, madeAt: Date): Promise<PackageRecord> {
+async function packageRecord(set: MapSetFull, acknowledgements: AcknowledgementRecord[], madeBy: string, madeAt: Date, coverageWaivers: CoverageWaiverRecord[] = []): Promise<PackageRecord> {
   const reports = await listReports({ setId: set.id })
   return {
     program: { id: set.programId, name: set.programName },
@@ -87,6 +95,7 @@ async function packageRecord(set: MapSetFull, acknowledgements: AcknowledgementR
     ),
     paramVersion: { number: set.paramVersion.number, reason: set.paramVersion.reason, createdAt: set.paramVersion.createdAt.toISOString(), params: set.paramVersion.params, releaseConditions: set.paramVersion.releaseConditions },
     acknowledgements,
+    coverageWaivers,
     evidenceReportIds: reports.map((r) => r.id).sort((a, b) => a - b),
     madeBy,
     madeAt: madeAt.toISOString(),
@@ -109,15 +118,20 @@ export async function releaseSet(set: MapSetFull, actor: SessionUser, acks: Ackn
   if (set.status === 'withdrawn')
     throw new ConflictError(`${label(set)}'s release was withdrawn and its revisions with it; to release these maps again, save them as new revisions, have them approved and make a set of those`)
   const gate = await setGateFor(set, acks)
-  const unknown = acks.filter((a) => !gate.exceptions.some((e) => e.key === a.key))
-  if (unknown.length) throw new ValidationError(`acknowledgements: ${unknown.map((a) => a.key).join(', ')} match no exception of this set`)
+  // A waiver is for a condition no report covers; one for a covered condition would record a reason for nothing.
+  const waivable = new Set(gate.coverage.filter((c) => c.reports === 0).map((c) => c.key))
+  const unknown = acks.filter((a) => !gate.exceptions.some((e) => e.key === a.key) && !waivable.has(a.key))
+  if (unknown.length) throw new ValidationError(`acknowledgements: ${unknown.map((a) => a.key).join(', ')} match no exception or uncovered release condition of this set`)
   if (!gate.ok) throw new ConflictError('The release gate is not passed: ' + gate.conditions.filter((c) => !c.met).map((c) => c.summary).join('; '), { gate })
   const at = new Date()
   const records: AcknowledgementRecord[] = gate.exceptions.map((e) => {
     const a = acks.find((x) => x.key === e.key)!
     return { key: e.key, reason: a.reason.trim(), mapKind: e.mapKind, revisionId: e.revisionId, surface: e.surface, loadCase: e.loadCase, cells: e.cells.length, byId: actor.id, byName: actor.name, at: at.toISOString() }
   })
-  const pkg = buildSetPackage(await packageRecord(set, records, actor.name, at), 'release')
+  const waivers: CoverageWaiverRecord[] = gate.coverage
+    .filter((c) => c.waiver !== null)
+    .map((c) => ({ key: c.key, reason: c.waiver!, surface: c.surface, loadCase: c.loadCase, byId: actor.id, byName: actor.name, at: at.toISOString() }))
+  const pkg = buildSetPackage(await packageRecord(set, records, actor.name, at, waivers), 'release')
   const key = `packages/program-${set.programId}/set-${set.number}/${at.getTime()}-${randomUUID()}.zip`
   await putObjectStream(key, Readable.from([Buffer.from(pkg.bytes)]), 'application/zip')
   const parts = partsOf(set)
@@ -133,6 +147,7 @@ export async function releaseSet(set: MapSetFull, actor: SessionUser, acks: Ackn
         releasedBy: actor.id,
         releasedAt: at,
         acknowledgements: records,
+        coverageWaivers: waivers,
         package: { key, name: pkg.filename, bytes: pkg.bytes.length, sha256: pkg.sha256, manifest: pkg.manifest },
         revisionIds: parts.map((p) => p.revisionId),
         mail: [{ to, subject: `Released: ${what}`, text: `${actor.name} released ${what} (${parts.map((p) => `${p.mapName} r${p.number}`).join(', ')}, parameter version ${set.paramVersion.number}).\n\nPackage SHA-256: ${pkg.sha256}\nOpen: ${appUrl(`/sets/${set.id}`)}\n` }],

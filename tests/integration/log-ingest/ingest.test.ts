@@ -42,27 +42,30 @@ describe('ingestLog (streaming) equals a one-shot parse', () => {
     const deg = bytes.indexOf(0xb0) // second byte of "°"
     const digit = text.indexOf('.', 20_000) + 1
     const cuts = [1, 7, crlf + 1, deg, digit, 65_536, 65_537, 100_003]
-    expect(await ingestLog(streamOf(bytes, cuts), OPTS)).toEqual(oneShot)
+    // A source opened twice reads like the text path: radius calibration first, then the analysis.
+    expect(await ingestLog(() => streamOf(bytes, cuts), OPTS)).toEqual(oneShot)
+    // A stream can be read once only: no calibration, as the text path without it.
+    expect(await ingestLog(streamOf(bytes, cuts), OPTS)).toEqual({ ...ingestLogText(text, { ...OPTS, calibrateRadius: false }), calibration: null })
   })
 
   it('for one-byte chunks at the start and random cut points (property)', async () => {
     await fc.assert(fc.asyncProperty(fc.array(fc.nat(bytes.length), { maxLength: 40 }), async (cuts) => {
-      expect(await ingestLog(streamOf(bytes, [...cuts, 1, 2, 3, 4, 5]), OPTS)).toEqual(oneShot)
+      expect(await ingestLog(() => streamOf(bytes, [...cuts, 1, 2, 3, 4, 5]), OPTS)).toEqual(oneShot)
     }), { numRuns: 15 })
   })
 
   it('from a web ReadableStream and from an async generator of chunks', async () => {
-    const web = new ReadableStream<Uint8Array>({ start(c) { c.enqueue(bytes.subarray(0, 333)); c.enqueue(bytes.subarray(333)); c.close() } })
+    const web = () => new ReadableStream<Uint8Array>({ start(c) { c.enqueue(bytes.subarray(0, 333)); c.enqueue(bytes.subarray(333)); c.close() } })
     expect(await ingestLog(web, OPTS)).toEqual(oneShot)
     const gen = { durationS: 240, seed: 7, chunkBytes: 1000 } as const
-    expect(await ingestLog(generateLogChunks(gen), OPTS)).toEqual(ingestLogText(generateLog(gen).csv, OPTS))
+    expect(await ingestLog(() => generateLogChunks(gen), OPTS)).toEqual(ingestLogText(generateLog(gen).csv, OPTS))
   })
 
   it('lines with quoted cells (commas, doubled quotes, a quoted number) go through full CSV rules', async () => {
     const quotedText = text.split('\r\n').map((l, i) => (i > 0 && l && i % 97 === 0 ? l.replace(/,x$/, ',"a, ""b"", c"').replace(/^([^,]*),/, '"$1",') : l)).join('\r\n')
     expect(quotedText).toContain('"a, ""b"", c"')
     const bytesQ = new TextEncoder().encode(quotedText)
-    expect(await ingestLog(streamOf(bytesQ, [4099, 65_536, 200_001]), OPTS)).toEqual(ingestLogText(quotedText, OPTS))
+    expect(await ingestLog(() => streamOf(bytesQ, [4099, 65_536, 200_001]), OPTS)).toEqual(ingestLogText(quotedText, OPTS))
   })
 
   it('a quoted cell spanning lines is one record; error lines stay physical lines after it', async () => {
@@ -82,6 +85,11 @@ describe('ingestLog (streaming) equals a one-shot parse', () => {
     for (let i = 1; i < seen.length; i++) { expect(seen[i][0]).toBeGreaterThanOrEqual(seen[i - 1][0]); expect(seen[i][1]).toBeGreaterThanOrEqual(seen[i - 1][1]) }
     expect(seen.at(-1)).toEqual([bytes.length, r.samples])
     expect(r.bytes).toBe(bytes.length)
+    // Read twice (calibration, then analysis): each pass reports half its bytes, so progress still rises once to the size.
+    const twice: number[] = []
+    await ingestLog(() => streamOf(bytes, [50_000, 150_000, 300_000]), { ...OPTS, onProgress: (b) => twice.push(b) })
+    for (let i = 1; i < twice.length; i++) expect(twice[i]).toBeGreaterThanOrEqual(twice[i - 1])
+    expect(twice.at(-1)).toBe(bytes.length)
   })
 })
 
@@ -123,5 +131,33 @@ describe('ingestLog refuses bad input with a clear LogFormatError', () => {
     expect(r.samples).toBe(2)
     expect(r.maxRoadSpeedKmh).toBeCloseTo(16.09344, 12)
     expect(r.slip.max).toBeCloseTo(0.1, 12)
+  })
+})
+
+describe('a worn tyre in a turn, read from CSV (radius calibration and yaw-rate correction end to end)', () => {
+  // 30 s coasting straight at 60 km/h, then 10 s in a left turn of 100 m radius (ψ̇ = 16.667/100 = 0.1667 rad/s
+  // = 9.549 °/s) on light torque. Wheels logged with the nominal radius of a tyre whose effective radius is 4 %
+  // smaller than nominal (ρ = 1.04); each side wheel is off the axle centre by ψ̇·b/2 = 0.15 m/s = 0.54 km/h (b = 1.8 m).
+  const rows = ['time_s,road_speed_kmh,wheel_speed_left_kmh,wheel_speed_right_kmh,accel_pedal_pct,motor_torque_nm,yaw_rate_deg_s']
+  for (let i = 0; i <= 400; i++) {
+    const t = i / 10
+    const turning = t > 30
+    const yawDeg = turning ? (60 / 3.6 / 100) * (180 / Math.PI) : 0
+    const half = turning ? 0.54 : 0
+    rows.push([t.toFixed(1), 60, ((60 - half) * 1.04).toFixed(6), ((60 + half) * 1.04).toFixed(6), turning ? 10 : 0, turning ? 200 : 0, yawDeg.toFixed(6)].join(','))
+  }
+  const csv = rows.join('\n') + '\n'
+
+  it('calibrates the radius on the straight, corrects the turn by yaw rate, and reads no slip', async () => {
+    const r = ingestLogText(csv)
+    expect(r.calibration).toMatchObject({ status: 'applied' })
+    expect(r.calibration?.ratio).toBeCloseTo(1.04, 9)
+    expect(r.turns.yawCorrected).toBe(401)
+    expect(r.slip.maxAbs).toBeLessThan(1e-5) // rounding of the CSV cells only
+    expect(r.events).toEqual([])
+    expect(await ingestLog(() => Readable.from([Buffer.from(csv)]))).toEqual(r)
+  })
+  it('without the calibration the same log reads 4 % slip everywhere', () => {
+    expect(ingestLogText(csv, { calibrateRadius: false }).slip.p50Abs).toBeCloseTo(0.04, 5)
   })
 })

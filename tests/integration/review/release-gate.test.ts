@@ -4,9 +4,9 @@ import { getDb } from '@/db/client'
 import { paramVersions } from '@/db/schema'
 import { SMALL_DRIVE } from '@/tests/support/fixtures'
 import { GENTLE, stateOf } from '@/tests/support/review-fixtures'
-import { approve, fileSetReport, gateMet, getSetView, makeSet, releaseSet, setSetup } from '@/tests/support/set-fixtures'
+import { approve, fileCoveringReports, gateMet, getSetView, makeSet, releaseSet, setSetup } from '@/tests/support/set-fixtures'
 
-const ALL_MET = { parts: true, approved: true, validation: true, exportable: true, traction: true, jackknife: true, 'drive-report': true, safety: true }
+const ALL_MET = { parts: true, approved: true, validation: true, exportable: true, traction: true, jackknife: true, 'drive-report': true, coverage: true, safety: true }
 
 /** A set whose two revisions are approved and which has a clean drive report, so only the condition under test can fail. */
 async function readySet(opts: { drive?: typeof GENTLE; report?: boolean; approveRegen?: boolean } = {}) {
@@ -14,7 +14,7 @@ async function readySet(opts: { drive?: typeof GENTLE; report?: boolean; approve
   await approve(s, s.driveRevisionId)
   if (opts.approveRegen !== false) await approve(s, s.regenRevisionId)
   const setId = await makeSet(s)
-  if (opts.report !== false) await fileSetReport(setId, s.driverCookie)
+  if (opts.report !== false) await fileCoveringReports(setId, s.driverCookie)
   return { ...s, setId }
 }
 
@@ -65,8 +65,8 @@ describe('set release gate: each condition alone blocks the release', () => {
 
   it('no drive report on the set, or an open safety concern, blocks it', async () => {
     const s = await readySet({ report: false })
-    expect(await gate(s)).toEqual({ ...ALL_MET, 'drive-report': false })
-    await fileSetReport(s.setId, s.driverCookie, { flags: [{ map: 'regen', pedalPct: 0, speedKmh: 30, what: 'axle locked on lift-off', severity: 4 }] })
+    expect(await gate(s)).toEqual({ ...ALL_MET, 'drive-report': false, coverage: false }) // no report covers any condition either
+    await fileCoveringReports(s.setId, s.driverCookie, { flags: [{ map: 'regen', pedalPct: 0, speedKmh: 30, what: 'axle locked on lift-off', severity: 4 }] })
     expect(await gate(s)).toEqual({ ...ALL_MET, safety: false })
     expect((await releaseSet(s.setId, s.leadCookie)).status).toBe(409)
   })

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest'
 import { currentSetRelease } from '@/db/queries/sets'
 import { makeUser, sessionCookie } from '@/tests/support/api'
 import { act, capturedMail, GENTLE, reviewSetup, stateOf } from '@/tests/support/review-fixtures'
-import { approve, fileSetReport, makeSet, releaseSet, saveRevision, setSetup, withdrawSet } from '@/tests/support/set-fixtures'
+import { approve, fileCoveringReports, makeSet, releaseSet, saveRevision, setSetup, withdrawSet } from '@/tests/support/set-fixtures'
 
 describe('review workflow', () => {
   it('submit → send back (comment required) → approve is refused from “sent back”, mail at each step', async () => {
@@ -31,7 +31,7 @@ describe('review workflow', () => {
     const blocked = await releaseSet(first, s.leadCookie)
     expect(blocked.status).toBe(409) // no drive report yet
     expect(blocked.body.error.message).toMatch(/No drive report/)
-    await fileSetReport(first, s.driverCookie)
+    await fileCoveringReports(first, s.driverCookie)
     expect((await releaseSet(first, s.leadCookie)).status).toBe(200)
     expect([await stateOf(s.mapId, 1), await stateOf(s.regenMapId, 1)]).toEqual(['released', 'released'])
     expect((await currentSetRelease(s.programId))?.setId).toBe(first)
@@ -42,7 +42,7 @@ describe('review workflow', () => {
     const d2 = await saveRevision(s, s.mapId, 1, { ...GENTLE, values: GENTLE.values.map((r) => r.map((v) => v * 0.9)) }, 'Even gentler')
     await approve(s, d2)
     const second = await makeSet(s, { driveRevisionId: d2 })
-    await fileSetReport(second, s.driverCookie)
+    await fileCoveringReports(second, s.driverCookie)
     expect((await releaseSet(second, s.leadCookie)).status).toBe(200)
     expect([await stateOf(s.mapId, 1), await stateOf(s.mapId, 2), await stateOf(s.regenMapId, 1)]).toEqual(['retired', 'released', 'released'])
     expect((await withdrawSet(second, s.leadCookie, '')).status).toBe(400) // a reason is required

@@ -15,7 +15,7 @@ import { auditLog, paramVersions, users, vehiclePrograms } from '@/db/schema'
 import { call, makeUser, sessionCookie } from '@/tests/support/api'
 import { GENTLE } from '@/tests/support/review-fixtures'
 import { SMALL_DRIVE } from '@/tests/support/fixtures'
-import { approve, downloadPackage, GENTLE_REGEN, fileSetReport, gateMet, getSetView, makeSet, releaseSet, saveRevision, setReportBody, setSetup, withdrawSet } from '@/tests/support/set-fixtures'
+import { approve, downloadPackage, GENTLE_REGEN, fileCoveringReports, fileSetReport, gateMet, getSetView, makeSet, releaseSet, saveRevision, setReportBody, setSetup, withdrawSet } from '@/tests/support/set-fixtures'
 
 const sha256 = (b: Uint8Array) => createHash('sha256').update(b).digest('hex')
 
@@ -45,7 +45,7 @@ describe('a drive map and a regen map are released together, as driven', () => {
 
     // Set A was driven; set B holds the same drive revision with another regen revision and was not.
     const driven = await makeSet(s)
-    await fileSetReport(driven, s.driverCookie)
+    await fileCoveringReports(driven, s.driverCookie)
     const regen2 = await saveRevision(s, s.regenMapId, 1, { ...GENTLE_REGEN, values: [[0, 30, 30], [0, 60, 60], [0, 100, 100]] })
     await approve(s, regen2)
     const notDriven = await makeSet(s, { regenRevisionId: regen2 })
@@ -89,7 +89,7 @@ describe('a report stays on the set it was filed against', () => {
     expect((await call(reportRoute.GET, { cookie: s.leadCookie, params: { id: String(reportId) } })).body.report.setId).toBe(first)
 
     // The concern was found on the drive revision: the first set and the second (same drive revision) are both blocked.
-    await fileSetReport(second, s.driverCookie)
+    await fileCoveringReports(second, s.driverCookie)
     for (const id of [first, second]) {
       expect(gateMet(await getSetView(id, s.leadCookie)).safety).toBe(false)
       expect((await releaseSet(id, s.leadCookie)).status).toBe(409)
@@ -103,7 +103,7 @@ describe('acknowledged exceptions are kept with who, when and why', () => {
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
     const id = await makeSet(s)
-    await fileSetReport(id, s.driverCookie)
+    await fileCoveringReports(id, s.driverCookie)
     const view = await getSetView(id, s.leadCookie)
     const keys: string[] = view.body.gate.exceptions.map((e: { key: string }) => e.key)
     expect(keys).toEqual(expect.arrayContaining(['traction:drive:packed-snow:empty', 'traction:drive:packed-snow:laden']))
@@ -135,7 +135,7 @@ describe('vehicle parameters are versioned; a set is judged with its own version
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
     const onV1 = await makeSet(s)
-    await fileSetReport(onV1, s.driverCookie)
+    await fileCoveringReports(onV1, s.driverCookie)
 
     // Weighed again: a lighter empty truck with a higher centre of gravity.
     const params = { ...program.params, emptyMassKg: 4000, emptyCgHeightM: program.params.emptyCgHeightM + 0.3 }
@@ -189,7 +189,7 @@ describe('the release package is frozen at release', () => {
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
     const id = await makeSet(s)
-    await fileSetReport(id, s.driverCookie)
+    await fileCoveringReports(id, s.driverCookie)
     expect((await downloadPackage(id, s.cookie)).status).toBe(409) // not released yet
     expect((await releaseSet(id, s.leadCookie)).status).toBe(200)
     const first = await downloadPackage(id, s.cookie)
@@ -207,7 +207,7 @@ describe('the release package is frozen at release', () => {
     const manifest = JSON.parse(strFromU8(files['manifest.json']))
     expect(manifest).toMatchObject({ package: 'release', program: { name: program.name }, releasedBy: s.lead.name, set: { id } })
     expect(manifest.revisions.map((r: { kind: string }) => r.kind)).toEqual(['drive', 'regen'])
-    expect(manifest.evidenceReports).toHaveLength(1)
+    expect(manifest.evidenceReports).toHaveLength(4) // one report per release condition (2 surfaces × 2 load cases)
     const listed = Object.fromEntries(manifest.files.map((f: { name: string; sha256: string }) => [f.name, f.sha256]))
     expect(Object.keys(listed).sort()).toEqual(Object.keys(files).filter((n) => n !== 'manifest.json').sort())
     for (const [name, hash] of Object.entries(listed)) expect(sha256(files[name]), name).toBe(hash)
@@ -239,8 +239,8 @@ describe('GENTLE fixture sanity', () => {
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
     const id = await makeSet(s)
-    await fileSetReport(id, s.driverCookie)
-    expect(gateMet(await getSetView(id, s.leadCookie))).toEqual({ parts: true, approved: true, validation: true, exportable: true, traction: true, jackknife: true, 'drive-report': true, safety: true })
+    await fileCoveringReports(id, s.driverCookie)
+    expect(gateMet(await getSetView(id, s.leadCookie))).toEqual({ parts: true, approved: true, validation: true, exportable: true, traction: true, jackknife: true, 'drive-report': true, coverage: true, safety: true })
   })
 })
 
@@ -250,11 +250,11 @@ describe('found trying the sets as an attacker and a new user', () => {
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
     const a = await makeSet(s)
-    await fileSetReport(a, s.driverCookie)
+    await fileCoveringReports(a, s.driverCookie)
     const regen2 = await saveRevision(s, s.regenMapId, 1, { ...GENTLE_REGEN, values: [[0, 25, 25], [0, 60, 60], [0, 100, 100]] })
     await approve(s, regen2)
     const b = await makeSet(s, { regenRevisionId: regen2 })
-    await fileSetReport(b, s.driverCookie)
+    await fileCoveringReports(b, s.driverCookie)
     expect((await releaseSet(a, s.leadCookie)).status).toBe(200)
     expect((await releaseSet(b, s.leadCookie)).status).toBe(200) // retires A
     expect((await releaseSet(a, s.leadCookie)).status).toBe(200) // A again, retires B
@@ -269,7 +269,7 @@ describe('found trying the sets as an attacker and a new user', () => {
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
     const id = await makeSet(s)
-    await fileSetReport(id, s.driverCookie)
+    await fileCoveringReports(id, s.driverCookie)
     const other = await sessionCookie(await makeUser('lead_engineer'))
     const [x, y] = await Promise.all([releaseSet(id, s.leadCookie), releaseSet(id, other)])
     expect([x.status, y.status].sort()).toEqual([200, 409])
@@ -281,7 +281,7 @@ describe('found trying the sets as an attacker and a new user', () => {
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
     const id = await makeSet(s)
-    const reportId = await fileSetReport(id, s.driverCookie)
+    const [reportId] = await fileCoveringReports(id, s.driverCookie)
     expect((await releaseSet(id, s.leadCookie)).status).toBe(200)
     const edit = await call(reportRoute.PUT, { method: 'PUT', cookie: s.driverCookie, params: { id: String(reportId) }, body: setReportBody(id, { comments: 'changed after the release' }) })
     expect(edit.status).toBe(409)
@@ -299,7 +299,7 @@ describe('found trying the sets as an attacker and a new user', () => {
     await approve(s, s.driveRevisionId)
     await approve(s, s.regenRevisionId)
     const id = await makeSet(s)
-    await fileSetReport(id, s.driverCookie)
+    await fileCoveringReports(id, s.driverCookie)
     const keys: string[] = (await getSetView(id, s.leadCookie)).body.gate.exceptions.map((e: { key: string }) => e.key)
     const twice = await releaseSet(id, s.leadCookie, [...keys.map((key) => ({ key, reason: 'r' })), { key: keys[0], reason: 'other' }])
     expect(twice.status).toBe(400)

@@ -14,7 +14,7 @@ const parts = (r: MapTable): SetGatePart[] => [
   { kind: 'regen', revisionId: 2, number: 1, mapName: 'R', state: 'approved', table: r },
 ]
 const gate = (r: MapTable, v = tractor, acks: { key: string; reason: string }[] = [], c = conditions) =>
-  setGate({ parts: parts(r), vehicle: v, conditions: c, reports: 1, concerns: [], acknowledgements: acks })
+  setGate({ parts: parts(r), vehicle: v, conditions: c, reports: [{ surface: 'packed-snow', loadCase: 'trailer-empty' }], concerns: [], acknowledgements: acks })
 
 describe('set gate: jackknife finding on lift-off regen', () => {
   it('lift-off regen below the torque that keeps 1.5 m/s² lateral on packed snow passes', () => {

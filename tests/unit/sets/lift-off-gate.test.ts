@@ -17,7 +17,7 @@ const parts: SetGatePart[] = [
 ]
 const base = { surfaces: ['packed-snow' as const], loadCases: ['laden' as const], marginPct: 10 }
 const gate = (v: VehicleParams, conditions: Parameters<typeof setGate>[0]['conditions']) =>
-  setGate({ parts, vehicle: v, conditions, reports: 1, concerns: [], acknowledgements: [] }).conditions.find((c) => c.id === 'lift-off')
+  setGate({ parts, vehicle: v, conditions, reports: [{ surface: 'packed-snow', loadCase: 'laden' }], concerns: [], acknowledgements: [] }).conditions.find((c) => c.id === 'lift-off')
 
 describe('the set gate’s lift-off condition at battery corners', () => {
   const cold = { label: 'Full and cold', socPct: 95, temperatureC: -10 }

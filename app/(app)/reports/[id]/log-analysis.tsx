@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
 import type { AnalysisResult } from '@/physics'
 import type { StoredAnalysis } from '@/app/_lib/reports/log-jobs'
+import { LogSlipBasis } from './log-slip-basis'
 import { LogTimePlot } from './log-time-plot'
 import { OccupancyGrid } from './occupancy-grid'
 import { PredictionTable, type Prediction } from './prediction-table'
@@ -69,9 +70,7 @@ export function LogAnalysisView(props: { reportId: number; logId: number; setId:
       )}
       {q.data?.predictions && <PredictionTable predictions={q.data.predictions} />}
       {a.occupancy && <OccupancyGrid occupancy={a.occupancy} events={a.events} mapKind={occupancyKind} />}
-      <p className="text-xs text-slate-500">
-        Slip thresholds: spin above {fmt(a.thresholds.spinSlip, 3)}, lock below −{fmt(a.thresholds.lockSlip, 3)} ({a.thresholds.source}); events shorter than {a.thresholds.minDurationS} s are not counted ({a.shortExcursions} short excursions).
-      </p>
+      <LogSlipBasis a={a} />
     </div>
   )
 }

@@ -5,6 +5,7 @@ import { api } from '@/app/_components/api-client'
 import { isLogPending, type LogStatus } from '@/domain/log-statuses'
 import { uploadLog } from './upload-log'
 import { LogAnalysisView } from './log-analysis'
+import { LogColumnHelp } from './log-column-help'
 
 export interface LogItem {
   id: number
@@ -73,6 +74,7 @@ export function LogsPanel(props: { reportId: number; setId: number; initialLogs:
             <summary className="cursor-pointer text-slate-600">Different column names? Map them</summary>
             <textarea aria-label="Column mapping (JSON)" className="field mt-1 font-mono text-xs" rows={3} placeholder='{"road_speed_kmh": "VehSpd", "time_s": "t"}' value={mapping} onChange={(e) => setMapping(e.target.value)} />
           </details>
+          <LogColumnHelp />
           {upload && <Progress label={`Uploading ${upload.name}`} fraction={upload.fraction} />}
           {error && <p role="alert" className="error-text text-sm">{error}</p>}
         </div>

@@ -15,6 +15,7 @@ import { SetStatusBadge } from '../status-badge'
 import { otherSetIds, setHistory, withdrawnBy } from './history'
 import { ReleasePanel } from './release-panel'
 import { SetAcknowledgements } from './set-acknowledgements'
+import { SetCoverageGrid } from './set-coverage-grid'
 import { SetDownloads } from './set-downloads'
 import { SetFindingsView } from './set-findings'
 import { SetGateChecklist } from './set-gate-checklist'
@@ -48,9 +49,10 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
   const latest = set.releases[0] ?? null
   const isLead = user.role === 'lead_engineer'
   const canRelease = isLead && (set.status === 'testing' || set.status === 'retired')
-  // What would still block the release with a reason given for every traction exception.
+  // What would still block the release with a reason given for every traction exception and uncovered condition.
+  const reasonable = [...gate.exceptions.map((e) => e.key), ...gate.uncovered]
   const unmet = canRelease
-    ? (gate.exceptions.length ? await setGateFor(set, gate.exceptions.map((e) => ({ key: e.key, reason: 'given' }))) : gate).conditions.filter((c) => !c.met).map((c) => c.summary)
+    ? (reasonable.length ? await setGateFor(set, reasonable.map((key) => ({ key, reason: 'given' }))) : gate).conditions.filter((c) => !c.met).map((c) => c.summary)
     : []
   return (
     <div className="space-y-6">
@@ -89,6 +91,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
       <section aria-labelledby="release-section-heading" className="space-y-3">
         <h2 id="release-section-heading" className="text-lg font-semibold">Release</h2>
         <SetGateChecklist gate={gate} programId={set.programId} />
+        <SetCoverageGrid coverage={gate.coverage} />
         <SetAcknowledgements releases={set.releases} />
         <SafetyCaution />
         {canRelease && (
@@ -100,6 +103,9 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
               key: e.key,
               label: `${e.mapKind === 'drive' ? 'Drive' : 'Regen'} map × ${surfaceLabel(e.surface)} × ${loadCaseLabel(e.loadCase)}: ${e.cells.length} ${e.finding === 'jackknife' ? 'lift-off cell(s) below the design lateral acceleration (jackknife risk)' : 'cell(s) above the limit'}`,
             }))}
+            uncovered={gate.coverage
+              .filter((c) => gate.uncovered.includes(c.key))
+              .map((c) => ({ key: c.key, label: `${surfaceLabel(c.surface)} × ${loadCaseLabel(c.loadCase)}: no drive report on this set` }))}
           />
         )}
         {isLead && set.status === 'released' && <WithdrawPanel setId={set.id} setNumber={set.number} />}

@@ -11,10 +11,11 @@ export interface ExceptionChoice {
 }
 
 /**
- * The lead's release of a set: a reason for each traction exception (map × surface × load case),
- * then Release. The server judges the gate again and its refusal is shown as it says it.
+ * The lead's release of a set: a reason for each traction exception (map × surface × load case) and for
+ * each release condition no drive report covers (its waiver), then Release. The server judges the gate
+ * again and its refusal is shown as it says it.
  */
-export function ReleasePanel({ setId, setNumber, exceptions, unmet }: { setId: number; setNumber: number; exceptions: ExceptionChoice[]; unmet: string[] }) {
+export function ReleasePanel({ setId, setNumber, exceptions, uncovered = [], unmet }: { setId: number; setNumber: number; exceptions: ExceptionChoice[]; uncovered?: ExceptionChoice[]; unmet: string[] }) {
   const router = useRouter()
   const [reasons, setReasons] = useState<Record<string, string>>({})
   const [error, setError] = useState<string | null>(null)
@@ -23,7 +24,7 @@ export function ReleasePanel({ setId, setNumber, exceptions, unmet }: { setId: n
     mutationFn: () =>
       api<{ sha256: string; filename: string }>(`/api/sets/${setId}/release`, {
         method: 'POST',
-        json: { acknowledgements: exceptions.map((e) => ({ key: e.key, reason: (reasons[e.key] ?? '').trim() })) },
+        json: { acknowledgements: [...exceptions, ...uncovered].map((e) => ({ key: e.key, reason: (reasons[e.key] ?? '').trim() })) },
       }),
     onSuccess: (r) => {
       setError(null)
@@ -40,6 +41,8 @@ export function ReleasePanel({ setId, setNumber, exceptions, unmet }: { setId: n
     e.preventDefault()
     const missing = exceptions.filter((x) => !(reasons[x.key] ?? '').trim())
     if (missing.length) return setError(`Give a reason for each traction exception (${missing.length} without one)`)
+    const unwaived = uncovered.filter((x) => !(reasons[x.key] ?? '').trim())
+    if (unwaived.length) return setError(`Give a reason for each release condition without a drive report (${unwaived.length} without one)`)
     release.mutate()
   }
 
@@ -68,6 +71,25 @@ export function ReleasePanel({ setId, setNumber, exceptions, unmet }: { setId: n
                 value={reasons[x.key] ?? ''}
                 onChange={(ev) => setReasons({ ...reasons, [x.key]: ev.target.value })}
                 data-testid={`ack-${x.key}`}
+              />
+            </div>
+          ))}
+        </fieldset>
+      )}
+      {uncovered.length > 0 && (
+        <fieldset className="space-y-2 rounded border border-amber-300 bg-amber-50 p-2" data-testid="coverage-waivers">
+          <legend className="px-1 text-sm font-semibold">Release conditions no drive report covers: to release anyway, waive each with a reason</legend>
+          {uncovered.map((x) => (
+            <div key={x.key}>
+              <label htmlFor={`waive-${x.key}`} className="text-sm">{x.label}</label>
+              <input
+                id={`waive-${x.key}`}
+                className="field"
+                required
+                maxLength={2000}
+                value={reasons[x.key] ?? ''}
+                onChange={(ev) => setReasons({ ...reasons, [x.key]: ev.target.value })}
+                data-testid={`waive-${x.key}`}
               />
             </div>
           ))}

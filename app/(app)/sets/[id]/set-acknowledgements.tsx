@@ -32,6 +32,22 @@ export function SetAcknowledgements({ releases }: { releases: SetRelease[] }) {
           </ul>
         </div>
       ))}
+      {releases.filter((r) => r.coverageWaivers.length > 0).map((r) => (
+        <div key={`w${r.id}`} className="space-y-1" data-testid="coverage-waiver-record">
+          <h4 className="text-sm font-semibold">Release conditions waived without a drive report{releases.length > 1 ? ` (release of ${formatTime(r.releasedAt)})` : ''}</h4>
+          <ul className="space-y-2 text-sm">
+            {r.coverageWaivers.map((w) => (
+              <li key={w.key} className="rounded border border-amber-300 bg-amber-50 px-2 py-1 break-words">
+                <span className="font-semibold">{surfaceLabel(w.surface)} × {loadCaseLabel(w.loadCase)}</span>
+                <br />
+                Reason: “{w.reason}”
+                <br />
+                <span className="text-xs text-slate-600">{w.byName}, {formatTime(w.at)}</span>
+              </li>
+            ))}
+          </ul>
+        </div>
+      ))}
     </section>
   )
 }

@@ -9,6 +9,7 @@ export function SetGateChecklist({ gate, programId }: { gate: SetGateResult; pro
     jackknife: { href: `/programs/${programId}/physics`, label: 'traction limits of the program' },
     'lift-off': { href: `/programs/${programId}/physics`, label: 'lift-off at the battery corners' },
     'drive-report': { href: '#reports', label: 'drive reports below' },
+    coverage: { href: '#coverage', label: 'coverage grid below' },
     safety: { href: '#reports', label: 'drive reports below' },
   }
   return (
@@ -39,6 +40,9 @@ export function SetGateChecklist({ gate, programId }: { gate: SetGateResult; pro
       </ul>
       {gate.exceptions.length > 0 && (
         <p className="mt-2 text-xs text-slate-600">Traction and jackknife exceptions stay open here until a lead engineer gives a reason for each one when releasing.</p>
+      )}
+      {gate.uncovered.length > 0 && (
+        <p className="mt-2 text-xs text-slate-600">Release conditions without a drive report stay open here until a report covers them or a lead engineer waives each one, with a reason, when releasing.</p>
       )}
     </section>
   )

@@ -12,7 +12,7 @@ import { Readable } from 'node:stream'
 import Papa from 'papaparse'
 import { LogFormatError } from '@/physics/drive-log'
 import { readHead } from './header-line'
-import { createLogRowSink, LINE_SPLIT_DELIMITER, type LogIngestResult, type LogReadOptions } from './row-sink'
+import { createCalibrationSink, createLogRowSink, LINE_SPLIT_DELIMITER, type LogIngestResult, type LogReadOptions } from './row-sink'
 import { textChunks, type LogByteSource } from './text-source'
 
 /** Options of {@link ingestLog}. */
@@ -39,22 +39,50 @@ async function* prepend(head: string, rest: AsyncIterator<string>): AsyncGenerat
   }
 }
 
+/** A source that can be opened again: the radius calibration reads the log once before the analysis. */
+export type ReopenableLogSource = () => Promise<LogByteSource> | LogByteSource
+
 /**
  * Reads, validates and analyses a CSV drive log from a stream. Rejects with {@link LogFormatError}
  * (line and column where known) for non-CSV input, a bad header, a malformed row, time going
  * backwards, or more than `maxBytes`; other errors from the source are passed through.
- * @example const result = await ingestLog(fs.createReadStream('log.csv'), { surface: 'wet-asphalt' })
+ * Given a function that opens the source, it reads the log twice: first for the effective-radius
+ * calibration (`createRadiusCalibrator`), then for the analysis with that calibration; progress is then
+ * reported as half the bytes of each pass, so it still rises once from 0 to the file size. Given a
+ * stream, it reads once and runs no calibration (unless `radiusCalibration` is passed).
+ * @example const result = await ingestLog(() => fs.createReadStream('log.csv'), { surface: 'wet-asphalt' })
  */
-export async function ingestLog(source: LogByteSource, opts: IngestOptions = {}): Promise<LogIngestResult> {
+export async function ingestLog(source: LogByteSource | ReopenableLogSource, opts: IngestOptions = {}): Promise<LogIngestResult> {
+  if (typeof source !== 'function') return parsePass(source, opts, (d) => createLogRowSink(opts, d), opts.onProgress, (sink, bytes) => sink.finish(bytes))
+  let radiusCalibration = opts.radiusCalibration
+  let firstBytes = 0
+  if (radiusCalibration === undefined && opts.calibrateRadius !== false) {
+    const progress = opts.onProgress && ((bytes: number, rows: number) => opts.onProgress!(Math.floor(bytes / 2), rows))
+    const first = await parsePass(await source(), opts, (d) => createCalibrationSink(opts, d), progress, (sink, bytes) => { firstBytes = bytes; return sink.finish() })
+    radiusCalibration = first
+  }
+  const again = { ...opts, radiusCalibration }
+  const progress = opts.onProgress && firstBytes > 0 ? (bytes: number, rows: number) => opts.onProgress!(Math.floor((firstBytes + bytes) / 2), rows) : opts.onProgress
+  return parsePass(await source(), again, (d) => createLogRowSink(again, d), progress, (sink, bytes) => sink.finish(bytes))
+}
+
+/** One streaming pass of the source through a sink made for the sniffed delimiter. */
+async function parsePass<S extends { lines(l: readonly (readonly string[])[]): void; readonly dataRows: number }, R>(
+  source: LogByteSource,
+  opts: IngestOptions,
+  makeSink: (delimiter: string) => S,
+  onProgress: ((bytes: number, rows: number) => void) | undefined,
+  finish: (sink: S, bytes: number) => R,
+): Promise<R> {
   const counter = { bytes: 0 }
   const chunks = textChunks(source, counter, opts.maxBytes)
   const { head, delimiter } = await readHead(chunks)
-  const sink = createLogRowSink(opts, delimiter)
+  const sink = makeSink(delimiter)
   const readable = Readable.from(prepend(head, chunks), { objectMode: true })
   let fed = 0
   readable.on('data', (s: string) => { fed += s.length }) // runs before papaparse's listener: chars handed over so far
 
-  return new Promise<LogIngestResult>((resolve, reject) => {
+  return new Promise<R>((resolve, reject) => {
     let settled = false
     const fail = (e: unknown) => {
       if (settled) return
@@ -74,7 +102,7 @@ export async function ingestLog(source: LogByteSource, opts: IngestOptions = {})
           sink.lines(results.data)
           if (fed - results.meta.cursor > MAX_PENDING_CHARS)
             throw new LogFormatError('row', 0, null, `no complete row in over ${MAX_PENDING_CHARS} characters after row ${sink.dataRows + 1} of data (an unbalanced quote?)`)
-          opts.onProgress?.(counter.bytes, sink.dataRows)
+          onProgress?.(counter.bytes, sink.dataRows)
         } catch (e) {
           fail(e) // first: abort() calls complete() synchronously
           parser.abort()
@@ -83,7 +111,7 @@ export async function ingestLog(source: LogByteSource, opts: IngestOptions = {})
       complete() {
         if (settled) return
         try {
-          const result = sink.finish(counter.bytes)
+          const result = finish(sink, counter.bytes)
           settled = true
           resolve(result)
         } catch (e) { fail(e) }

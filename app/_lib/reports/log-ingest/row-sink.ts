@@ -9,16 +9,19 @@
 import 'server-only'
 import Papa, { type ParseError } from 'papaparse'
 import {
-  createLogAnalyser, createRowDecoders, LogFormatError, resolveLogHeader,
-  type AnalysisResult, type LineDecoder, type LogAnalyser, type LogAnalyserOptions, type LogHeaderMapping, type LogLayout, type RowDecoder,
+  createLogAnalyser, createRadiusCalibrator, createRowDecoders, layoutWheelChannels, LogFormatError, resolveLogHeader,
+  type AnalysisResult, type LineDecoder, type LogAnalyserOptions, type LogColumnRef, type LogHeaderMapping, type LogLayout, type LogSample,
+  type RadiusCalibration, type RowDecoder,
 } from '@/physics/drive-log'
 
 /** Options for reading a log: header mapping, wheel radius for angular wheel speeds, and the analysis. */
-export interface LogReadOptions extends LogAnalyserOptions {
+export interface LogReadOptions extends Omit<LogAnalyserOptions, 'wheelChannels'> {
   /** `{ ourColumn: theirHeader }`, e.g. `{ "road_speed_mph": "Speed MPH" }`. */
   mapping?: LogHeaderMapping
   /** Dynamic rolling radius, m (needed for wheel speeds in rad/s or rpm). */
   wheelRadiusM?: number
+  /** Run the effective-radius calibration as a first pass (where the source can be read twice). Default true. */
+  calibrateRadius?: boolean
 }
 
 /** The analysis plus which columns were read and which were ignored. */
@@ -46,14 +49,59 @@ const MAX_QUOTED_RECORD = 65_536
 // The line splitter's delimiter: a control character refused in the header, so a line is normally one cell.
 export const LINE_SPLIT_DELIMITER = '\u001f'
 
+/** The first pass of a two-pass read: the same parsing and errors, feeding the radius calibrator only. */
+export interface CalibrationSink extends Omit<LogRowSink, 'finish'> {
+  finish(): RadiusCalibration
+}
+
 /** @example const sink = createLogRowSink({ surface: 'dry-asphalt' }, ','); sink.rows(papaRows, []); sink.finish(bytes) */
 export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowSink {
+  let analyser: ReturnType<typeof createLogAnalyser> | null = null
+  const r = createRecordReader(opts, delimiter, (layout, timeColumn) => {
+    analyser = createLogAnalyser({ ...opts, timeColumn, wheelChannels: layoutWheelChannels(layout) })
+    return analyser.push
+  })
+  return {
+    rows: r.rows,
+    lines: r.lines,
+    get dataRows() { return r.dataRows },
+    finish(bytes) {
+      const l = r.end()
+      return {
+        ...analyser!.finish(),
+        columns: {
+          used: l.columns.map((c) => ({ column: c.spec.name, header: c.header, index: c.index + 1, unit: c.spec.unit })),
+          ignored: l.ignored.map((g) => ({ header: g.header, index: g.index + 1, reason: g.reason })),
+        },
+        bytes,
+      }
+    },
+  }
+}
+
+/** @example const first = createCalibrationSink(opts, ','); first.rows(papaRows, []); createLogRowSink({ ...opts, radiusCalibration: first.finish() }) */
+export function createCalibrationSink(opts: LogReadOptions, delimiter = ','): CalibrationSink {
+  let calibrator: ReturnType<typeof createRadiusCalibrator> | null = null
+  const r = createRecordReader(opts, delimiter, (layout, timeColumn) => {
+    calibrator = createRadiusCalibrator({ wheelChannels: layoutWheelChannels(layout), trackWidthM: opts.trackWidthM, maxGapS: opts.maxGapS, timeColumn })
+    return calibrator.push
+  })
+  return {
+    rows: r.rows,
+    lines: r.lines,
+    get dataRows() { return r.dataRows },
+    finish() { r.end(); return calibrator!.result() },
+  }
+}
+
+/** Header, decoding and line bookkeeping shared by both passes; `start` makes the sample consumer from the layout. */
+function createRecordReader(opts: LogReadOptions, delimiter: string, start: (layout: LogLayout, timeColumn: LogColumnRef | undefined) => (s: LogSample) => unknown) {
   let line = 0
   let dataRows = 0
   let layout: LogLayout | null = null
   let decode: RowDecoder | null = null
   let decodeLine: LineDecoder | null = null
-  let analyser: LogAnalyser | null = null
+  let analyser: { push(s: LogSample): unknown } | null = null
   let quoted: { text: string; line: number } | null = null
 
   const header = (cells: readonly string[]) => {
@@ -62,7 +110,7 @@ export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowS
     const d = createRowDecoders(layout, delimiter)
     decode = d.fromFields
     decodeLine = d.fromLine
-    analyser = createLogAnalyser({ ...opts, timeColumn: time ? { index: time.index + 1, name: time.header } : undefined })
+    analyser = { push: start(layout, time ? { index: time.index + 1, name: time.header } : undefined) }
   }
   /** One complete record as cells, at its first physical line. */
   const record = (cells: readonly string[], at: number) => {
@@ -87,7 +135,7 @@ export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowS
   }
 
   return {
-    rows(rows, errors) {
+    rows(rows: readonly (readonly string[])[], errors: readonly ParseError[]) {
       const base = line
       if (errors.length) {
         const e = errors.reduce((a, b) => ((a.row ?? 0) <= (b.row ?? 0) ? a : b))
@@ -95,7 +143,7 @@ export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowS
       }
       for (let i = 0; i < rows.length; i++) record(rows[i], ++line)
     },
-    lines(parts) {
+    lines(parts: readonly (readonly string[])[]) {
       for (let i = 0; i < parts.length; i++) {
         const p = parts[i]
         const text = p.length === 1 ? p[0] : p.join(LINE_SPLIT_DELIMITER)
@@ -120,19 +168,12 @@ export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowS
       }
     },
     get dataRows() { return dataRows },
-    finish(bytes) {
+    /** Checks the log ended well and returns its layout. */
+    end(): LogLayout {
       if (quoted !== null) throw new LogFormatError('row', quoted.line, null, 'malformed CSV: a quoted field is not closed at the end of the log')
       if (!layout || !analyser) throw new LogFormatError('empty', 0, null, 'the log is empty')
       if (dataRows === 0) throw new LogFormatError('empty', line, null, 'the log has a header but no data rows')
-      const l: LogLayout = layout
-      return {
-        ...analyser.finish(),
-        columns: {
-          used: l.columns.map((c) => ({ column: c.spec.name, header: c.header, index: c.index + 1, unit: c.spec.unit })),
-          ignored: l.ignored.map((g) => ({ header: g.header, index: g.index + 1, reason: g.reason })),
-        },
-        bytes,
-      }
+      return layout
     },
   }
 }

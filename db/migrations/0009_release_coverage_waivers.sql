@@ -1,0 +1,1 @@
+ALTER TABLE "set_releases" ADD COLUMN "coverage_waivers" jsonb DEFAULT '[]'::jsonb NOT NULL;

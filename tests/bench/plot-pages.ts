@@ -84,7 +84,7 @@ export async function runPlotPages(shared?: BenchServer): Promise<BenchResult> {
     browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS })
 
     const compareUrl = `/maps/compare?a=${pair.id}:${last - 1}&b=${pair.id}:${last}&loadCase=empty&surface=gravel`
-    const twoD: Goal = { name: '2-D views', all: [{ sel: '[data-testid="change-table"] tbody tr', count: 1 }, { sel: '[data-testid^="slip-heatmap-"] .main-svg', count: 2 }] }
+    const twoD: Goal = { name: '2-D views', all: [{ sel: '[data-testid="change-table"] tbody tr', count: 1 }, { sel: '[data-testid="slip-heatmap-a"] .main-svg', count: 1 }, { sel: '[data-testid="slip-heatmap-b"] .main-svg', count: 1 }] }
     const surfaces: Goal = { name: 'surfaces', all: [{ sel: '.js-plotly-plot .gl-container canvas', count: 3 }] }
     const compare = await measure(browser, baseUrl, cookies, compareUrl, [twoD, surfaces])
     const compareAll = compare.map((l) => Math.max(l.ms[twoD.name], l.ms[surfaces.name]))

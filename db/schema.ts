@@ -16,6 +16,7 @@ import {
 } from 'drizzle-orm/pg-core'
 // Relative imports: drizzle-kit loads this file without the `@/` alias.
 import type { MapKind, MapTable } from '../maps/table'
+import type { RampLimits } from '../maps/ramps'
 import type { AnalysisResult } from '../physics/drive-log/types'
 import { SURFACE_IDS, type SurfaceId } from '../physics/surfaces'
 import { LOAD_CASE_IDS } from '../physics/load-cases'
@@ -48,6 +49,10 @@ export interface ReleaseConditions {
   batteryCorners?: BatteryCorner[]
   /** Least lift-off deceleration a corner may leave, m/s² (absent = corners shown, nothing found). */
   minLiftOffDecelMps2?: number
+  /** Comfort limits of the drivability manoeuvres and where they come from (absent: common-practice defaults). */
+  maxPeakJerkMps3?: number
+  maxTimeTo90S?: number
+  comfortSource?: string
 }
 
 /** A gate exception the lead released anyway, with the reason given. */
@@ -142,6 +147,27 @@ export const paramVersions = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex('param_versions_program_number_idx').on(t.programId, t.number)],
+)
+
+/**
+ * One numbered, immutable version of a program's torque ramp limits (tip-in, tip-out, lash band):
+ * a controller part a set holds beside its maps. Like parameter versions, a change makes a new one.
+ */
+export const rampVersions = pgTable(
+  'ramp_versions',
+  {
+    id: integer('id').primaryKey().generatedAlwaysAsIdentity(),
+    programId: integer('program_id')
+      .notNull()
+      .references(() => vehiclePrograms.id),
+    /** Per-program sequence number, 1, 2, 3 … */
+    number: integer('number').notNull(),
+    limits: jsonb('limits').$type<RampLimits>().notNull(),
+    reason: text('reason').notNull(),
+    createdBy: integer('created_by').references(() => users.id),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('ramp_versions_program_number_idx').on(t.programId, t.number)],
 )
 
 export const maps = pgTable(
@@ -382,7 +408,9 @@ export const mapSets = pgTable(
     paramVersionId: integer('param_version_id')
       .notNull()
       .references(() => paramVersions.id),
-    /** "d<drive id>:r<regen id>:p<param version id>": one row per combination. */
+    /** The ramp limits the set runs with; null in sets made before ramps were a part (the controller's own then). */
+    rampVersionId: integer('ramp_version_id').references(() => rampVersions.id),
+    /** "d<drive id>:r<regen id>:p<param version id>[:q<ramp version id>]": one row per combination. */
     partsKey: text('parts_key').notNull(),
     note: text('note').notNull().default(''),
     createdBy: integer('created_by').references(() => users.id),

@@ -1,8 +1,9 @@
 import { and, eq, sql } from 'drizzle-orm'
 import type { Db } from './client'
 import type { Role } from '../domain/roles'
-import { maps, paramVersions, users, vehiclePrograms, type ReleaseConditions } from './schema'
+import { maps, paramVersions, rampVersions, users, vehiclePrograms, type ReleaseConditions } from './schema'
 import { DEMO_BATTERY_CORNERS, demoTipper, demoTractor } from './demo/programs'
+import { starterRamps } from '../maps/ramps'
 import { demoMapHistories } from './demo/maps'
 import { insertRevision } from './queries/revisions'
 
@@ -62,8 +63,11 @@ export async function seedDemo(db: Db, hashPassword: (p: string) => Promise<stri
     .onConflictDoNothing()
     .returning({ id: vehiclePrograms.id, params: vehiclePrograms.params, releaseConditions: vehiclePrograms.releaseConditions })
   // Every program has its parameters as version 1 (what sets are judged with).
-  if (addedPrograms.length)
+  if (addedPrograms.length) {
     await db.insert(paramVersions).values(addedPrograms.map((p) => ({ programId: p.id, number: 1, params: p.params, releaseConditions: p.releaseConditions, reason: 'First version (demo data)', createdBy: admin?.id ?? null })))
+    // Starter ramps scaled to each demo motor, so demo sets hold ramp limits too.
+    await db.insert(rampVersions).values(addedPrograms.map((p) => ({ programId: p.id, number: 1, limits: starterRamps(p.params.motorPeakTorqueNm), reason: 'Starter ramps scaled to the motor (demo data)', createdBy: admin?.id ?? null })))
+  }
   const mapsAdded = await seedMaps(db)
   return { usersAdded: addedUsers.length, programsAdded: addedPrograms.length, mapsAdded }
 }

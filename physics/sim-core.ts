@@ -39,6 +39,13 @@ export interface SimOptions {
   ignoreResistances?: boolean
   /** Optional torque-command rate limit, N·m/s at the motor shaft (default none). */
   torqueRateLimitNmPerS?: number
+  /**
+   * Optional controller ramp in place of the plain rate limit: the next command from the current one,
+   * the request, the road speed (km/h) and the step (s) — e.g. the set's ramp limits (maps/ramps.ts).
+   */
+  torqueLimiter?: (currentNm: number, requestNm: number, speedKmh: number, dtS: number) => number
+  /** Motor torque command held before the run starts, N·m (default 0): a tip-in starts from a held pedal. */
+  initialCommandNm?: number
 }
 
 /** One output sample. */
@@ -91,14 +98,15 @@ export function runSimulation(o: SimOptions, pedal: (t: number) => number, reque
     const f = fx - gradeN
     return f > rollN ? f - rollN : f < -rollN ? f + rollN : 0 // held at standstill, no rollback below
   }
-  let cmdPrev = 0
-  let cmdLast = 0
-  const motorTorque = (t: number, V: number, wShaft: number): number => {
-    const req = request(pedal(t), V * 3.6)
-    const cmd = (cmdLast = Math.max(cmdPrev - rate * h, Math.min(cmdPrev + rate * h, req)))
+  let cmdPrev = o.initialCommandNm ?? 0
+  let cmdLast = cmdPrev
+  const limit = o.torqueLimiter ?? ((c: number, req: number) => Math.max(c - rate * h, Math.min(c + rate * h, req)))
+  const command = (t: number, V: number): number => (cmdLast = limit(cmdPrev, request(pedal(t), V * 3.6), V * 3.6, h))
+  const capped = (cmd: number, wShaft: number): number => {
     const cap = deliverableAtShaft(v, wShaft, cmd < 0 ? 'regen' : 'drive')
     return Math.max(-cap, Math.min(cap, cmd))
   }
+  const motorTorque = (t: number, V: number, wShaft: number): number => capped(command(t, V), wShaft)
   let t = 0, V = v0, w = v0 / R, a = 0, aPrevSample = 0, tPrevSample = 0, tm = 0, fx = 0, kappa = 0
   const run: SimRun = { samples: [], crossings: crossKmh.map(() => null), peakSlip: 0, minSlip: 0, tyrePeakSlip: kPeak,
     timeBeyondPeakDriveS: 0, timeBeyondPeakBrakeS: 0, firstLockS: null, peakJerkMps3: 0 }
@@ -117,11 +125,15 @@ export function runSimulation(o: SimOptions, pedal: (t: number) => number, reque
     const Vp = V
     if (noSlip) {
       const mEff = m + J / (R * R)
-      const f = (tt: number, VV: number): number => net(wheelTorqueFromMotor(v, motorTorque(tt, VV, (VV / R) * G), gearIndex) / R, VV) / mEff
+      // A controller ramp updates its command once per step (a zero-order hold, as firmware does):
+      // RK4's stages must not each see the pedal at their own time and ramp again.
+      const held = o.torqueLimiter ? command(t, V) : null
+      const tq = (tt: number, VV: number) => (held === null ? motorTorque(tt, VV, (VV / R) * G) : capped(held, (VV / R) * G))
+      const f = (tt: number, VV: number): number => net(wheelTorqueFromMotor(v, tq(tt, VV), gearIndex) / R, VV) / mEff
       const k1 = f(t, V), k2 = f(t + h / 2, V + (h / 2) * k1), k3 = f(t + h / 2, V + (h / 2) * k2), k4 = f(t + h, V + h * k3)
       V = Math.max(0, V + (h / 6) * (k1 + 2 * k2 + 2 * k3 + k4))
       w = V / R
-      tm = motorTorque(t + h, V, w * G)
+      tm = tq(t + h, V)
       fx = wheelTorqueFromMotor(v, tm, gearIndex) / R - (J / (R * R)) * ((V - Vp) / h)
     } else {
       tm = motorTorque(t, V, w * G)

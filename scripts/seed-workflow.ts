@@ -13,6 +13,7 @@ import { transitionRevision } from '../db/queries/review'
 import { createLog } from '../db/queries/logs'
 import { getProgram, updateProgram } from '../db/queries/programs'
 import { createSet, getSet } from '../db/queries/sets'
+import { latestRampVersion } from '../db/queries/ramp-versions'
 import { latestParamVersion } from '../db/queries/param-versions'
 import { analyse } from '../app/_lib/reports/log-jobs'
 import { putObjectStream } from '../app/_lib/storage/object-store'
@@ -72,7 +73,8 @@ async function reportWithLog(setId: number, driverId: number, fields: Partial<Pa
 /** Make a set of the two revisions and the program's latest parameter version. */
 async function makeSet(programId: number, drive: number, regen: number, by: number, note: string) {
   const pv = await latestParamVersion(programId)
-  return (await createSet({ programId, driveRevisionId: drive, regenRevisionId: regen, paramVersionId: pv!.id, note, createdBy: by })).id
+  const ramps = await latestRampVersion(programId)
+  return (await createSet({ programId, driveRevisionId: drive, regenRevisionId: regen, paramVersionId: pv!.id, rampVersionId: ramps?.id ?? null, note, createdBy: by })).id
 }
 
 /**

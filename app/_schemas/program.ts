@@ -28,6 +28,10 @@ export const releaseConditionsSchema = z.object({
     .optional(),
   batteryCorners: z.array(batteryCornerSchema).max(8, 'At most 8 battery corners').optional(),
   minLiftOffDecelMps2: z.number({ error: 'The minimum lift-off deceleration must be a number (m/s²)' }).min(0, 'The minimum lift-off deceleration is 0 m/s² or more').max(5, 'The minimum lift-off deceleration is at most 5 m/s²').optional(),
+  /** Comfort limits of the drivability manoeuvres (absent: the defaults of app/_lib/sets/drivability.ts, stated as common practice). */
+  maxPeakJerkMps3: z.number({ error: 'The largest peak jerk must be a number (m/s³)' }).min(0.5, 'The largest peak jerk is at least 0.5 m/s³').max(50, 'The largest peak jerk is at most 50 m/s³').optional(),
+  maxTimeTo90S: z.number({ error: 'The longest time to 90 % torque must be a number (s)' }).min(0.05, 'The longest time to 90 % torque is at least 0.05 s').max(10, 'The longest time to 90 % torque is at most 10 s').optional(),
+  comfortSource: z.string().trim().max(300, atMost('The source of the comfort limits', 300)).optional(),
 })
 
 /** Suggested corners for a new program's release conditions (the engineer edits them). */

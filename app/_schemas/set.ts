@@ -4,11 +4,13 @@ import { atMost } from './text'
 
 const revisionId = (label: string) => z.number({ error: `Choose the ${label} map revision` }).int().positive().max(MAX_ID, `Choose the ${label} map revision`)
 
-/** A new set: one drive revision, one regen revision, and the parameter version by its number (latest when left out). */
+/** A new set: one drive revision, one regen revision, the parameter version and the ramp version by their numbers (latest when left out). */
 export const setInputSchema = z.strictObject({
   driveRevisionId: revisionId('drive'),
   regenRevisionId: revisionId('regen'),
   paramVersion: z.number({ error: 'paramVersion must be a version number' }).int().positive().max(MAX_ID).optional(),
+  /** The ramp version by its number; the latest when left out; null: none (the controller keeps its own ramps). */
+  rampVersion: z.number({ error: 'rampVersion must be a version number or null' }).int().positive().max(MAX_ID).nullable().optional(),
   note: z.string().trim().max(2000, atMost('The note', 2000)).default(''),
 })
 

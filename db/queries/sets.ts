@@ -4,16 +4,18 @@ import { driveMap, driveRev, regenMap, regenRev, setPartColumns } from './set-pa
 import type { MapKind, MapTable } from '../../maps/table'
 import type { RevisionState } from '../../domain/revision-states'
 import type { VehicleParams } from '../../physics/vehicle'
+import type { RampLimits } from '../../maps/ramps'
 import { getDb, type Db } from '../client'
-import { driveReports, mapRevisions, maps, mapSets, paramVersions, revisionEvents, setReleases, users, vehiclePrograms, type AcknowledgementRecord, type CoverageWaiverRecord, type ReleaseConditions } from '../schema'
+import { driveReports, mapRevisions, maps, mapSets, paramVersions, rampVersions, revisionEvents, setReleases, users, vehiclePrograms, type AcknowledgementRecord, type CoverageWaiverRecord, type ReleaseConditions } from '../schema'
 import { recordAudit } from './audit'
 import { enqueueMail, type OutgoingMail } from './mail'
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0]
 
 /** The parts key that makes one combination one set (docs/architecture.md). */
-export function partsKey(p: { driveRevisionId: number | null; regenRevisionId: number | null; paramVersionId: number }): string {
-  return `d${p.driveRevisionId ?? '-'}:r${p.regenRevisionId ?? '-'}:p${p.paramVersionId}`
+export function partsKey(p: { driveRevisionId: number | null; regenRevisionId: number | null; paramVersionId: number; rampVersionId?: number | null }): string {
+  // A set without ramps keeps the key it had before ramps were a part.
+  return `d${p.driveRevisionId ?? '-'}:r${p.regenRevisionId ?? '-'}:p${p.paramVersionId}${p.rampVersionId ? `:q${p.rampVersionId}` : ''}`
 }
 
 export interface SetPart {
@@ -60,6 +62,8 @@ export interface MapSetFull {
   drive: SetPart | null
   regen: SetPart | null
   paramVersion: { id: number; number: number; params: VehicleParams; releaseConditions: ReleaseConditions; reason: string; createdAt: Date }
+  /** The ramp limits the set runs with; null for a set made without (the controller keeps its own). */
+  rampVersion: { id: number; number: number; limits: RampLimits; reason: string; createdAt: Date } | null
   releases: SetRelease[]
   status: SetStatus
 }
@@ -153,21 +157,24 @@ export async function getSet(id: number): Promise<MapSetFull | null> {
       driveRevisionId: mapSets.driveRevisionId,
       regenRevisionId: mapSets.regenRevisionId,
       pv: { id: paramVersions.id, number: paramVersions.number, params: paramVersions.params, releaseConditions: paramVersions.releaseConditions, reason: paramVersions.reason, createdAt: paramVersions.createdAt },
+      rv: { id: rampVersions.id, number: rampVersions.number, limits: rampVersions.limits, reason: rampVersions.reason, createdAt: rampVersions.createdAt },
     })
     .from(mapSets)
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, mapSets.programId))
     .innerJoin(paramVersions, eq(paramVersions.id, mapSets.paramVersionId))
+    .leftJoin(rampVersions, eq(rampVersions.id, mapSets.rampVersionId))
     .leftJoin(creator, eq(creator.id, mapSets.createdBy))
     .where(eq(mapSets.id, id))
   if (!row) return null
   const parts = await loadParts([row.driveRevisionId, row.regenRevisionId].filter((x): x is number => x !== null))
   const releases = await listSetReleases(id)
-  const { driveRevisionId, regenRevisionId, pv, ...rest } = row
+  const { driveRevisionId, regenRevisionId, pv, rv, ...rest } = row
   return {
     ...rest,
     drive: driveRevisionId ? (parts.get(driveRevisionId) ?? null) : null,
     regen: regenRevisionId ? (parts.get(regenRevisionId) ?? null) : null,
     paramVersion: pv,
+    rampVersion: rv?.id ? rv : null,
     releases,
     status: setStatus(releases),
   }
@@ -189,6 +196,7 @@ export async function listSets(filter: { programId?: number; revisionId?: number
       ...setColumns,
       ...setPartColumns,
       paramVersion: paramVersions.number,
+      rampVersion: rampVersions.number,
       params: paramVersions.params,
       reports: sql<number>`(select count(*) from drive_reports d where d.set_id = map_sets.id)::int`,
       releaseId: sql<number | null>`${latestRelease('id')}`,
@@ -198,6 +206,7 @@ export async function listSets(filter: { programId?: number; revisionId?: number
     .from(mapSets)
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, mapSets.programId))
     .innerJoin(paramVersions, eq(paramVersions.id, mapSets.paramVersionId))
+    .leftJoin(rampVersions, eq(rampVersions.id, mapSets.rampVersionId))
     .leftJoin(driveRev, eq(driveRev.id, mapSets.driveRevisionId))
     .leftJoin(driveMap, eq(driveMap.id, driveRev.mapId))
     .leftJoin(regenRev, eq(regenRev.id, mapSets.regenRevisionId))
@@ -220,7 +229,7 @@ export type CreateSetResult = { id: number; number: number; existing: boolean }
  * Create the set of these parts, or return the one that already holds exactly them (one
  * combination, one set). The program row is locked so numbers run 1, 2, 3 … without a race.
  */
-export async function createSet(input: { programId: number; driveRevisionId: number; regenRevisionId: number; paramVersionId: number; note: string; createdBy: number }): Promise<CreateSetResult> {
+export async function createSet(input: { programId: number; driveRevisionId: number; regenRevisionId: number; paramVersionId: number; rampVersionId?: number | null; note: string; createdBy: number }): Promise<CreateSetResult> {
   const db = await getDb()
   return db.transaction(async (tx) => {
     await tx.select({ id: vehiclePrograms.id }).from(vehiclePrograms).where(eq(vehiclePrograms.id, input.programId)).for('update')
@@ -232,7 +241,7 @@ export async function createSet(input: { programId: number; driveRevisionId: num
       .values({ ...input, partsKey: key, number: sql`(select coalesce(max(${mapSets.number}), 0) + 1 from ${mapSets} where ${mapSets.programId} = ${input.programId})` })
       .returning({ id: mapSets.id, number: mapSets.number })
     await recordAudit(
-      { actorId: input.createdBy, action: 'set.create', entityType: 'map_set', entityId: row.id, details: { number: row.number, driveRevisionId: input.driveRevisionId, regenRevisionId: input.regenRevisionId, paramVersionId: input.paramVersionId } },
+      { actorId: input.createdBy, action: 'set.create', entityType: 'map_set', entityId: row.id, details: { number: row.number, driveRevisionId: input.driveRevisionId, regenRevisionId: input.regenRevisionId, paramVersionId: input.paramVersionId, rampVersionId: input.rampVersionId ?? null } },
       tx,
     )
     return { ...row, existing: false }

@@ -50,6 +50,9 @@ FIELDS['releaseConditions.marginPct'] = { label: 'Release check: traction margin
 FIELDS['releaseConditions.designLateralAccelMps2'] = { label: 'Release check: design lateral acceleration', unit: 'm/s²', scale: 1 }
 FIELDS['releaseConditions.batteryCorners'] = { label: 'Release check: battery corners', unit: '', scale: 1, kind: 'corners' }
 FIELDS['releaseConditions.minLiftOffDecelMps2'] = { label: 'Release check: minimum lift-off deceleration', unit: 'm/s²', scale: 1 }
+FIELDS['releaseConditions.maxPeakJerkMps3'] = { label: 'Comfort: largest peak jerk', unit: 'm/s³', scale: 1 }
+FIELDS['releaseConditions.maxTimeTo90S'] = { label: 'Comfort: longest time to 90 % torque', unit: 's', scale: 1 }
+FIELDS['releaseConditions.comfortSource'] = { label: 'Comfort: source of the limits', unit: '', scale: 1 }
 
 /** Rows follow the program form's order; a gear sits with the gear ratios, unknown paths come last. */
 const ORDER = Object.keys(FIELDS)

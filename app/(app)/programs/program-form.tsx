@@ -14,6 +14,7 @@ import { ScaledNumberInput } from './scaled-number-input'
 import { DRIVE_TYRE_FIELDS, TRAILER_FIELDS, TRAILER_START, VEHICLE_FIELDS, withoutBlankTyre } from './program-fields'
 import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
 import { TandemFields } from './tandem-fields'
+import { DEFAULT_COMFORT } from '@/app/_lib/sets/drivability-defaults'
 import { tidyProgramValues } from './form-tidy'
 import { BatteryTableFields } from './battery-table-fields'
 import { BatteryCornersFields } from './battery-corners-fields'
@@ -186,6 +187,15 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
             />
           </div>
           <BatteryCornersFields control={control} register={register} />
+          <fieldset className="grid max-w-3xl gap-4 sm:grid-cols-3">
+            <legend className="label">Comfort limits of the drivability manoeuvres (blank: {DEFAULT_COMFORT.maxPeakJerkMps3} m/s³ and {DEFAULT_COMFORT.maxTimeTo90S} s, common practice)</legend>
+            <ScaledNumberInput control={control} name="releaseConditions.maxPeakJerkMps3" label="Largest peak jerk" unit="m/s³" />
+            <ScaledNumberInput control={control} name="releaseConditions.maxTimeTo90S" label="Longest time to 90 % torque" unit="s" />
+            <div>
+              <label htmlFor="comfortSource" className="label">Source of these limits</label>
+              <input id="comfortSource" className="field" placeholder="e.g. the program's drivability target sheet" {...register('releaseConditions.comfortSource')} />
+            </div>
+          </fieldset>
         </section>
         {askReason && (
           <section className="card border-amber-300 bg-amber-50">

@@ -23,6 +23,7 @@ import { liftOffFindings } from '@/physics/battery'
 import type { LoadCase, VehicleParams } from '@/physics/vehicle'
 import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
 import { jackknifeExceptions, LOW_FRICTION, tractionExceptions } from '../review/gate'
+import { checkRampsAgainstMaps, type RampLimits } from '@/maps/ramps'
 
 /** Review states in which a revision has been approved by a lead (released and replaced ones were). */
 export const APPROVED_STATES: readonly RevisionState[] = ['approved', 'released', 'retired']
@@ -48,7 +49,7 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'traction' | 'jackknife' | 'lift-off' | 'drive-report' | 'coverage' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'jackknife' | 'lift-off' | 'drive-report' | 'coverage' | 'safety'
   met: boolean
   summary: string
   details: string[]
@@ -108,6 +109,8 @@ export function setGate(input: {
   /** Open safety concerns on any revision of the set: report id and the set it was filed on. */
   concerns: { reportId: number; setNumber: number }[]
   acknowledgements: Acknowledgement[]
+  /** The set's ramp limits, or null when it holds none. */
+  ramps?: RampLimits | null
 }): SetGateResult {
   const { parts, vehicle, conditions } = input
   const kinds = new Set(parts.map((p) => p.kind))
@@ -174,6 +177,7 @@ export function setGate(input: {
       summary: unexportable.length === 0 ? 'Both maps export exactly to the C header' : `${unexportable.length} map(s) cannot be exported exactly`,
       details: unexportable,
     },
+    rampCondition(input.ramps ?? null, parts),
     {
       id: 'traction',
       met: declared && tractionOpen === 0,
@@ -241,5 +245,23 @@ export function liftOffCondition(parts: SetGatePart[], vehicle: VehicleParams, c
       const worst = f.points.reduce((a, b) => (b.cornerDecelMps2 < a.cornerDecelMps2 ? b : a))
       return `${f.part.mapName} r${f.part.number}, ${f.corner.label} (${f.corner.socPct} %, ${f.corner.temperatureC} °C), ${loadCaseLabel(f.loadCase)}: ${fmt(worst.cornerDecelMps2)} m/s² instead of ${fmt(worst.nominalDecelMps2)} at ${worst.speedKmh} km/h; ${f.points.length} speed(s) below`
     }),
+  }
+}
+
+/** The largest drive torque and regen torque the set's maps ask for, N·m. */
+export function torqueRange(parts: Pick<SetGatePart, 'kind' | 'table'>[]): { driveMaxNm: number; regenMaxNm: number } {
+  const max = (kind: MapKind) => Math.max(0, ...parts.filter((p) => p.kind === kind).flatMap((p) => p.table.values.flat().map(Math.abs)))
+  return { driveMaxNm: max('drive'), regenMaxNm: max('regen') }
+}
+
+/** Ramp limits, when the set holds them, must fit its maps (the lash band inside their torque range). */
+function rampCondition(ramps: RampLimits | null, parts: SetGatePart[]): SetGateCondition {
+  if (!ramps) return { id: 'ramps', met: true, summary: 'The set holds no ramp limits: the controller keeps the ones it has', details: [] }
+  const errors = checkRampsAgainstMaps(ramps, torqueRange(parts)).filter((f) => f.severity === 'error')
+  return {
+    id: 'ramps',
+    met: errors.length === 0,
+    summary: errors.length === 0 ? 'The ramp limits fit the maps' : `The ramp limits do not fit the maps (${errors.length} problem(s))`,
+    details: errors.map((f) => f.message),
   }
 }

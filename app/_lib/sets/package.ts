@@ -4,6 +4,8 @@ import { sha256Hex, verifiedChecksum } from '@/db/checksum'
 import { SAFETY_CAUTION, toCHeader, toCsv, toJson, type MapKind, type MapTable } from '@/maps'
 import type { AcknowledgementRecord, CoverageWaiverRecord, ReleaseConditions } from '@/db/schema'
 import type { VehicleParams } from '@/physics/vehicle'
+import type { RampLimits } from '@/maps/ramps'
+import { rampsToCHeader, rampsToCsv, rampsToJson } from '@/maps/ramps-export'
 
 export type PackageMode = 'release' | 'test'
 
@@ -23,6 +25,8 @@ export interface PackageRecord {
     approvedBy: string[]
   }[]
   paramVersion: { number: number; reason: string; createdAt: string; params: VehicleParams; releaseConditions: ReleaseConditions }
+  /** The set's ramp limits; null when it holds none (old sets). */
+  rampVersion?: { number: number; reason: string; createdAt: string; limits: RampLimits } | null
   acknowledgements: AcknowledgementRecord[]
   /** Release conditions no drive report covered, waived by the lead (absent or empty: none). */
   coverageWaivers?: CoverageWaiverRecord[]
@@ -67,6 +71,14 @@ export function buildSetPackage(rec: PackageRecord, mode: PackageMode) {
   }
   const params = { format: 'mapwright-parameter-version', ...(test ? { notice: TEST_NOTICE } : {}), program: rec.program.name, ...rec.paramVersion }
   add(`parameters-v${rec.paramVersion.number}.json`, JSON.stringify(params, null, 2) + '\n')
+  const ramps = rec.rampVersion ?? null
+  if (ramps) {
+    const stem = `ramps-v${ramps.number}`
+    add(`${stem}.h`, cNote + rampsToCHeader(ramps.limits, { name: slug(rec.program.name).replace(/-/g, '_') || 'program', version: ramps.number, vehicleProgram: rec.program.name }))
+    add(`${stem}.csv`, hashNote + rampsToCsv(ramps.limits))
+    const json = rampsToJson(ramps.limits, ramps.number)
+    add(`${stem}.json`, test ? json.replace('{\n', `{\n  "notice": ${JSON.stringify(TEST_NOTICE)},\n`) : json)
+  }
   add('CAUTION.txt', (test ? TEST_NOTICE + '\n\n' : '') + SAFETY_CAUTION.join('\n') + '\n')
   const manifest = {
     format: 'mapwright-set-package',
@@ -78,6 +90,8 @@ export function buildSetPackage(rec: PackageRecord, mode: PackageMode) {
     revisions: rec.parts.map((p) => ({ kind: p.kind, map: p.mapName, mapId: p.mapId, revisionId: p.revisionId, revision: p.number, checksum: p.checksum, author: p.author, approvedBy: p.approvedBy })),
     checksumAlgorithm: 'revision checksum: SHA-256 of the canonical JSON of the table (docs/map-formats.md); file sha256: SHA-256 of the file bytes',
     parameterVersion: { number: rec.paramVersion.number, reason: rec.paramVersion.reason, createdAt: rec.paramVersion.createdAt, file: `parameters-v${rec.paramVersion.number}.json` },
+    // Left out, not null, for a set without ramps: its manifest stays as it was before ramps were a part.
+    ...(ramps ? { rampVersion: { number: ramps.number, reason: ramps.reason, createdAt: ramps.createdAt, files: ['h', 'csv', 'json'].map((x) => `ramps-v${ramps.number}.${x}`) } } : {}),
     acknowledgements: rec.acknowledgements.map((a) => ({ key: a.key, map: a.mapKind, revisionId: a.revisionId, surface: a.surface, loadCase: a.loadCase, reason: a.reason, by: a.byName, at: a.at, ...(a.cells !== undefined ? { cells: a.cells } : {}) })),
     // Only when there are any, so packages without waivers keep the bytes they always had.
     ...(rec.coverageWaivers?.length ? { coverageWaivers: rec.coverageWaivers.map((w) => ({ key: w.key, surface: w.surface, loadCase: w.loadCase, reason: w.reason, by: w.byName, at: w.at })) } : {}),

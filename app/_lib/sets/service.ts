@@ -6,6 +6,7 @@ import { sha256Hex } from '@/db/checksum'
 import { getRevisionWithMap } from '@/db/queries/maps'
 import { emailOfUser, emailsOfRole } from '@/db/queries/mail'
 import { getParamVersionByNumber, latestParamVersion } from '@/db/queries/param-versions'
+import { getRampVersionByNumber, latestRampVersion } from '@/db/queries/ramp-versions'
 import { listReports } from '@/db/queries/reports'
 import { listRevisionEvents } from '@/db/queries/review'
 import { createSet, getSet, openSafetyConcerns, recordSetRelease, recordSetWithdrawal, SET_STATUS_LABELS, type MapSetFull, type SetPart } from '@/db/queries/sets'
@@ -38,7 +39,7 @@ const gateParts = (set: MapSetFull): SetGatePart[] => partsOf(set).map((p) => ({
 export async function setGateFor(set: MapSetFull, acknowledgements: Acknowledgement[] = recordedAcks(set)): Promise<SetGateResult> {
   const reports = await listReports({ setId: set.id })
   const concerns = await openSafetyConcerns(partsOf(set).map((p) => p.revisionId))
-  return setGate({ parts: gateParts(set), vehicle: set.paramVersion.params, conditions: set.paramVersion.releaseConditions, reports, concerns, acknowledgements })
+  return setGate({ parts: gateParts(set), vehicle: set.paramVersion.params, conditions: set.paramVersion.releaseConditions, reports, concerns, acknowledgements, ramps: set.rampVersion?.limits ?? null })
 }
 
 const recordedAcks = (set: MapSetFull): Acknowledgement[] => {
@@ -64,7 +65,7 @@ export function setFindings(set: MapSetFull): SetFindings {
  * Make the set of a drive revision, a regen revision and a parameter version of one program
  * (the latest version when none is named). Drafts are allowed: trucks are tested before approval.
  */
-export async function createSetFor(user: SessionUser, input: { driveRevisionId: number; regenRevisionId: number; paramVersion?: number; note: string }) {
+export async function createSetFor(user: SessionUser, input: { driveRevisionId: number; regenRevisionId: number; paramVersion?: number; rampVersion?: number | null; note: string }) {
   const drive = await getRevisionWithMap(input.driveRevisionId)
   if (!drive) throw new ValidationError(`driveRevisionId: revision ${input.driveRevisionId} does not exist`)
   const regen = await getRevisionWithMap(input.regenRevisionId)
@@ -76,7 +77,10 @@ export async function createSetFor(user: SessionUser, input: { driveRevisionId: 
   const programId = drive.map.programId
   const version = input.paramVersion === undefined ? await latestParamVersion(programId) : await getParamVersionByNumber(programId, input.paramVersion)
   if (!version) throw new ValidationError(`paramVersion: ${drive.map.programName} has no parameter version ${input.paramVersion ?? ''}`.trim())
-  return createSet({ programId, driveRevisionId: drive.revision.id, regenRevisionId: regen.revision.id, paramVersionId: version.id, note: input.note, createdBy: user.id })
+  const ramps =
+    input.rampVersion === null ? null : input.rampVersion === undefined ? await latestRampVersion(programId) : await getRampVersionByNumber(programId, input.rampVersion)
+  if (input.rampVersion != null && !ramps) throw new ValidationError(`rampVersion: ${drive.map.programName} has no ramp version ${input.rampVersion}`)
+  return createSet({ programId, driveRevisionId: drive.revision.id, regenRevisionId: regen.revision.id, paramVersionId: version.id, rampVersionId: ramps?.id ?? null, note: input.note, createdBy: user.id })
 }
 
 /** Approvers of a revision by name, as the review events recorded them. */
@@ -94,6 +98,7 @@ async function packageRecord(set: MapSetFull, acknowledgements: AcknowledgementR
       partsOf(set).map(async (p) => ({ kind: p.kind, mapId: p.mapId, mapName: p.mapName, revisionId: p.revisionId, number: p.number, checksum: p.checksum, table: p.table, author: p.authorName, approvedBy: await approversOf(p.revisionId) })),
     ),
     paramVersion: { number: set.paramVersion.number, reason: set.paramVersion.reason, createdAt: set.paramVersion.createdAt.toISOString(), params: set.paramVersion.params, releaseConditions: set.paramVersion.releaseConditions },
+    rampVersion: set.rampVersion && { number: set.rampVersion.number, reason: set.rampVersion.reason, createdAt: set.rampVersion.createdAt.toISOString(), limits: set.rampVersion.limits },
     acknowledgements,
     coverageWaivers,
     evidenceReportIds: reports.map((r) => r.id).sort((a, b) => a - b),

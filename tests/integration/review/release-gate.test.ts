@@ -6,7 +6,7 @@ import { SMALL_DRIVE } from '@/tests/support/fixtures'
 import { GENTLE, stateOf } from '@/tests/support/review-fixtures'
 import { approve, fileCoveringReports, gateMet, getSetView, makeSet, releaseSet, setSetup } from '@/tests/support/set-fixtures'
 
-const ALL_MET = { parts: true, approved: true, validation: true, exportable: true, traction: true, jackknife: true, 'drive-report': true, coverage: true, safety: true }
+const ALL_MET = { parts: true, approved: true, validation: true, exportable: true, ramps: true, traction: true, jackknife: true, 'drive-report': true, coverage: true, safety: true }
 
 /** A set whose two revisions are approved and which has a clean drive report, so only the condition under test can fail. */
 async function readySet(opts: { drive?: typeof GENTLE; report?: boolean; approveRegen?: boolean } = {}) {

@@ -240,7 +240,7 @@ describe('GENTLE fixture sanity', () => {
     await approve(s, s.regenRevisionId)
     const id = await makeSet(s)
     await fileCoveringReports(id, s.driverCookie)
-    expect(gateMet(await getSetView(id, s.leadCookie))).toEqual({ parts: true, approved: true, validation: true, exportable: true, traction: true, jackknife: true, 'drive-report': true, coverage: true, safety: true })
+    expect(gateMet(await getSetView(id, s.leadCookie))).toEqual({ parts: true, approved: true, validation: true, exportable: true, ramps: true, traction: true, jackknife: true, 'drive-report': true, coverage: true, safety: true })
   })
 })
 

@@ -44,7 +44,10 @@ export default async function ProgramPage({
             Parameter version {program.paramVersion} · <a href="#versions" className="text-accent hover:underline">history</a>
           </p>
         </div>
-        <Link href={`/programs/${program.id}/physics`} className="btn sm:ml-auto">Traction and launch physics</Link>
+        <div className="flex flex-wrap gap-2 sm:ml-auto">
+          <Link href={`/programs/${program.id}/ramps`} className="btn">Torque ramp limits</Link>
+          <Link href={`/programs/${program.id}/physics`} className="btn">Traction and launch physics</Link>
+        </div>
       </div>
       {saved && (
         <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">

@@ -72,6 +72,9 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
           {set.status === 'released' && latest ? ` · released ${formatTime(latest.releasedAt)} by ${latest.releasedByName}` : ''}
         </p>
         {set.note && <p className="text-sm break-words whitespace-pre-line">{set.note}</p>}
+        <p className="pt-1">
+          <Link href={`/sets/${set.id}/drivability`} className="btn">Drivability: tip-in, tip-out, launch</Link>
+        </p>
       </div>
       {set.status === 'withdrawn' && latest?.withdrawnAt && <WithdrawnBanner setNumber={set.number} at={latest.withdrawnAt} by={withdrawnBy(set.id, latest.id, audit)} reason={latest.withdrawReason} />}
       {(set.status === 'withdrawn' || set.status === 'retired') && (

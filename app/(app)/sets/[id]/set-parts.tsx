@@ -1,4 +1,5 @@
 import Link from 'next/link'
+import { RampTable } from '@/app/_components/ramp-table'
 import { formatTime, shortChecksum } from '@/app/_components/format'
 import type { MapSetFull, SetPart } from '@/db/queries/sets'
 import { STATE_LABELS } from '@/domain/revision-states'
@@ -35,7 +36,7 @@ function PartCard({ kind, part }: { kind: 'drive' | 'regen'; part: SetPart | nul
   )
 }
 
-/** The three parts of the set: the two map revisions and the parameter version they are judged with. */
+/** The parts of the set: the two map revisions, the parameter version they are judged with, and the ramp limits. */
 export function SetParts({ set }: { set: MapSetFull }) {
   const pv = set.paramVersion
   const c = pv.releaseConditions
@@ -61,6 +62,20 @@ export function SetParts({ set }: { set: MapSetFull }) {
           <p className="mt-2 text-sm">
             <Link href={`/programs/${set.programId}`} className="text-accent hover:underline">{set.programName}: vehicle program</Link>
           </p>
+        </div>
+        <div className="card min-w-0 md:col-span-3" data-testid="set-ramps">
+          {set.rampVersion ? (
+            <>
+              <h3 className="mb-2 font-semibold">Torque ramp limits v{set.rampVersion.number}</h3>
+              <p className="mb-2 break-words text-sm">“{set.rampVersion.reason}” · {formatTime(set.rampVersion.createdAt)}</p>
+              <RampTable limits={set.rampVersion.limits} />
+            </>
+          ) : (
+            <p className="text-sm">
+              <span className="font-semibold">No torque ramp limits in this set:</span> the controller keeps the ramps it has, so they are not part of what
+              was driven and judged here. <Link href={`/programs/${set.programId}/ramps`} className="text-accent underline">The program’s ramp limits</Link>
+            </p>
+          )}
         </div>
       </div>
     </section>

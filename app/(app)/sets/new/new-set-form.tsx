@@ -19,6 +19,8 @@ export interface ProgramChoice {
   name: string
   /** Newest first. */
   versions: { number: number; reason: string; at: string }[]
+  /** Torque ramp versions, newest first (may be none). */
+  ramps: { number: number; reason: string; at: string }[]
   maps: { id: number; name: string; kind: 'drive' | 'regen'; revisions: RevisionChoice[] }[]
 }
 
@@ -37,6 +39,7 @@ export function NewSetForm({ programs, initial }: { programs: ProgramChoice[]; i
   const [drive, setDrive] = useState(has(program, 'drive', initial.driveRevisionId) ? String(initial.driveRevisionId) : '')
   const [regen, setRegen] = useState(has(program, 'regen', initial.regenRevisionId) ? String(initial.regenRevisionId) : '')
   const [version, setVersion] = useState(program?.versions[0] ? String(program.versions[0].number) : '')
+  const [ramps, setRamps] = useState(program?.ramps[0] ? String(program.ramps[0].number) : 'none')
   const [note, setNote] = useState('')
   const [error, setError] = useState<string | null>(null)
   const [existing, setExisting] = useState<Created['set'] | null>(null)
@@ -57,6 +60,7 @@ export function NewSetForm({ programs, initial }: { programs: ProgramChoice[]; i
     setDrive('')
     setRegen('')
     setVersion(p?.versions[0] ? String(p.versions[0].number) : '')
+    setRamps(p?.ramps[0] ? String(p.ramps[0].number) : 'none')
     setExisting(null)
   }
 
@@ -64,7 +68,7 @@ export function NewSetForm({ programs, initial }: { programs: ProgramChoice[]; i
     e.preventDefault()
     setExisting(null)
     if (!drive || !regen) return setError('Choose a drive revision and a regen revision')
-    create.mutate({ driveRevisionId: Number(drive), regenRevisionId: Number(regen), ...(version ? { paramVersion: Number(version) } : {}), note })
+    create.mutate({ driveRevisionId: Number(drive), regenRevisionId: Number(regen), ...(version ? { paramVersion: Number(version) } : {}), rampVersion: ramps === 'none' ? null : Number(ramps), note })
   }
 
   if (programs.length === 0) return <p>Create a vehicle program and its maps first.</p>
@@ -128,6 +132,21 @@ export function NewSetForm({ programs, initial }: { programs: ProgramChoice[]; i
           <p id="paramVersion" className="text-sm text-danger">{program?.name} has no parameter version.</p>
         )}
         <p id="paramVersion-hint" className="mt-1 text-xs text-slate-600">The vehicle parameters and release conditions both maps are judged with. The latest is the usual choice.</p>
+      </div>
+      <div>
+        <label htmlFor="rampVersion" className="label">Torque ramp limits</label>
+        <select id="rampVersion" name="rampVersion" className="field" value={ramps} onChange={(e) => setChoice(setRamps, e.target.value)} aria-describedby="rampVersion-hint">
+          {program?.ramps.map((v, i) => (
+            <option key={v.number} value={v.number}>
+              ramps v{v.number}{i === 0 ? ' (latest)' : ''} — {v.reason}, {v.at}
+            </option>
+          ))}
+          <option value="none">None: the controller keeps the ramps it has</option>
+        </select>
+        <p id="rampVersion-hint" className="mt-1 text-xs text-slate-600">
+          How fast torque may rise and fall.{' '}
+          {program && <Link href={`/programs/${program.id}/ramps`} className="text-accent underline">Edit the program’s ramp limits</Link>}
+        </p>
       </div>
       <div>
         <label htmlFor="note" className="label">Note (optional)</label>

@@ -5,6 +5,7 @@ import { idOrNull } from '@/app/_lib/http/page-params'
 import { formatTime } from '@/app/_components/format'
 import { getRevisionWithMap, listMaps } from '@/db/queries/maps'
 import { listParamVersions } from '@/db/queries/param-versions'
+import { listRampVersions } from '@/db/queries/ramp-versions'
 import { listPrograms } from '@/db/queries/programs'
 import { listRevisions, type RevisionSummary } from '@/db/queries/revisions'
 import { STATE_LABELS } from '@/domain/revision-states'
@@ -22,14 +23,16 @@ export default async function NewSetPage(props: { searchParams: Promise<Record<s
   const q = await props.searchParams
   const wanted = { drive: idOrNull(q.drive, 'Drive revision id'), regen: idOrNull(q.regen, 'Regen revision id') }
   const [programs, maps] = await Promise.all([listPrograms(), listMaps()])
-  const [revisions, versions] = await Promise.all([
+  const [revisions, versions, ramps] = await Promise.all([
     Promise.all(maps.map((m) => listRevisions(m.id, { limit: REVISIONS_PER_MAP }))),
     Promise.all(programs.map((p) => listParamVersions(p.id))),
+    Promise.all(programs.map((p) => listRampVersions(p.id))),
   ])
   const choices: ProgramChoice[] = programs.map((p, i) => ({
     id: p.id,
     name: p.name,
     versions: versions[i].map((v) => ({ number: v.number, reason: v.reason, at: formatTime(v.createdAt) })),
+    ramps: ramps[i].map((v) => ({ number: v.number, reason: v.reason, at: formatTime(v.createdAt) })),
     maps: maps.flatMap((m, j) =>
       m.programId !== p.id
         ? []

@@ -13,7 +13,7 @@ import { signIn, startServer, type BenchServer } from './server'
 
 const BENCH = 'api-load'
 const READ_CONNECTIONS = 10
-const READ_AMOUNT = 5000
+const READ_AMOUNT = 10000
 const SAVE_AMOUNT = 300
 const TIME_CAP_S = 15
 

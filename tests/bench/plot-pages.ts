@@ -9,13 +9,13 @@
  *   heat maps drawn; usable = that plus the surfaces A and B and the difference drawn in WebGL.
  * - physics (the first demo program): usable = the traction table and the first plot drawn.
  */
-import { chromium, type Browser, type Page } from 'playwright-core'
+import type { Browser, Page } from 'playwright-core'
+import { launchChromium } from './browser'
 import { figure, isMain, median, runStandalone, type BenchResult, type Figure } from './report'
 import { signIn, startServer, type BenchServer } from './server'
 
 const BENCH = 'plot-pages'
 const LOADS = 5
-const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync']
 
 /** What the page waits for: CSS selectors that must all match, each at least `count` times. */
 interface Goal { name: string; all: { sel: string; count: number }[] }
@@ -81,7 +81,7 @@ export async function runPlotPages(shared?: BenchServer): Promise<BenchResult> {
     const pair = maps.maps.find((m) => m.kind === 'drive' && (m.latestNumber ?? 0) >= 3) ?? maps.maps.find((m) => m.kind === 'drive' && (m.latestNumber ?? 0) >= 2)
     if (!pair) throw new Error('no demo drive map with two revisions')
     const last = pair.latestNumber ?? 2
-    browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS })
+    browser = await launchChromium()
 
     const compareUrl = `/maps/compare?a=${pair.id}:${last - 1}&b=${pair.id}:${last}&loadCase=empty&surface=gravel`
     const twoD: Goal = { name: '2-D views', all: [{ sel: '[data-testid="change-table"] tbody tr', count: 1 }, { sel: '[data-testid="slip-heatmap-a"] .main-svg', count: 1 }, { sel: '[data-testid="slip-heatmap-b"] .main-svg', count: 1 }] }

@@ -11,7 +11,14 @@ type Row = Record<string, unknown>
 interface PgPool { query: (q: { name: string; text: string; values: unknown[] }) => Promise<{ rows: Row[] }> }
 interface Pglite { exec: (sql: string) => Promise<unknown>; query: (sql: string) => Promise<{ rows: Row[] }> }
 
-const preparedOn = new WeakMap<object, Map<string, Promise<unknown>>>()
+// On globalThis: Next loads route handlers and pages as separate module copies, which share one
+// PGlite session, and a statement can be prepared only once per session.
+const registryKey = Symbol.for('mapwright.prepared-statements')
+const g = globalThis as typeof globalThis & { [registryKey]?: WeakMap<object, Map<string, Promise<unknown>>> }
+const preparedOn = (g[registryKey] ??= new WeakMap())
+
+/** PostgreSQL's "duplicate_prepared_statement": prepared already in this session, which is what we wanted. */
+const alreadyPrepared = (e: unknown) => (e as { code?: string } | null)?.code === '42P05'
 
 /** Runs statement `name` (SQL with $1…$n) with integer arguments only, so PGlite's EXECUTE can carry them as literals. */
 export async function executePrepared(name: string, text: string, args: number[]): Promise<Row[]> {
@@ -26,9 +33,12 @@ export async function executePrepared(name: string, text: string, args: number[]
   let ready = named.get(name)
   if (!ready) {
     const types = args.map(() => 'bigint').join(', ')
-    ready = pg.exec(`prepare ${name} (${types}) as ${text}`)
+    ready = pg.exec(`prepare ${name} (${types}) as ${text}`).catch((e: unknown) => {
+      if (alreadyPrepared(e)) return
+      named.delete(name) // a failed prepare is tried again next time
+      throw e
+    })
     named.set(name, ready)
-    ready.catch(() => named.delete(name)) // a failed prepare is tried again next time
   }
   await ready
   return (await pg.query(`execute ${name} (${args.join(', ')})`)).rows

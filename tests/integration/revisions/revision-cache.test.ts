@@ -7,6 +7,9 @@ import * as sessionRoute from '@/app/api/session/route'
 import { REVISION_TABLE_CACHE_SIZE, revisionTable, revisionTableCached } from '@/db/queries/revision-tables'
 import { getProgram, updateProgram } from '@/db/queries/programs'
 import { validate, limitsFromVehicle } from '@/maps'
+import { getDb } from '@/db/client'
+import { executePrepared } from '@/db/prepared'
+import { sql } from 'drizzle-orm'
 import { call, sessionCookie } from '@/tests/support/api'
 import { tipperWithMaps } from '../physics-api/fixtures'
 
@@ -58,5 +61,19 @@ describe('GET /api/session', () => {
     const ok = await call(sessionRoute.GET, { cookie: await sessionCookie(author) })
     expect(ok).toEqual({ status: 200, body: { user: { id: author.id, name: author.name, role: 'calibration_engineer' } } })
     expect((await call(sessionRoute.GET)).status).toBe(401)
+  })
+})
+
+describe('prepared statements', () => {
+  it('uses a statement another module copy already prepared in the same session (Next loads routes and pages apart)', async () => {
+    const db = await getDb()
+    await db.execute(sql.raw('prepare twice_prepared (bigint) as select $1::int + 1 as n'))
+    expect(await executePrepared('twice_prepared', 'select $1::int + 1 as n', [41])).toEqual([{ n: 42 }])
+    expect(await executePrepared('twice_prepared', 'select $1::int + 1 as n', [1])).toEqual([{ n: 2 }])
+  })
+
+  it('refuses arguments that are not integers and names that are not plain words', async () => {
+    await expect(executePrepared('some_name', 'select $1', [1.5])).rejects.toThrow(/arguments must be integers, got 1.5/)
+    await expect(executePrepared('x; drop table maps', 'select 1', [])).rejects.toThrow(/lower-case letters and _/)
   })
 })

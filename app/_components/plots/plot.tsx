@@ -9,11 +9,11 @@ import type { Data, Layout } from 'plotly.js'
 import { dataAsText, layoutAsText, plotConfig } from './plot-text'
 
 /**
- * The plot library is the slowest thing these pages wait for (several MB to fetch and run): start it
- * as soon as any page that can plot runs its scripts, instead of when the first plot mounts.
+ * The plot library (several MB to fetch and run). Loaded when the first plot mounts, after the page
+ * has hydrated: loading it any earlier runs it before hydration and leaves the page's buttons dead
+ * for that long.
  */
 export const loadPlotLibrary = () => import('./plotly-component')
-if (typeof window !== 'undefined') void loadPlotLibrary().catch(() => undefined) // a failure shows where the plot mounts
 
 const PlotlyComponent = dynamic(() => import('./plotly-component'), {
   ssr: false,

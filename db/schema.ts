@@ -53,6 +53,12 @@ export interface ReleaseConditions {
   maxPeakJerkMps3?: number
   maxTimeTo90S?: number
   comfortSource?: string
+  /** Replay margin of the gate's optional evidence-replay condition, N·m (absent: no such condition). */
+  replayMarginNm?: number
+  /** Startability and gradeability, laden: steepest start grade %, and a grade % to hold at a speed km/h (absent: not checked). */
+  startGradePct?: number
+  holdGradePct?: number
+  holdSpeedKmh?: number
 }
 
 /** A gate exception the lead released anyway, with the reason given. */
@@ -99,6 +105,8 @@ export const users = pgTable(
     disabled: boolean('disabled').notNull().default(false),
     /** Carried in every session token; raised on a password change, reset or disabling to end all sessions. */
     sessionVersion: integer('session_version').notNull().default(1),
+    /** Set when the account is made by invitation; cleared once a password is set (by the link or by an admin). */
+    invitedAt: timestamp('invited_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },

@@ -29,7 +29,7 @@ export const DEMO_PROGRAMS = [
     name: 'BX-64 Tipper',
     description: 'Demo: 6×4 battery-electric tipper for quarry and site work (invented numbers).',
     params: demoTipper,
-    releaseConditions: { surfaces: ['wet-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'], marginPct: 10, batteryCorners: DEMO_BATTERY_CORNERS, minLiftOffDecelMps2: 0.3 } satisfies ReleaseConditions,
+    releaseConditions: { surfaces: ['wet-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'], marginPct: 10, batteryCorners: DEMO_BATTERY_CORNERS } satisfies ReleaseConditions,
   },
   {
     name: 'BX-64 Tractor',

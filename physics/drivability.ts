@@ -101,7 +101,9 @@ export function simulateManoeuvre(o: DrivabilityOptions): DrivabilityResult {
     [],
   )
   const after = run.samples.filter((s) => s.t > SETTLE_S + 1e-9)
-  const target = request(to, after[0]?.speedKmh ?? speedKmh)
+  // The request at the speed the controller sees (road or driven-wheel, docs/physics.md §9a).
+  const seen = after[0] ? (o.vehicle.mapSpeedSource === 'driven-wheel' ? after[0].wheelSpeedKmh : after[0].speedKmh) : speedKmh
+  const target = request(to, seen)
   const change = target - start
   const reached = after.find((s) => (change >= 0 ? s.motorTorqueNm >= start + 0.9 * change : s.motorTorqueNm <= start + 0.9 * change))
   const jerks = after.map((s) => s.jerkMps3)

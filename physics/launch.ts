@@ -31,7 +31,8 @@ export interface LaunchSummary {
 export interface LaunchResult { samples: SimSample[]; summary: LaunchSummary }
 
 /**
- * Simulates a launch. Drive-map torque is looked up at the pedal % and the vehicle road speed,
+ * Simulates a launch. Drive-map torque is looked up at the pedal % and the road speed (the driven-wheel
+ * speed when `vehicle.mapSpeedSource` says so, docs/physics.md §9a),
  * clipped to the motor envelope and battery discharge power at the actual motor speed.
  * @example simulateLaunch({ vehicle: truck, loadCase: 'laden', surface: 'wet-asphalt', map: driveMap,
  *   pedal: { kind: 'step', pedalPct: 100 }, durationS: 30 }).summary.timeTo50KmhS

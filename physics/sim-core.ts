@@ -6,6 +6,9 @@
  * Magic Formula mode: linearised implicit Euler in (ω, V) (stable on the stiff slip mode near standstill).
  * No-slip mode (idealised tyre, ω = V/R): classical RK4 on V with m_eff = m + J/R².
  * No rollback: at standstill the vehicle is held unless the drive force beats grade and rolling resistance.
+ * Map lookup speed: the road speed V, or with `vehicle.mapSpeedSource = 'driven-wheel'` the drive-wheel
+ * speed ω·R (the controller only sees the motor speed), which a spin raises; the ramps see the same speed.
+ * No traction control acts: the request is what the map gives at that speed (docs/physics.md §9a).
  */
 import { driveAxleLoadN } from './axle-model'
 import { driveCurveFor } from './drive-curve'
@@ -101,12 +104,14 @@ export function runSimulation(o: SimOptions, pedal: (t: number) => number, reque
   let cmdPrev = o.initialCommandNm ?? 0
   let cmdLast = cmdPrev
   const limit = o.torqueLimiter ?? ((c: number, req: number) => Math.max(c - rate * h, Math.min(c + rate * h, req)))
-  const command = (t: number, V: number): number => (cmdLast = limit(cmdPrev, request(pedal(t), V * 3.6), V * 3.6, h))
+  // `U` is the looked-up speed, m/s: the road speed, or the drive-wheel speed ω·R when the program says so.
+  const command = (t: number, U: number): number => (cmdLast = limit(cmdPrev, request(pedal(t), U * 3.6), U * 3.6, h))
   const capped = (cmd: number, wShaft: number): number => {
     const cap = deliverableAtShaft(v, wShaft, cmd < 0 ? 'regen' : 'drive')
     return Math.max(-cap, Math.min(cap, cmd))
   }
-  const motorTorque = (t: number, V: number, wShaft: number): number => capped(command(t, V), wShaft)
+  const motorTorque = (t: number, U: number, wShaft: number): number => capped(command(t, U), wShaft)
+  const onWheel = v.mapSpeedSource === 'driven-wheel'
   let t = 0, V = v0, w = v0 / R, a = 0, aPrevSample = 0, tPrevSample = 0, tm = 0, fx = 0, kappa = 0
   const run: SimRun = { samples: [], crossings: crossKmh.map(() => null), peakSlip: 0, minSlip: 0, tyrePeakSlip: kPeak,
     timeBeyondPeakDriveS: 0, timeBeyondPeakBrakeS: 0, firstLockS: null, peakJerkMps3: 0 }
@@ -136,7 +141,7 @@ export function runSimulation(o: SimOptions, pedal: (t: number) => number, reque
       tm = tq(t + h, V)
       fx = wheelTorqueFromMotor(v, tm, gearIndex) / R - (J / (R * R)) * ((V - Vp) / h)
     } else {
-      tm = motorTorque(t, V, w * G)
+      tm = motorTorque(t, onWheel ? w * R : V, w * G)
       const tw = wheelTorqueFromMotor(v, tm, gearIndex)
       const vDen = Math.max(Math.abs(V), SLIP_SPEED_FLOOR_MPS)
       kappa = (w * R - V) / vDen

@@ -55,7 +55,16 @@ export interface VehicleParams {
   trailer?: TrailerParams | null
   /** Drive tyre (slip stiffness, shape, load sensitivity); absent = the default truck tyre (physics/drive-tyre.ts). */
   driveTyre?: DriveTyreParams | null
+  /**
+   * The speed the controller looks the maps and ramps up on: 'road' = true road speed (a non-driven
+   * axle or satellite positioning); 'driven-wheel' = drive-wheel speed from the motor speed, which a
+   * wheel spin raises. Absent = 'road', so stored versions judge as before.
+   */
+  mapSpeedSource?: MapSpeedSource
 }
+
+export const MAP_SPEED_SOURCES = ['road', 'driven-wheel'] as const
+export type MapSpeedSource = (typeof MAP_SPEED_SOURCES)[number]
 
 export const AXLE_LAYOUTS = ['4x2', '6x4', '6x2'] as const
 export type AxleLayout = (typeof AXLE_LAYOUTS)[number]
@@ -196,6 +205,7 @@ export const vehicleParamsSchema = z
     driveWheelsInertiaKgM2: z.number().min(0, 'Drive wheel inertia must not be negative').max(500),
     trailer: trailerParamsSchema.nullish(),
     driveTyre: driveTyreSchema.nullish(),
+    mapSpeedSource: z.enum(MAP_SPEED_SOURCES, { error: 'Map lookup speed must be road or driven-wheel' }).optional(),
   })
   .superRefine((v, ctx) => {
     if (v.grossMassKg < v.emptyMassKg)

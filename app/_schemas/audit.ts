@@ -10,4 +10,14 @@ export const auditFilterSchema = z.strictObject({
   until: dateFilter('until').optional(),
   format: z.enum(['json', 'csv'], { error: 'format must be json or csv' }).default('json'),
   limit: limitParam(10_000, 500),
+  /** Which page of `limit` rows, newest first: page 2 skips the first `limit`. */
+  page: z
+    .string()
+    .regex(/^[1-9][0-9]{0,5}$/, 'page must be a whole number from 1 to 999999')
+    .transform(Number)
+    .optional()
+    .transform((n) => n ?? 1),
 })
+
+/** Rows per page on the audit page (the API's own default stays `limit`'s). */
+export const AUDIT_PAGE_SIZE = 50

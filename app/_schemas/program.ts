@@ -32,6 +32,16 @@ export const releaseConditionsSchema = z.object({
   maxPeakJerkMps3: z.number({ error: 'The largest peak jerk must be a number (m/s³)' }).min(0.5, 'The largest peak jerk is at least 0.5 m/s³').max(50, 'The largest peak jerk is at most 50 m/s³').optional(),
   maxTimeTo90S: z.number({ error: 'The longest time to 90 % torque must be a number (s)' }).min(0.05, 'The longest time to 90 % torque is at least 0.05 s').max(10, 'The longest time to 90 % torque is at most 10 s').optional(),
   comfortSource: z.string().trim().max(300, atMost('The source of the comfort limits', 300)).optional(),
+  /** When declared, the gate replays the program's evidence logs through the set: its request may exceed what was driven by at most this, N·m. */
+  replayMarginNm: z.number({ error: 'The replay margin must be a number (N·m)' }).min(0, 'The replay margin is 0 N·m or more').max(10_000, 'The replay margin is at most 10,000 N·m').optional(),
+  /** Startability and gradeability, laden (absent: not checked; physics/gradeability.ts). Grades in % (rise per 100 run). */
+  startGradePct: z.number({ error: 'The start grade must be a number (%)' }).gt(0, 'The start grade is more than 0 %').max(60, 'The start grade is at most 60 %').optional(),
+  holdGradePct: z.number({ error: 'The hold grade must be a number (%)' }).gt(0, 'The hold grade is more than 0 %').max(60, 'The hold grade is at most 60 %').optional(),
+  holdSpeedKmh: z.number({ error: 'The hold speed must be a number (km/h)' }).min(1, 'The hold speed is at least 1 km/h').max(120, 'The hold speed is at most 120 km/h').optional(),
+}).superRefine((c, ctx) => {
+  // A hold is a grade at a speed: one without the other cannot be checked.
+  if (c.holdGradePct !== undefined && c.holdSpeedKmh === undefined) ctx.addIssue({ code: 'custom', path: ['holdSpeedKmh'], message: 'Give the speed to hold on the hold grade (km/h)' })
+  if (c.holdSpeedKmh !== undefined && c.holdGradePct === undefined) ctx.addIssue({ code: 'custom', path: ['holdGradePct'], message: 'Give the grade to hold the hold speed on (%)' })
 })
 
 /** Suggested corners for a new program's release conditions (the engineer edits them). */

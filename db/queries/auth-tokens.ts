@@ -35,7 +35,7 @@ export async function consumeAuthToken(tokenHash: string, passwordHash: string):
     const [owner] = await tx.select({ disabled: users.disabled }).from(users).where(eq(users.id, tok.userId))
     if (!owner || owner.disabled) return null
     // The new password ends every session the account had (someone may have had the old one).
-    await tx.update(users).set({ passwordHash, updatedAt: new Date(), sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, tok.userId))
+    await tx.update(users).set({ passwordHash, updatedAt: new Date(), invitedAt: null, sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, tok.userId))
     await recordAudit({ actorId: tok.userId, action: `auth.${tok.kind}-used`, entityType: 'user', entityId: tok.userId }, tx)
     return tok.userId
   })

@@ -98,3 +98,10 @@ export async function updateProgram(id: number, input: ProgramFields & { reason:
   if (!result.ok) return result
   return { ok: true, program: (await getProgram(id))!, newVersion: result.newVersion }
 }
+
+/** Whether a program with this id exists: a cheap check a page makes before its slow loading starts. */
+export async function programExists(id: number): Promise<boolean> {
+  const db = await getDb()
+  const rows = await db.select({ id: vehiclePrograms.id }).from(vehiclePrograms).where(eq(vehiclePrograms.id, id))
+  return rows.length > 0
+}

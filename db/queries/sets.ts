@@ -360,20 +360,7 @@ export async function recordSetWithdrawal(tx: Tx, w: { setId: number; programId:
     .where(and(eq(setReleases.setId, w.setId), isNull(setReleases.retiredAt), isNull(setReleases.withdrawnAt)))
     .returning({ id: setReleases.id })
   if (!closed[0]) return { ok: false, restoredSetId: null }
-  const [previous] = await tx
-    .select({ id: setReleases.id, setId: setReleases.setId })
-    .from(setReleases)
-    // Never one whose set has been withdrawn since (a set released again and then withdrawn leaves an older, retired row).
-    .where(
-      and(
-        eq(setReleases.programId, w.programId),
-        isNull(setReleases.withdrawnAt),
-        sql`${setReleases.retiredAt} is not null`,
-        sql.raw('not exists (select 1 from set_releases w where w.set_id = set_releases.set_id and w.withdrawn_at is not null)'),
-      ),
-    )
-    .orderBy(desc(setReleases.releasedAt), desc(setReleases.id))
-    .limit(1)
+  const previous = await releaseToRestore(w.programId, tx)
   const mine = await partsOf(tx, w.setId)
   let restored: number[] = []
   if (previous) {
@@ -387,6 +374,29 @@ export async function recordSetWithdrawal(tx: Tx, w: { setId: number; programId:
   return { ok: true, restoredSetId: previous?.setId ?? null }
 }
 
+/**
+ * The release a withdrawal of the current one brings back: the latest replaced release, never one
+ * whose set has been withdrawn since (a set released again and then withdrawn leaves an older,
+ * retired row). The withdrawal and the lead's confirmation both ask this.
+ */
+export async function releaseToRestore(programId: number, conn?: Pick<Db, 'select'>): Promise<{ id: number; setId: number; setNumber: number } | null> {
+  const [row] = await (conn ?? (await getDb()))
+    .select({ id: setReleases.id, setId: setReleases.setId, setNumber: mapSets.number })
+    .from(setReleases)
+    .innerJoin(mapSets, eq(mapSets.id, setReleases.setId))
+    .where(
+      and(
+        eq(setReleases.programId, programId),
+        isNull(setReleases.withdrawnAt),
+        sql`${setReleases.retiredAt} is not null`,
+        sql.raw('not exists (select 1 from set_releases w where w.set_id = set_releases.set_id and w.withdrawn_at is not null)'),
+      ),
+    )
+    .orderBy(desc(setReleases.releasedAt), desc(setReleases.id))
+    .limit(1)
+  return row ?? null
+}
+
 /** The program's current released set, if any. */
 export async function currentSetRelease(programId: number) {
   const db = await getDb()
@@ -397,4 +407,35 @@ export async function currentSetRelease(programId: number) {
     .innerJoin(users, eq(users.id, setReleases.releasedBy))
     .where(and(eq(setReleases.programId, programId), isNull(setReleases.retiredAt), isNull(setReleases.withdrawnAt)))
   return row ?? null
+}
+
+/** Whether a set with this id exists: a cheap check a page makes before its slow loading starts. */
+export async function setExists(id: number): Promise<boolean> {
+  const db = await getDb()
+  const rows = await db.select({ id: mapSets.id }).from(mapSets).where(eq(mapSets.id, id))
+  return rows.length > 0
+}
+
+/**
+ * The release before one released at `releasedAt` in this program: the one in the trucks just
+ * before (released earlier, not withdrawn by then; a retirement at that moment is this release
+ * replacing it), else the latest earlier release even though it was withdrawn (`withdrawnAt` says
+ * so), so a release after a withdrawal still compares with what was driven before. Null for a
+ * program's first release.
+ */
+export async function releaseBefore(programId: number, releasedAt: Date) {
+  const db = await getDb()
+  const earlier = (alsoWithdrawn: boolean) =>
+    db
+      .select({ setId: setReleases.setId, setNumber: mapSets.number, releasedAt: setReleases.releasedAt, withdrawnAt: setReleases.withdrawnAt, driveRevisionId: mapSets.driveRevisionId, regenRevisionId: mapSets.regenRevisionId, paramVersion: paramVersions.number })
+      .from(setReleases)
+      .innerJoin(mapSets, eq(mapSets.id, setReleases.setId))
+      .innerJoin(paramVersions, eq(paramVersions.id, mapSets.paramVersionId))
+      .where(and(eq(setReleases.programId, programId), sql`${setReleases.releasedAt} < ${releasedAt}`, alsoWithdrawn ? undefined : or(isNull(setReleases.withdrawnAt), sql`${setReleases.withdrawnAt} > ${releasedAt}`)))
+      .orderBy(desc(setReleases.releasedAt), desc(setReleases.id))
+      .limit(1)
+  const [inTrucks] = await earlier(false)
+  if (inTrucks) return { ...inTrucks, withdrawnAt: null }
+  const [withdrawn] = await earlier(true)
+  return withdrawn ?? null
 }

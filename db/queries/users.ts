@@ -23,9 +23,20 @@ export type PublicUser = {
   createdAt: Date
 }
 
-export async function listUsers(): Promise<PublicUser[]> {
+/** Every user, with whether they were invited and have not set a password yet (for the admin's list). */
+export async function listUsers(): Promise<(PublicUser & { invited: boolean })[]> {
   const db = await getDb()
-  return db.select(publicColumns).from(users).orderBy(asc(users.name))
+  return db
+    .select({ ...publicColumns, invited: sql<boolean>`${users.invitedAt} is not null` })
+    .from(users)
+    .orderBy(asc(users.name))
+}
+
+/** Whether the user was invited and has not set a password yet. */
+export async function isInvited(id: number): Promise<boolean> {
+  const db = await getDb()
+  const rows = await db.select({ invitedAt: users.invitedAt }).from(users).where(eq(users.id, id))
+  return rows[0]?.invitedAt != null
 }
 
 export async function getUserById(id: number): Promise<PublicUser | null> {
@@ -77,11 +88,14 @@ export async function createUser(input: {
   name: string
   role: Role
   passwordHash: string
+  /** Made by invitation: shown as invited until a password is set. */
+  invited?: boolean
 }): Promise<PublicUser> {
   const db = await getDb()
+  const { invited, ...fields } = input
   const [row] = await db
     .insert(users)
-    .values({ ...input, email: input.email.trim() })
+    .values({ ...fields, email: fields.email.trim(), invitedAt: invited ? new Date() : null })
     .returning(publicColumns)
   return row
 }
@@ -98,7 +112,8 @@ export async function updateUser(
   const rows = await db.transaction(async (tx) => {
     const updated = await tx
       .update(users)
-      .set({ ...patch, updatedAt: new Date(), ...(endSessions ? { sessionVersion: sql`${users.sessionVersion} + 1` } : {}) })
+      // A password set by an admin ends the invitation as setting it through the link does.
+      .set({ ...patch, updatedAt: new Date(), ...(endSessions ? { sessionVersion: sql`${users.sessionVersion} + 1` } : {}), ...(patch.passwordHash !== undefined ? { invitedAt: null } : {}) })
       .where(eq(users.id, id))
       .returning(publicColumns)
     if (updated[0] && audit) await recordAudit(audit, tx)

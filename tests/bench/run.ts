@@ -9,6 +9,7 @@ import { runEditorPage } from './editor-page'
 import { runHistoryGrowth } from './history-growth'
 import { runLogIngest } from './log-ingest'
 import { runPlotPages } from './plot-pages'
+import { runReplay } from './replay'
 import { printResult, writeResults, type BenchResult } from './report'
 import { startServer, type BenchServer } from './server'
 import { runSlipSweep } from './slip-sweep'
@@ -49,6 +50,7 @@ async function main(): Promise<void> {
   const results: BenchResult[] = []
   await attempt('slip-sweep', runSlipSweep, results)
   await attempt('log-ingest', runLogIngest, results)
+  await attempt('replay', runReplay, results)
   await attempt('history-growth', runHistoryGrowth, results)
   if (only.length === 0 || only.some((n) => SERVER_BENCHES.includes(n))) await serverBenches(results)
   writeResults(results)

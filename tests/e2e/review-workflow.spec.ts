@@ -26,7 +26,16 @@ test('through two roles: submit, send back, resubmit, approve; release is of set
 
   await lead.goto('/review')
   await lead.getByRole('link', { name: new RegExp(`Road regen r${second}$`) }).click()
-  await lead.getByRole('button', { name: 'Approve' }).click()
+  await lead.getByRole('button', { name: 'Approve', exact: true }).click()
+  // A second step says what approving does; Escape steps back, and nothing has changed.
+  await expect(lead.getByTestId('confirm-step')).toContainText(`Approve Road regen r${second} by`)
+  await expect(lead.getByRole('button', { name: 'Yes, approve' })).toBeFocused()
+  await lead.keyboard.press('Escape')
+  await expect(lead.getByTestId('confirm-step')).toHaveCount(0)
+  await expect(lead.getByRole('button', { name: 'Approve', exact: true })).toBeFocused()
+  await expect(lead.getByTestId('revision-state')).toHaveText('Waiting for review')
+  await lead.keyboard.press('Enter')
+  await lead.getByRole('button', { name: 'Yes, approve' }).click()
   await expect(lead.getByTestId('revision-state')).toHaveText('Approved')
   // A revision is released only inside a map set (tests/e2e/set-release.spec.ts): the review page points there.
   await expect(lead.getByRole('link', { name: 'Make a set with this revision' })).toBeVisible()

@@ -54,7 +54,8 @@ test('a set from build to frozen release: test package, a report from a phone, a
   const lead = await signedInPage(browser, DEMO.lead)
   for (const r of [drive, regen]) {
     await lead.goto(`/review/${r.revisionId}`)
-    await lead.getByRole('button', { name: 'Approve' }).click()
+    await lead.getByRole('button', { name: 'Approve', exact: true }).click()
+    await lead.getByRole('button', { name: 'Yes, approve' }).click()
     await expect(lead.getByTestId('revision-state')).toHaveText('Approved')
   }
   await lead.goto(`/sets/${setId}`)
@@ -68,6 +69,8 @@ test('a set from build to frozen release: test package, a report from a phone, a
   expect(waivers.length).toBeGreaterThan(0)
   for (const w of waivers) await w.fill('Only the wet pad was open; snow runs are booked for the next build')
   await lead.getByRole('button', { name: /^Release Set \d+$/ }).click()
+  await expect(lead.getByTestId('confirm-step')).toContainText("go to the program's trucks")
+  await lead.getByRole('button', { name: /^Yes, release Set \d+$/ }).click()
   await expect(lead.getByTestId('set-status')).toHaveText('Released', { timeout: 30_000 })
   await expect(lead.getByTestId('set-acknowledgements')).toContainText('Closed-course running only for this build')
   await expect(lead.getByTestId('set-coverage')).toContainText('waived: “Only the wet pad was open')

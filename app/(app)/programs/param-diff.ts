@@ -23,7 +23,7 @@ interface FieldInfo {
   label: string
   unit: string
   scale: number
-  kind?: 'surfaces' | 'loadCases' | 'trailer' | 'driveTyre' | 'corners' | 'group'
+  kind?: 'surfaces' | 'loadCases' | 'trailer' | 'driveTyre' | 'corners' | 'group' | 'mapSpeed'
 }
 
 const FIELDS: Record<string, FieldInfo> = { 'params.axleLayout': { label: 'Axle layout', unit: '', scale: 1 } }
@@ -32,6 +32,7 @@ for (const g of VEHICLE_FIELDS) {
   if (g.group === 'Driveline and motor') FIELDS['params.gearRatios'] = { label: 'Gear ratios, lowest first', unit: ':1', scale: 1 }
 }
 FIELDS['params.gearRatios'] ??= { label: 'Gear ratios, lowest first', unit: ':1', scale: 1 }
+FIELDS['params.mapSpeedSource'] = { label: 'Speed the maps are looked up on', unit: '', scale: 1, kind: 'mapSpeed' }
 FIELDS['params.tandem'] = { label: 'Tandem details', unit: '', scale: 1, kind: 'group' }
 FIELDS['params.batteryPowerTable'] = { label: 'Battery power table', unit: '', scale: 1, kind: 'group' }
 FIELDS['params.tandem.interAxleDifferential'] = { label: 'Inter-axle differential', unit: '', scale: 1 }
@@ -53,6 +54,10 @@ FIELDS['releaseConditions.minLiftOffDecelMps2'] = { label: 'Release check: minim
 FIELDS['releaseConditions.maxPeakJerkMps3'] = { label: 'Comfort: largest peak jerk', unit: 'm/s³', scale: 1 }
 FIELDS['releaseConditions.maxTimeTo90S'] = { label: 'Comfort: longest time to 90 % torque', unit: 's', scale: 1 }
 FIELDS['releaseConditions.comfortSource'] = { label: 'Comfort: source of the limits', unit: '', scale: 1 }
+FIELDS['releaseConditions.replayMarginNm'] = { label: 'Release check: replay margin over the evidence', unit: 'N·m', scale: 1 }
+FIELDS['releaseConditions.startGradePct'] = { label: 'Grade: steepest start, laden', unit: '%', scale: 1 }
+FIELDS['releaseConditions.holdGradePct'] = { label: 'Grade: grade to hold, laden', unit: '%', scale: 1 }
+FIELDS['releaseConditions.holdSpeedKmh'] = { label: 'Grade: speed to hold on it', unit: 'km/h', scale: 1 }
 
 /** Rows follow the program form's order; a gear sits with the gear ratios, unknown paths come last. */
 const ORDER = Object.keys(FIELDS)
@@ -81,6 +86,7 @@ const tidy = (v: number) => Number(v.toPrecision(12))
 
 /** A stored value in the field's display unit: `93 %`, `4.1:1`, `Wet asphalt, Ice`, `—` for none. */
 export function formatValue(value: unknown, info: Pick<FieldInfo, 'unit' | 'scale' | 'kind'>): string {
+  if (info.kind === 'mapSpeed') return value === 'driven-wheel' ? 'driven-wheel speed' : value === 'road' ? 'road speed' : 'road speed (default)'
   if (value === null || value === undefined) return info.kind === 'trailer' || info.kind === 'group' ? 'none' : info.kind === 'driveTyre' ? 'default truck tyre' : '—'
   if (info.kind === 'group') return isObject(value) ? 'given' : String(value)
   if (info.kind === 'trailer') return isObject(value) ? 'coupled' : String(value)

@@ -18,6 +18,8 @@ import { DEFAULT_COMFORT } from '@/app/_lib/sets/drivability-defaults'
 import { tidyProgramValues } from './form-tidy'
 import { BatteryTableFields } from './battery-table-fields'
 import { BatteryCornersFields } from './battery-corners-fields'
+import { MapSpeedField } from './map-speed-field'
+import { GradeFields } from './grade-fields'
 
 type FormIn = z.input<typeof programInputSchema>
 type FormOut = z.output<typeof programInputSchema>
@@ -114,6 +116,7 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
                 <ScaledNumberInput key={f.key} control={control} name={`params.${f.key}`} label={f.label} unit={f.unit} scale={f.scale} />
               ))}
               {g.group === 'Driveline and motor' && <GearRatiosInput control={control} />}
+              {g.group === 'Driveline and motor' && <MapSpeedField register={register} />}
               {g.group === 'Battery' && <BatteryTableFields control={control} chargeW={params?.batteryChargePowerW} dischargeW={params?.batteryDischargePowerW} />}
             </div>
           </section>
@@ -187,15 +190,23 @@ export function ProgramForm(props: { programId?: number; paramVersion?: number; 
             />
           </div>
           <BatteryCornersFields control={control} register={register} />
-          <fieldset className="grid max-w-3xl gap-4 sm:grid-cols-3">
+          <fieldset className="grid max-w-4xl gap-4 sm:grid-cols-4">
             <legend className="label">Comfort limits of the drivability manoeuvres (blank: {DEFAULT_COMFORT.maxPeakJerkMps3} m/s³ and {DEFAULT_COMFORT.maxTimeTo90S} s, common practice)</legend>
             <ScaledNumberInput control={control} name="releaseConditions.maxPeakJerkMps3" label="Largest peak jerk" unit="m/s³" />
             <ScaledNumberInput control={control} name="releaseConditions.maxTimeTo90S" label="Longest time to 90 % torque" unit="s" />
+            <ScaledNumberInput
+              control={control}
+              name="releaseConditions.replayMarginNm"
+              label="Replay margin over the evidence"
+              unit="N·m"
+              hint="When given, the release gate replays the drive logs of the program's other sets through a set: it may ask for at most this much more torque than was driven. Blank: no such check."
+            />
             <div>
               <label htmlFor="comfortSource" className="label">Source of these limits</label>
               <input id="comfortSource" className="field" placeholder="e.g. the program's drivability target sheet" {...register('releaseConditions.comfortSource')} />
             </div>
           </fieldset>
+          <GradeFields control={control} />
         </section>
         {askReason && (
           <section className="card border-amber-300 bg-amber-50">

@@ -2,6 +2,7 @@ import Link from 'next/link'
 import type { ReportRow } from '@/db/queries/reports'
 import { SAFETY_LABELS, type SafetyState } from '@/domain/report-safety'
 import { surfaceLabel } from '@/physics'
+import { loadCaseLabel } from '@/physics/load-cases'
 
 export { surfaceLabel }
 
@@ -40,7 +41,7 @@ export function ReportTable({ reports }: { reports: ReportRow[] }) {
                 <span className="block text-xs text-slate-600">{setParts(r)}</span>
               </td>
               <td className="px-3 py-2">{r.driverName}</td>
-              <td className="px-3 py-2">{surfaceLabel(r.surface)}, {r.loadCase}</td>
+              <td className="px-3 py-2">{surfaceLabel(r.surface)}, {loadCaseLabel(r.loadCase).toLowerCase()}</td>
               <td className="px-3 py-2">{r.flags.length} <SafetyBadge safety={r.safety} /></td>
               <td className="px-3 py-2"><Link href={`/reports/${r.id}`} className="text-accent hover:underline">Open</Link></td>
             </tr>

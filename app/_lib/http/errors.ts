@@ -28,6 +28,13 @@ export class NotFoundError extends HttpError {
     super(404, 'not_found', `${what} was not found`)
   }
 }
+/** A path id that cannot name anything (not plain digits, or beyond an integer column): a 404, with the rule. */
+export class MalformedIdError extends HttpError {
+  constructor(name: string, value: string) {
+    const shown = value.length > 24 ? `${value.slice(0, 24)}…` : value
+    super(404, 'not_found', `${name} ${JSON.stringify(shown)} names nothing: ids are whole numbers from 1 to 2147483647`)
+  }
+}
 export class ConflictError extends HttpError {
   constructor(message: string, details?: unknown) {
     super(409, 'conflict', message, details)

@@ -1,11 +1,11 @@
 import 'server-only'
 import { notFound } from 'next/navigation'
-import { ValidationError } from './errors'
+import { MalformedIdError } from './errors'
 import { intParam } from './request'
 
 /**
  * Page params read with the API's own rule (`intParam`: plain digits, 1 … 2^31-1). Where the
- * API answers 400, a page answers with its 404 page: `/maps/abc` and `/maps/99999999999` name
+ * API answers 404, a page answers with its 404 page: `/maps/abc` and `/maps/99999999999` name
  * nothing, and must never reach the database as a number it cannot hold (a 500).
  */
 export function pageId(value: string | undefined, name: string): number {
@@ -20,7 +20,7 @@ export function idOrNull(value: string | string[] | undefined, name = 'id'): num
   try {
     return intParam(value, name)
   } catch (e) {
-    if (e instanceof ValidationError) return null
+    if (e instanceof MalformedIdError) return null
     throw e
   }
 }

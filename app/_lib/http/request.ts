@@ -1,7 +1,7 @@
 import 'server-only'
 import type { z } from 'zod'
 import { ID_DIGITS, MAX_ID } from '@/app/_schemas/query'
-import { BodyTooLargeError, ValidationError } from './errors'
+import { BodyTooLargeError, MalformedIdError, ValidationError } from './errors'
 
 /** Every JSON body is capped at this unless a route says otherwise (the CSV import needs more). */
 export const JSON_BODY_LIMIT = 1024 * 1024
@@ -69,9 +69,12 @@ function assertWellFormedText(value: unknown, path: string[] = []): void {
   }
 }
 
-/** A positive integer route parameter, or a 404-worthy 400. */
+/**
+ * A positive integer route parameter. Anything else (`abc`, `1e30`, an id beyond an integer column)
+ * names nothing, so it is a 404 like an unknown id, and never reaches the database.
+ */
 export function intParam(value: string | undefined, name: string): number {
   const n = ID_DIGITS.test(value ?? '') ? Number(value) : NaN
-  if (!Number.isInteger(n) || n > MAX_ID) throw new ValidationError(`${name} must be a positive whole number`)
+  if (!Number.isInteger(n) || n > MAX_ID) throw new MalformedIdError(name, value ?? '')
   return n
 }

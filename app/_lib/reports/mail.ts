@@ -6,6 +6,8 @@ import type { MapSetFull } from '@/db/queries/sets'
 import type { ReportInput } from '@/app/_schemas/report'
 import { appUrl, nudgeMail } from '../mail/sender'
 import type { SessionUser } from '../auth/session'
+import { loadCaseLabel } from '@/physics/load-cases'
+import { surfaceLabel } from '@/physics/surfaces'
 
 /**
  * The e-mail for a new safety concern: to the lead engineers and the engineers of the set's maps
@@ -21,7 +23,7 @@ export async function safetyMailFor(input: ReportInput, set: MapSetFull, driver:
   return (id) => ({
     to,
     subject: `Safety concern: ${set.programName} · set ${set.number}${onMaps ? ` (${onMaps})` : ''}`,
-    text: `${driver.name} flagged a safety concern on ${input.drivenOn} (${input.surface}, ${input.loadCase}) driving set ${set.number} of ${set.programName}:\n${lines}\n\nOpen: ${appUrl(`/reports/${id}`)}\n`,
+    text: `${driver.name} flagged a safety concern on ${input.drivenOn} (${surfaceLabel(input.surface).toLowerCase()}, ${loadCaseLabel(input.loadCase).toLowerCase()}) driving set ${set.number} of ${set.programName}:\n${lines}\n\nOpen: ${appUrl(`/reports/${id}`)}\n`,
   })
 }
 

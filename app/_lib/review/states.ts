@@ -53,3 +53,16 @@ export function availableActions(state: RevisionState, actor: { id: number; role
     return c.ok
   })
 }
+
+/**
+ * Actions this actor's role could take in this state but may not take on this revision (approving
+ * their own, submitting someone else's), with the reason: shown instead of a missing button.
+ */
+export function blockedActions(state: RevisionState, actor: { id: number; role: Role }, authorId: number): { action: ReviewAction; reason: string }[] {
+  return REVIEW_ACTIONS.flatMap((a) => {
+    const rule = RULES[a]
+    if (SET_ACTIONS.includes(a) || !rule.roles.includes(actor.role) || rule.from !== state) return []
+    const c = checkTransition(a, state, actor, authorId, 'x')
+    return c.ok ? [] : [{ action: a, reason: c.reason }]
+  })
+}

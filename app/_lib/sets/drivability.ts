@@ -14,6 +14,7 @@ import type { LoadCase } from '@/physics/vehicle'
 import { ValidationError } from '../http/errors'
 import { physics } from '../physics/query'
 import { DEFAULT_COMFORT } from './drivability-defaults'
+import { declaresGrade, gradeChecks } from './grade'
 
 export { DEFAULT_COMFORT }
 
@@ -86,7 +87,14 @@ export function setDrivability(set: MapSetFull, q: DrivabilityQuery) {
           peakSlip: round(r.peakSlip, 4), minSlip: round(r.minSlip, 4), timeBeyondPeakS: round(r.timeBeyondPeakS), speedReachedKmh: round(r.speedReachedKmh, 1), fails,
         })
       }
-  return { comfort, ramps: set.rampVersion ? { number: set.rampVersion.number } : null, rows, passed: rows.every((r) => r.fails.length === 0) }
+  const v = set.paramVersion.params
+  // Start and hold on grade: only when the version declares them (null: not asked for).
+  const grade = declaresGrade(c) ? gradeChecks(v, set.drive.table, c) : null
+  return {
+    comfort, ramps: set.rampVersion ? { number: set.rampVersion.number } : null, rows, passed: rows.every((r) => r.fails.length === 0),
+    mapSpeedSource: v.mapSpeedSource ?? 'road',
+    grade,
+  }
 }
 
 /** One manoeuvre with its traces (speed, slip, torque, acceleration, jerk, pedal), for the plots. */

@@ -10,7 +10,9 @@
  * lead waives each uncovered one with a reason; (e) no open safety concern sits on any of its revisions, whichever set it was
  * found in; (f) when the version declares battery corners and a minimum lift-off deceleration, no
  * corner takes the regen map's lift-off deceleration below it where the nominal pack reaches it
- * (docs/physics.md §7a). Pure: the caller loads the data.
+ * (docs/physics.md §7a); (g) when the version declares a start grade or a hold grade and speed, the drive
+ * map at full pedal gives the torque they need within the motor, battery and dry-road tyres (docs/physics.md §9b).
+ * Pure: the caller loads the data.
  */
 import 'server-only'
 import type { Acknowledgement, ReleaseConditions } from '@/db/schema'
@@ -24,6 +26,7 @@ import type { LoadCase, VehicleParams } from '@/physics/vehicle'
 import { DEFAULT_DESIGN_LATERAL_ACCEL_MPS2 } from '@/physics/lateral-margin'
 import { jackknifeExceptions, LOW_FRICTION, tractionExceptions } from '../review/gate'
 import { checkRampsAgainstMaps, type RampLimits } from '@/maps/ramps'
+import { declaresGrade, gradeChecks, gradeLine } from './grade'
 
 /** Review states in which a revision has been approved by a lead (released and replaced ones were). */
 export const APPROVED_STATES: readonly RevisionState[] = ['approved', 'released', 'retired']
@@ -49,7 +52,7 @@ export interface SetTractionException {
 }
 
 export interface SetGateCondition {
-  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'jackknife' | 'lift-off' | 'drive-report' | 'coverage' | 'safety'
+  id: 'parts' | 'approved' | 'validation' | 'exportable' | 'ramps' | 'traction' | 'jackknife' | 'lift-off' | 'grade' | 'drive-report' | 'coverage' | 'replay' | 'safety'
   met: boolean
   summary: string
   details: string[]
@@ -111,6 +114,8 @@ export function setGate(input: {
   acknowledgements: Acknowledgement[]
   /** The set's ramp limits, or null when it holds none. */
   ramps?: RampLimits | null
+  /** The evidence logs replayed through the set, when the version declares a replay margin. */
+  replay?: ReplayEvidence[] | null
 }): SetGateResult {
   const { parts, vehicle, conditions } = input
   const kinds = new Set(parts.map((p) => p.kind))
@@ -142,6 +147,7 @@ export function setGate(input: {
   const cells = traction.reduce((n, e) => n + e.cells.length, 0)
 
   const liftOff = liftOffCondition(parts, vehicle, conditions)
+  const grade = gradeCondition(parts, vehicle, conditions)
   const coverage = setCoverage(conditions, input.reports, input.acknowledgements)
   const uncovered = coverage.filter((c) => c.reports === 0 && c.waiver === null).map((c) => c.key)
   const waived = coverage.filter((c) => c.waiver !== null).length
@@ -199,6 +205,7 @@ export function setGate(input: {
       details: jackknife.map((e) => `${surfaceLabel(e.surface)}, ${loadCaseLabel(e.loadCase)}: ${e.cells.length} lift-off cell(s) above ${Math.round(e.cells[0].allowedNm)} N·m regen, first at ${e.cells[0].speedKmh} km/h`),
     },
     ...(liftOff ? [liftOff] : []),
+    ...(grade ? [grade] : []),
     {
       id: 'drive-report',
       met: nReports > 0,
@@ -214,6 +221,7 @@ export function setGate(input: {
           : `${uncovered.length} of ${coverage.length} release condition(s) have no drive report and no waiver`,
       details: coverage.filter((c) => uncovered.includes(c.key)).map((c) => `${surfaceLabel(c.surface)}, ${loadCaseLabel(c.loadCase)}: no drive report`),
     },
+    ...(input.replay && conditions.replayMarginNm !== undefined ? [replayCondition(input.replay, conditions.replayMarginNm)] : []),
     {
       id: 'safety',
       met: input.concerns.length === 0,
@@ -248,6 +256,27 @@ export function liftOffCondition(parts: SetGatePart[], vehicle: VehicleParams, c
   }
 }
 
+/**
+ * The start-and-hold-on-grade condition, or null when the version declares no grade (older versions
+ * judge as before). Laden, dry asphalt, drive map at full pedal (physics/gradeability.ts).
+ */
+export function gradeCondition(parts: SetGatePart[], vehicle: VehicleParams, c: ReleaseConditions): SetGateCondition | null {
+  if (!declaresGrade(c)) return null
+  const drive = parts.find((p) => p.kind === 'drive')
+  if (!drive) return { id: 'grade', met: false, summary: 'The version asks for a start or hold on grade, but the set holds no drive map', details: [] }
+  const checks = gradeChecks(vehicle, drive.table, c)
+  const failed = checks.filter((k) => k.verdict !== 'met')
+  const empty = failed.filter((k) => k.verdict === 'traction-short').length
+  return {
+    id: 'grade',
+    met: failed.length === 0,
+    summary: failed.length === 0
+      ? `The drive map at full pedal starts and holds the laden truck on the declared grades (${checks.length} check(s))`
+      : `${failed.length} of ${checks.length} grade requirement(s) not met${empty ? `; ${empty} beyond what the dry-road tyres carry: no single map can satisfy both` : ''}`,
+    details: checks.map(gradeLine),
+  }
+}
+
 /** The largest drive torque and regen torque the set's maps ask for, N·m. */
 export function torqueRange(parts: Pick<SetGatePart, 'kind' | 'table'>[]): { driveMaxNm: number; regenMaxNm: number } {
   const max = (kind: MapKind) => Math.max(0, ...parts.filter((p) => p.kind === kind).flatMap((p) => p.table.values.flat().map(Math.abs)))
@@ -263,5 +292,24 @@ function rampCondition(ramps: RampLimits | null, parts: SetGatePart[]): SetGateC
     met: errors.length === 0,
     summary: errors.length === 0 ? 'The ramp limits fit the maps' : `The ramp limits do not fit the maps (${errors.length} problem(s))`,
     details: errors.map((f) => f.message),
+  }
+}
+
+/** One evidence log replayed through the set: the most its request exceeded what was driven, N·m, and when. */
+export interface ReplayEvidence { reportId: number; setNumber: number; logId: number; fileName: string; worstExcessNm: number; worstAtS: number | null }
+
+/** Replayed over the program's evidence logs, the set never asks for more than was driven by over the margin. */
+function replayCondition(evidence: ReplayEvidence[], marginNm: number): SetGateCondition {
+  const over = evidence.filter((e) => e.worstExcessNm > marginNm)
+  return {
+    id: 'replay',
+    met: over.length === 0,
+    summary:
+      evidence.length === 0
+        ? 'No analysed log on the program’s other sets to replay this set over'
+        : over.length === 0
+          ? `Replayed over ${evidence.length} evidence log(s), the set never asks for more than was driven by over ${marginNm} N·m`
+          : `Replayed over the evidence, the set asks for more than was driven by over ${marginNm} N·m on ${over.length} of ${evidence.length} log(s)`,
+    details: over.map((e) => `${e.fileName} (report ${e.reportId}, set ${e.setNumber}): up to ${Math.round(e.worstExcessNm)} N·m more${e.worstAtS !== null ? ` at ${e.worstAtS.toFixed(1)} s` : ''}`),
   }
 }

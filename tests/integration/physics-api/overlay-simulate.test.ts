@@ -89,7 +89,7 @@ describe('GET /api/programs/:id/traction', () => {
   it('answers 401 without a session and 404 for a missing program', async () => {
     expect((await call(tractionRoute.GET, { params: { id: String(ctx.program.id) } })).status).toBe(401)
     expect((await call(tractionRoute.GET, { cookie, params: { id: '424242' } })).status).toBe(404)
-    expect((await call(tractionRoute.GET, { cookie, params: { id: 'abc' } })).status).toBe(400)
+    expect((await call(tractionRoute.GET, { cookie, params: { id: 'abc' } })).status).toBe(404)
   })
 
   it('lists every surface × load case, with more grip laden and on dry asphalt than on ice', async () => {

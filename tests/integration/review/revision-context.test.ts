@@ -64,6 +64,6 @@ describe('one query for a revision with its map and program', () => {
     await expect(loadMapRevision(missing, '1')).rejects.toMatchObject({ status: 404, message: expect.stringContaining(`Map ${missing}`) })
     // The map is checked before the number, as before: a missing map with a bad number is still a 404.
     await expect(loadMapRevision(missing, 'abc')).rejects.toMatchObject({ status: 404 })
-    await expect(loadMapRevision(String(mapId), 'abc')).rejects.toMatchObject({ status: 400 })
+    await expect(loadMapRevision(String(mapId), 'abc')).rejects.toMatchObject({ status: 404 })
   })
 })

@@ -17,6 +17,16 @@ describe('parameter version diff', () => {
     ])
   })
 
+  it('labels the map lookup speed (absent = road speed) and the grade requirements with their units', () => {
+    const rows = versionDiff({ params, releaseConditions: rc }, { params: { ...params, mapSpeedSource: 'driven-wheel' }, releaseConditions: { ...rc, startGradePct: 18, holdGradePct: 5, holdSpeedKmh: 60 } })
+    expect(rows.map((r) => [r.path, r.label, r.from, r.to])).toEqual([
+      ['params.mapSpeedSource', 'Speed the maps are looked up on', 'road speed (default)', 'driven-wheel speed'],
+      ['releaseConditions.startGradePct', 'Grade: steepest start, laden', '—', '18 %'],
+      ['releaseConditions.holdGradePct', 'Grade: grade to hold, laden', '—', '5 %'],
+      ['releaseConditions.holdSpeedKmh', 'Grade: speed to hold on it', '—', '60 km/h'],
+    ])
+  })
+
   it('names a changed gear by its number and keeps the form order', () => {
     const rows = versionDiff({ params, releaseConditions: rc }, { params: { ...params, axleLayout: '4x2', gearRatios: [3.2, 1] }, releaseConditions: { ...rc, marginPct: 15 } })
     expect(rows.map((r) => [r.path, r.label, r.from, r.to])).toEqual([

@@ -1,8 +1,19 @@
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { formatTime } from '@/app/_components/format'
-import { listAudit } from '@/db/queries/audit'
-import { auditFilterSchema } from '@/app/_schemas/audit'
+import Link from 'next/link'
+import { countAudit, listAudit } from '@/db/queries/audit'
+import { auditSubjects, subjectOf } from '@/db/queries/audit-subjects'
+import { AUDIT_PAGE_SIZE, auditFilterSchema } from '@/app/_schemas/audit'
+import { auditActionLabel, auditSentence } from '@/domain/audit-text'
 import { AUDIT_READERS } from '@/domain/roles'
+
+const SUBJECT_TYPES = [
+  ['map', 'maps'],
+  ['map_set', 'map sets'],
+  ['vehicle_program', 'vehicle programs'],
+  ['drive_report', 'drive reports'],
+  ['user', 'users and sign-ins'],
+] as const
 
 export const metadata = { title: 'Audit trail' }
 
@@ -16,7 +27,14 @@ export default async function AuditPage(props: { searchParams: Promise<Record<st
   const problems = parsed.success ? [] : parsed.error.issues.map((i) => i.message)
   const str = (k: string): string | undefined => given[k]
   const filter = { entityType: str('entityType'), action: str('action') }
-  const rows = parsed.success ? await listAudit(parsed.data) : []
+  // The page shows AUDIT_PAGE_SIZE rows unless the address names a limit.
+  const pageSize = parsed.success && given.limit ? parsed.data.limit : AUDIT_PAGE_SIZE
+  const page = parsed.success ? parsed.data.page : 1
+  const dbFilter = parsed.success ? { ...parsed.data, limit: pageSize, offset: (page - 1) * pageSize } : null
+  const [rows, total] = dbFilter ? await Promise.all([listAudit(dbFilter), countAudit(dbFilter)]) : [[], 0]
+  const subjects = await auditSubjects(rows)
+  const pages = Math.max(1, Math.ceil(total / pageSize))
+  const pageHref = (n: number) => `/admin/audit?${new URLSearchParams({ ...given, page: String(n) }).toString()}`
   const csvQuery = new URLSearchParams(Object.entries({ ...q, format: 'csv' }).filter((e): e is [string, string] => typeof e[1] === 'string' && e[1] !== '')).toString()
   return (
     <div className="space-y-4">
@@ -26,7 +44,7 @@ export default async function AuditPage(props: { searchParams: Promise<Record<st
           <label htmlFor="entityType" className="label">What</label>
           <select id="entityType" name="entityType" defaultValue={filter.entityType ?? ''} className="field">
             <option value="">everything</option>
-            {['map', 'vehicle_program', 'drive_report', 'user'].map((t) => <option key={t} value={t}>{t.replace('_', ' ')}</option>)}
+            {SUBJECT_TYPES.map(([t, label]) => <option key={t} value={t}>{label}</option>)}
           </select>
         </div>
         <div>
@@ -55,22 +73,43 @@ export default async function AuditPage(props: { searchParams: Promise<Record<st
       <div className="card overflow-x-auto p-0">
         <table className="w-full text-sm" data-testid="audit-table">
           <thead className="bg-slate-50 text-left text-xs uppercase text-slate-600">
-            <tr><th className="px-3 py-2">When</th><th className="px-3 py-2">Who</th><th className="px-3 py-2">Action</th><th className="px-3 py-2">On</th><th className="px-3 py-2">From</th><th className="px-3 py-2">Details</th></tr>
+            <tr><th className="px-3 py-2">When</th><th className="px-3 py-2">Who</th><th className="px-3 py-2">What</th><th className="px-3 py-2">On</th><th className="px-3 py-2">Details</th><th className="px-3 py-2">From</th></tr>
           </thead>
           <tbody>
-            {rows.map((r) => (
-              <tr key={r.id} className="border-t border-line align-top">
-                <td className="px-3 py-1.5 whitespace-nowrap">{formatTime(r.at)}</td>
-                <td className="px-3 py-1.5">{r.actorName ?? '—'}</td>
-                <td className="px-3 py-1.5 font-mono text-xs">{r.action}</td>
-                <td className="px-3 py-1.5">{r.entityType} {r.entityId ?? ''}</td>
-                <td className="px-3 py-1.5 font-mono text-xs">{r.ip ?? ''}</td>
-                <td className="px-3 py-1.5 font-mono text-xs break-all">{JSON.stringify(r.details)}</td>
-              </tr>
-            ))}
+            {rows.map((r) => {
+              const subject = subjectOf(subjects, r)
+              const sentence = auditSentence(r.action, r.details)
+              return (
+                <tr key={r.id} className="border-t border-line align-top" data-testid="audit-row">
+                  <td className="px-3 py-1.5 whitespace-nowrap">{formatTime(r.at)}</td>
+                  <td className="px-3 py-1.5">{r.actorName ?? 'the system'}</td>
+                  <td className="px-3 py-1.5">{auditActionLabel(r.action)}</td>
+                  <td className="px-3 py-1.5">{subject.href ? <Link href={subject.href} className="text-accent underline">{subject.name}</Link> : subject.name}</td>
+                  <td className="max-w-md px-3 py-1.5 break-words">
+                    {sentence}
+                    {Object.keys(r.details).length > 0 && (
+                      <details className="text-xs">
+                        <summary className="cursor-pointer text-slate-600">Raw data</summary>
+                        <p className="text-slate-600">Action <code>{r.action}</code> on {r.entityType} {r.entityId ?? ''}</p>
+                        <pre className="whitespace-pre-wrap break-all">{JSON.stringify(r.details, null, 2)}</pre>
+                      </details>
+                    )}
+                  </td>
+                  <td className="px-3 py-1.5 font-mono text-xs">{r.ip ?? ''}</td>
+                </tr>
+              )
+            })}
           </tbody>
         </table>
+        {rows.length === 0 && problems.length === 0 && <p className="px-3 py-3 text-sm text-slate-600">Nothing matches these filters{page > 1 ? ' on this page' : ''}.</p>}
       </div>
+      <nav aria-label="Pages of the audit trail" className="flex flex-wrap items-center gap-3 text-sm" data-testid="audit-paging">
+        <span>
+          Page {Math.min(page, pages)} of {pages} · {total} entr{total === 1 ? 'y' : 'ies'}
+        </span>
+        {page > 1 && <Link href={pageHref(Math.min(page - 1, pages))} className="btn" rel="prev">Newer</Link>}
+        {page < pages && <Link href={pageHref(page + 1)} className="btn" rel="next">Older</Link>}
+      </nav>
     </div>
   )
 }

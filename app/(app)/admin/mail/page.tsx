@@ -12,6 +12,7 @@ export default async function MailPage() {
   return (
     <div className="space-y-5">
       <h1 className="text-2xl font-bold">E-mail</h1>
+      <p className="text-sm text-slate-600">Open a subject to read the message. An invitation or reset link in it works once and only until it expires; pass it on only to the person it was sent to.</p>
       <section className="card overflow-x-auto p-0">
         <h2 className="px-3 pt-3 font-semibold">Outgoing queue</h2>
         <table className="w-full text-sm" data-testid="mail-outbox">
@@ -21,7 +22,13 @@ export default async function MailPage() {
               <tr key={m.id} className="border-t border-line">
                 <td className="px-3 py-1.5 whitespace-nowrap">{formatTime(m.createdAt)}</td>
                 <td className="px-3 py-1.5">{m.to.join(', ')}</td>
-                <td className="px-3 py-1.5">{m.subject}</td>
+                <td className="px-3 py-1.5">
+                  {/* The whole message, so an admin can pass on an invitation link by hand when mail does not arrive. */}
+                  <details data-testid="outbox-message">
+                    <summary className="cursor-pointer">{m.subject}</summary>
+                    <pre className="mt-1 max-w-xl text-xs break-all whitespace-pre-wrap">{m.text}</pre>
+                  </details>
+                </td>
                 <td className="px-3 py-1.5">{m.status}{m.attempts > 1 ? ` after ${m.attempts} attempts` : ''}{m.lastError ? ` — ${m.lastError}` : ''}</td>
                 <td className="px-3 py-1.5">{m.status === 'failed' && <RetryButton id={m.id} />}</td>
               </tr>

@@ -1,5 +1,6 @@
 import Link from 'next/link'
 import { formatTime } from '@/app/_components/format'
+import { loadCaseLabel } from '@/physics/load-cases'
 import { MarkdownNotes } from '@/app/_components/markdown-notes'
 import { STATE_LABELS } from '@/domain/revision-states'
 import type { RevisionSummary } from '@/db/queries/revisions'
@@ -33,7 +34,7 @@ export function NotebookEntries(props: { revisions: RevisionSummary[]; events: R
             {comments.length > 0 && (
               <ul className="text-sm text-slate-700">
                 {comments.map((c) => (
-                  <li key={c.id}><span className="text-slate-500">Comment</span> {c.authorName}: {c.body}</li>
+                  <li key={c.id}><span className="text-slate-500">Comment</span> {c.authorName}: <MarkdownNotes text={c.body} /></li>
                 ))}
               </ul>
             )}
@@ -41,7 +42,7 @@ export function NotebookEntries(props: { revisions: RevisionSummary[]; events: R
               <ul className="text-sm">
                 {reports.map((x) => (
                   <li key={x.id}>
-                    <span className="text-slate-500">Report</span> <Link href={`/reports/${x.id}`} className="text-accent hover:underline">Drive report {x.drivenOn}</Link> on <Link href={`/sets/${x.setId}`} className="hover:underline">set {x.setNumber}</Link> by {x.driverName}, {surfaceLabel(x.surface)}, {x.loadCase} <SafetyBadge safety={x.safety} />
+                    <span className="text-slate-500">Report</span> <Link href={`/reports/${x.id}`} className="text-accent hover:underline">Drive report {x.drivenOn}</Link> on <Link href={`/sets/${x.setId}`} className="hover:underline">set {x.setNumber}</Link> by {x.driverName}, {surfaceLabel(x.surface)}, {loadCaseLabel(x.loadCase).toLowerCase()} <SafetyBadge safety={x.safety} />
                   </li>
                 ))}
               </ul>

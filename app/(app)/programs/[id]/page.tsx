@@ -6,6 +6,7 @@ import { PROGRAM_EDITORS } from '@/app/_lib/auth/roles'
 import { listParamVersions } from '@/db/queries/param-versions'
 import { getProgram } from '@/db/queries/programs'
 import { ProgramForm } from '../program-form'
+import { ProgramDetails } from './program-details'
 import { chooseVersions } from '../param-diff'
 import { ParamVersionDiff, ParamVersionHistory } from './param-versions'
 
@@ -54,13 +55,16 @@ export default async function ProgramPage({
           {savedAs !== null ? `Saved as parameter version ${savedAs}.` : 'Saved.'}
         </p>
       )}
-      <ProgramForm
-        key={program.updatedAt.toISOString()}
-        programId={program.id}
-        paramVersion={program.paramVersion}
-        readOnly={!PROGRAM_EDITORS.includes(user.role)}
-        initial={{ name: program.name, description: program.description, params: program.params, releaseConditions: program.releaseConditions }}
-      />
+      {PROGRAM_EDITORS.includes(user.role) ? (
+        <ProgramForm
+          key={program.updatedAt.toISOString()}
+          programId={program.id}
+          paramVersion={program.paramVersion}
+          initial={{ name: program.name, description: program.description, params: program.params, releaseConditions: program.releaseConditions }}
+        />
+      ) : (
+        <ProgramDetails name={program.name} description={program.description} params={program.params} releaseConditions={program.releaseConditions} />
+      )}
       <ParamVersionHistory programId={program.id} versions={versions} />
       <ParamVersionDiff programId={program.id} versions={versions} from={chosen.from} to={chosen.to} />
     </div>

@@ -11,6 +11,8 @@ import { SafetyPanel } from './safety-panel'
 import { LogsPanel } from './logs-panel'
 import { ReportDiscussion } from './report-discussion'
 import { SetCorrection } from './set-correction'
+import { loadCaseLabel } from '@/physics/load-cases'
+import { MarkdownNotes } from '@/app/_components/markdown-notes'
 
 export const metadata = { title: 'Drive report' }
 
@@ -41,6 +43,9 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
           )}
           {report.driverName} · unit {report.vehicleUnit} · {report.route} <SafetyBadge safety={report.safety} />
         </p>
+        <p className="pt-1">
+          <Link href={`/reports/${report.id}/replay`} className="btn">Replay this drive through another set</Link>
+        </p>
       </div>
       <section className="card grid gap-2 text-sm sm:grid-cols-3" aria-label="What the truck ran" data-testid="report-set">
         {parts.map((p) => (
@@ -61,11 +66,11 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
       <section className="card grid gap-2 text-sm sm:grid-cols-3">
         <p><span className="label">Surface</span>{surfaceLabel(report.surface)}</p>
         <p><span className="label">Weather</span>{report.weather}, {report.ambientC} °C</p>
-        <p><span className="label">Load</span>{report.loadCase}, payload {report.payloadKg} kg{report.trailer ? ', trailer' : ''}</p>
+        <p><span className="label">Load</span>{loadCaseLabel(report.loadCase)}, payload {report.payloadKg} kg{report.trailer ? ', trailer' : ''}</p>
         {RATING_KEYS.map((k) => (
           <p key={k}><span className="label">{RATING_LABELS[k]}</span>{report.ratings[k]} / 5</p>
         ))}
-        {report.comments && <p className="whitespace-pre-wrap sm:col-span-3"><span className="label">How it felt</span>{report.comments}</p>}
+        {report.comments && <div className="sm:col-span-3"><span className="label">How it felt</span><MarkdownNotes text={report.comments} /></div>}
       </section>
       {report.flags.length > 0 && (
         <section className="card">

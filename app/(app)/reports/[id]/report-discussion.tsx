@@ -4,6 +4,7 @@ import { useState } from 'react'
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query'
 import { api, newDraftId } from '@/app/_components/api-client'
 import { formatTime } from '@/app/_components/format'
+import { MarkdownNotes } from '@/app/_components/markdown-notes'
 
 interface CommentItem { id: number; body: string; createdAt: string; authorName: string }
 
@@ -31,7 +32,7 @@ export function ReportDiscussion(props: { reportId: number; canComment: boolean;
       <p className="text-xs text-slate-500">{props.readAt ? `Read by a lead engineer on ${formatTime(props.readAt)}; the driver can no longer edit it.` : 'Not yet read by a lead engineer.'}</p>
       {props.canMarkRead && !props.readAt && <button type="button" className="btn" onClick={() => read.mutate()}>Mark as read</button>}
       <ul className="space-y-1 text-sm">
-        {list.data?.comments.map((c) => <li key={c.id}><span className="text-slate-500">{c.authorName}, {formatTime(c.createdAt)}:</span> {c.body}</li>)}
+        {list.data?.comments.map((c) => <li key={c.id}><span className="text-slate-500">{c.authorName}, {formatTime(c.createdAt)}:</span> <MarkdownNotes text={c.body} /></li>)}
       </ul>
       {props.canComment && (
         <div className="flex gap-2">

@@ -3,6 +3,7 @@ import { useRouter } from 'next/navigation'
 import { useState } from 'react'
 import { useMutation } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
+import { MarkdownNotes } from '@/app/_components/markdown-notes'
 
 /** An open safety concern stays visible until a lead engineer resolves it with a comment. */
 export function SafetyPanel(props: { reportId: number; safety: string; resolution: string | null; canResolve: boolean }) {
@@ -17,7 +18,7 @@ export function SafetyPanel(props: { reportId: number; safety: string; resolutio
     return (
       <section className="card text-sm">
         <h2 className="font-semibold">Safety concern resolved</h2>
-        <p className="whitespace-pre-wrap">{props.resolution}</p>
+        <MarkdownNotes text={props.resolution ?? ''} />
       </section>
     )
   return (

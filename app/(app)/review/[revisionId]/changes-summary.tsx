@@ -1,5 +1,26 @@
 import Link from 'next/link'
 import type { MapDiff } from '@/maps'
+import type { PartChange, ReleaseComparison } from '@/app/_lib/sets/release-before'
+
+/** For the revision in the trucks now: this map's line against the release before, in words. */
+function AgainstBefore({ before, part }: { before: ReleaseComparison['before']; part: PartChange }) {
+  const setLink = (
+    <>
+      <Link href={`/sets/${before.setId}`} className="text-accent underline">set {before.setNumber}</Link>
+      {before.withdrawnAt ? ', since withdrawn' : ''}
+    </>
+  )
+  if (part.change === 'same') return <p>The release before it ({setLink}) held the same revision.</p>
+  if (part.change !== 'changed') return <p>The release before it ({setLink}) held no map of this kind.</p>
+  const c = part.diff
+  return (
+    <p>
+      Against r{part.before.number}{part.before.mapId !== part.mapId ? ` of ${part.before.mapName}` : ''}, in the release before it ({setLink}): {c.changed.length} of {c.cellCount} cells changed
+      {c.largestAbsolute && `; largest ${c.largestAbsolute.delta > 0 ? '+' : ''}${c.largestAbsolute.delta.toFixed(0)} N·m at ${c.largestAbsolute.pedalPct} % / ${c.largestAbsolute.speedKmh} km/h`}{' '}
+      <Link href={`/maps/compare?a=${part.before.mapId}:${part.before.number}&b=${part.mapId}:${part.number}`} className="text-accent underline">compare surfaces</Link>
+    </p>
+  )
+}
 
 /** What this revision changes against the one of this map in the program's released set, largest changes first. */
 export function ChangesSummary(props: {
@@ -7,11 +28,22 @@ export function ChangesSummary(props: {
   number: number
   released: { number: number; setId: number; setNumber: number } | null
   changes: MapDiff | null
+  /** When this revision is in the trucks now: the release it followed (null: the program's first release). */
+  previous?: { comparison: ReleaseComparison | null; kind: 'drive' | 'regen' }
 }) {
   const rel = props.released
   const setLink = rel && <Link href={`/sets/${rel.setId}`} className="text-accent underline">set {rel.setNumber}</Link>
   if (!rel) return <section className="card text-sm">No released map set holds a revision of this map; there is nothing in the trucks to compare with.</section>
-  if (rel.number === props.number) return <section className="card text-sm">This revision is in the trucks now, in the released {setLink}.</section>
+  if (rel.number === props.number) {
+    const prev = props.previous
+    const part = prev?.comparison?.parts.find((p) => p.kind === prev.kind)
+    return (
+      <section className="card space-y-1 text-sm" data-testid="release-comparison">
+        <p>This revision is in the trucks now, in the released {setLink}.</p>
+        {prev && (prev.comparison && part ? <AgainstBefore before={prev.comparison.before} part={part} /> : <p>It came with the program&apos;s first release: there was no earlier release to compare with.</p>)}
+      </section>
+    )
+  }
   if (!props.changes) return null
   const c = props.changes
   return (

@@ -6,7 +6,7 @@ import { formatTime, shortChecksum } from '@/app/_components/format'
 import { MarkdownNotes } from '@/app/_components/markdown-notes'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { loadRevisionContext } from '@/app/_lib/review/service'
-import { availableActions } from '@/app/_lib/review/states'
+import { availableActions, blockedActions } from '@/app/_lib/review/states'
 import { STATE_LABELS } from '@/domain/revision-states'
 import { NotFoundError } from '@/app/_lib/http/errors'
 import { listReviewComments, listRevisionEvents } from '@/db/queries/review'
@@ -18,6 +18,7 @@ import { releasedRevisionOfMap } from '@/app/(app)/maps/[id]/released-set'
 import { ReviewActions } from './review-actions'
 import { ReviewComments } from './review-comments'
 import { ChangesSummary } from './changes-summary'
+import { compareWithReleaseBefore } from '@/app/_lib/sets/release-before'
 import { SetsHolding } from './sets-holding'
 
 export const metadata = { title: 'Review' }
@@ -36,10 +37,16 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
     releasedRevisionOfMap(map),
   ])
   const changes = released && released.revision.id !== r.id ? diff(released.revision.table, r.table) : null
+  // In the trucks now: say what it changed against the release before, not "nothing to compare".
+  const previous =
+    released && released.revision.id === r.id
+      ? { kind: map.kind, comparison: await compareWithReleaseBefore({ programId: map.programId, releasedAt: released.releasedAt, drive: map.kind === 'drive' ? { revisionId: r.id } : null, regen: map.kind === 'regen' ? { revisionId: r.id } : null }) }
+      : undefined
   const findings = validate(r.table, limitsFromVehicle(map.programParams))
   const errors = findings.filter((f) => f.severity === 'error').length
   const state = r.state
   const actions = availableActions(state, user, r.authorId)
+  const blocked = blockedActions(state, user, r.authorId)
   return (
     <div className="space-y-5">
       <div>
@@ -71,8 +78,18 @@ export default async function ReviewPage(props: { params: Promise<{ revisionId: 
         number={r.number}
         released={released && { number: released.revision.number, setId: released.setId, setNumber: released.setNumber }}
         changes={changes}
+        previous={previous}
       />
-      {actions.length > 0 && <ReviewActions revisionId={r.id} actions={actions} />}
+      {(actions.length > 0 || blocked.length > 0) && (
+        <ReviewActions
+          revisionId={r.id}
+          actions={actions}
+          blocked={blocked}
+          summaries={{
+            approve: `Approve ${map.name} r${r.number} by ${r.authorName}: it becomes “${STATE_LABELS.approved}”, can go into a map set for release, and ${r.authorName} is told by e-mail.`,
+          }}
+        />
+      )}
       <SetsHolding revisionId={r.id} kind={map.kind} sets={sets} canMake={EDITORS.includes(user.role)} />
       <section id="reports">
         <h2 className="mb-2 text-lg font-semibold">Drive reports on sets holding this revision</h2>

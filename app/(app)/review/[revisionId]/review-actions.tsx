@@ -1,15 +1,31 @@
 'use client'
 import { useRouter } from 'next/navigation'
-import { useState } from 'react'
+import { useRef, useState } from 'react'
 import { useMutation } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
+import { ConfirmStep } from '@/app/_components/confirm-step'
 import { ACTION_LABELS, type ReviewAction } from '@/domain/review-actions'
 
-/** Submit, approve or send back, as open to this person now; the server checks them again. A release is done on a map set. */
-export function ReviewActions(props: { revisionId: number; actions: ReviewAction[] }) {
+/** Actions that ask "are you sure" with a one-line summary first. */
+const CONFIRMED: readonly ReviewAction[] = ['approve']
+
+/**
+ * Submit, approve or send back, as open to this person now; the server checks them again. A release
+ * is done on a map set. An action the role could take but not on this revision (approving one's own)
+ * is shown with the reason instead of vanishing.
+ */
+export function ReviewActions(props: {
+  revisionId: number
+  actions: ReviewAction[]
+  /** One line per confirmed action: what will happen. */
+  summaries: Partial<Record<ReviewAction, string>>
+  blocked: { action: ReviewAction; reason: string }[]
+}) {
   const router = useRouter()
   const [comment, setComment] = useState('')
   const [error, setError] = useState<string | null>(null)
+  const [confirming, setConfirming] = useState<ReviewAction | null>(null)
+  const openers = useRef<Partial<Record<ReviewAction, HTMLButtonElement | null>>>({})
   const run = useMutation({
     mutationFn: (action: ReviewAction) =>
       api(`/api/revisions/${props.revisionId}/actions`, {
@@ -19,6 +35,7 @@ export function ReviewActions(props: { revisionId: number; actions: ReviewAction
     onSuccess: () => {
       setError(null)
       setComment('')
+      setConfirming(null)
       router.refresh()
     },
     onError: (e) => setError(e.message),
@@ -33,11 +50,40 @@ export function ReviewActions(props: { revisionId: number; actions: ReviewAction
       {error && <p role="alert" className="error-text text-sm">{error}</p>}
       <div className="flex flex-wrap gap-2">
         {props.actions.map((a) => (
-          <button key={a} type="button" className={a === 'send_back' ? 'btn' : 'btn-primary'} disabled={run.isPending} onClick={() => run.mutate(a)}>
+          <button
+            key={a}
+            ref={(el) => {
+              openers.current[a] = el
+            }}
+            type="button"
+            className={a === 'send_back' ? 'btn' : 'btn-primary'}
+            disabled={run.isPending || confirming !== null}
+            aria-expanded={CONFIRMED.includes(a) ? confirming === a : undefined}
+            onClick={() => (CONFIRMED.includes(a) ? setConfirming(a) : run.mutate(a))}
+          >
             {ACTION_LABELS[a]}
           </button>
         ))}
       </div>
+      {confirming && (
+        <ConfirmStep
+          summary={props.summaries[confirming] ?? `${ACTION_LABELS[confirming]} this revision?`}
+          confirmLabel={`Yes, ${ACTION_LABELS[confirming].toLowerCase()}`}
+          pending={run.isPending}
+          onConfirm={() => run.mutate(confirming)}
+          onCancel={() => {
+            const opener = openers.current[confirming]
+            setConfirming(null)
+            // Back to the button that opened it, once it is enabled again.
+            setTimeout(() => opener?.focus(), 0)
+          }}
+        />
+      )}
+      {props.blocked.map((b) => (
+        <p key={b.action} className="text-sm text-slate-700" data-testid={`blocked-${b.action}`}>
+          <span className="font-semibold">{ACTION_LABELS[b.action]}</span> is not open to you here: {b.reason}.
+        </p>
+      ))}
     </section>
   )
 }

@@ -3,6 +3,7 @@ import { useState } from 'react'
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query'
 import { api, newDraftId } from '@/app/_components/api-client'
 import { formatTime } from '@/app/_components/format'
+import { MarkdownNotes } from '@/app/_components/markdown-notes'
 
 interface CommentItem {
   id: number
@@ -39,7 +40,7 @@ export function ReviewComments(props: { revisionId: number; initial: CommentItem
       <h2 className="font-semibold">Comments</h2>
       <ul className="space-y-1 text-sm" data-testid="review-comments">
         {list.data.comments.map((c) => (
-          <li key={c.id}><span className="text-slate-500">{c.authorName}, {formatTime(c.createdAt)}{where(c)}:</span> {c.body}</li>
+          <li key={c.id}><span className="text-slate-500">{c.authorName}, {formatTime(c.createdAt)}{where(c)}:</span> <MarkdownNotes text={c.body} /></li>
         ))}
         {list.data.comments.length === 0 && <li className="text-slate-500">No comments yet.</li>}
       </ul>

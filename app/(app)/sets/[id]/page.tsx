@@ -8,12 +8,14 @@ import { formatTime } from '@/app/_components/format'
 import { SafetyCaution } from '@/app/_components/safety-caution'
 import { listAudit } from '@/db/queries/audit'
 import { listReports } from '@/db/queries/reports'
-import { currentSetRelease, listSets } from '@/db/queries/sets'
+import { currentSetRelease, listSets, releaseToRestore } from '@/db/queries/sets'
 import { loadCaseLabel } from '@/physics/load-cases'
 import { surfaceLabel } from '@/physics/surfaces'
 import { SetStatusBadge } from '../status-badge'
 import { otherSetIds, setHistory, withdrawnBy } from './history'
 import { ReleasePanel } from './release-panel'
+import { ReleaseComparisonView } from './release-comparison'
+import { compareWithReleaseBefore } from '@/app/_lib/sets/release-before'
 import { SetAcknowledgements } from './set-acknowledgements'
 import { SetCoverageGrid } from './set-coverage-grid'
 import { SetDownloads } from './set-downloads'
@@ -22,8 +24,10 @@ import { SetGateChecklist } from './set-gate-checklist'
 import { SetHistoryList } from './set-history-list'
 import { SetParts } from './set-parts'
 import { SetReports } from './set-reports'
+import { EvidenceReplay } from './evidence-replay'
 import { WithdrawnBanner } from './withdrawn-banner'
 import { WithdrawPanel } from './withdraw-panel'
+import { MarkdownNotes } from '@/app/_components/markdown-notes'
 
 export const metadata = { title: 'Map set' }
 
@@ -33,11 +37,12 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
   const set = await loadSet(id).catch((e) => (e instanceof NotFoundError ? null : Promise.reject(e)))
   if (!set) notFound()
   const firstRelease = set.releases[set.releases.length - 1]
-  const [gate, reports, test, current, audit] = await Promise.all([
+  const [gate, reports, programReports, test, current, audit] = await Promise.all([
     setGateFor(set),
     listReports({ setId: set.id }),
+    listReports({ programId: set.programId }),
     testPackage(set),
-    set.status === 'testing' ? null : currentSetRelease(set.programId),
+    currentSetRelease(set.programId),
     // Withdrawals and later releases of the program say who withdrew this set's release and what replaced it.
     firstRelease
       ? Promise.all([listAudit({ entityType: 'map_set', action: 'set.release', since: firstRelease.releasedAt, limit: 500 }), listAudit({ entityType: 'map_set', action: 'set.withdraw', since: firstRelease.releasedAt, limit: 500 })]).then((x) => x.flat())
@@ -47,7 +52,10 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
   const setNumbers = new Map(others.length ? (await listSets({ ids: others })).map((s) => [s.id, s.number] as const) : [])
   const history = setHistory({ setId: set.id, createdAt: set.createdAt, createdByName: set.createdByName, releases: set.releases, audit, setNumbers })
   const latest = set.releases[0] ?? null
+  const partNames = [set.drive && `drive map ${set.drive.mapName} r${set.drive.number}`, set.regen && `regen map ${set.regen.mapName} r${set.regen.number}`].filter(Boolean).join(' and ')
+  const comparison = latest ? await compareWithReleaseBefore({ programId: set.programId, releasedAt: latest.releasedAt, drive: set.drive, regen: set.regen }) : null
   const isLead = user.role === 'lead_engineer'
+  const restore = isLead && set.status === 'released' ? await releaseToRestore(set.programId) : null
   const canRelease = isLead && (set.status === 'testing' || set.status === 'retired')
   // What would still block the release with a reason given for every traction exception and uncovered condition.
   const reasonable = [...gate.exceptions.map((e) => e.key), ...gate.uncovered]
@@ -71,7 +79,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
           {set.createdByName ? ` by ${set.createdByName}` : ''}
           {set.status === 'released' && latest ? ` · released ${formatTime(latest.releasedAt)} by ${latest.releasedByName}` : ''}
         </p>
-        {set.note && <p className="text-sm break-words whitespace-pre-line">{set.note}</p>}
+        <MarkdownNotes text={set.note} />
         <p className="pt-1">
           <Link href={`/sets/${set.id}/drivability`} className="btn">Drivability: tip-in, tip-out, launch</Link>
         </p>
@@ -90,6 +98,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
         </p>
       )}
       <SetParts set={set} />
+      {latest && <ReleaseComparisonView comparison={comparison} paramVersion={set.paramVersion.number} />}
       <SetFindingsView set={set} findings={setFindings(set)} />
       <section aria-labelledby="release-section-heading" className="space-y-3">
         <h2 id="release-section-heading" className="text-lg font-semibold">Release</h2>
@@ -102,6 +111,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
             setId={set.id}
             setNumber={set.number}
             unmet={unmet}
+            summary={`Release Set ${set.number} of ${set.programName}: its ${partNames} go to the program's trucks${current ? `, replacing Set ${current.setNumber}` : ' as its first released set'}; the leads and the maps' authors are e-mailed.`}
             exceptions={gate.exceptions.map((e) => ({
               key: e.key,
               label: `${e.mapKind === 'drive' ? 'Drive' : 'Regen'} map × ${surfaceLabel(e.surface)} × ${loadCaseLabel(e.loadCase)}: ${e.cells.length} ${e.finding === 'jackknife' ? 'lift-off cell(s) below the design lateral acceleration (jackknife risk)' : 'cell(s) above the limit'}`,
@@ -111,10 +121,15 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
               .map((c) => ({ key: c.key, label: `${surfaceLabel(c.surface)} × ${loadCaseLabel(c.loadCase)}: no drive report on this set` }))}
           />
         )}
-        {isLead && set.status === 'released' && <WithdrawPanel setId={set.id} setNumber={set.number} />}
+        {isLead && set.status === 'released' && <WithdrawPanel
+            setId={set.id}
+            setNumber={set.number}
+            summary={`Withdraw the release of Set ${set.number}: everyone is told not to use it; ${restore ? `Set ${restore.setNumber}, the release before it, goes back to the trucks` : `${set.programName} will have no released set`}.`}
+          />}
         <SetDownloads setId={set.id} status={set.status} release={latest} test={{ sha256: test.sha256, bytes: test.bytes.length }} />
       </section>
       <SetReports setId={set.id} reports={reports} canFile={user.role === 'test_driver' && set.status !== 'withdrawn'} />
+      <EvidenceReplay setId={set.id} reports={programReports.filter((r) => r.setId !== set.id).slice(0, 20)} />
       <SetHistoryList events={history} />
     </div>
   )

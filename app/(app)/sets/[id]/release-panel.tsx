@@ -3,6 +3,7 @@ import { useRouter } from 'next/navigation'
 import { useState, type FormEvent } from 'react'
 import { useMutation } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
+import { ConfirmStep } from '@/app/_components/confirm-step'
 
 export interface ExceptionChoice {
   key: string
@@ -15,8 +16,9 @@ export interface ExceptionChoice {
  * each release condition no drive report covers (its waiver), then Release. The server judges the gate
  * again and its refusal is shown as it says it.
  */
-export function ReleasePanel({ setId, setNumber, exceptions, uncovered = [], unmet }: { setId: number; setNumber: number; exceptions: ExceptionChoice[]; uncovered?: ExceptionChoice[]; unmet: string[] }) {
+export function ReleasePanel({ setId, setNumber, exceptions, uncovered = [], unmet, summary }: { setId: number; setNumber: number; exceptions: ExceptionChoice[]; uncovered?: ExceptionChoice[]; unmet: string[]; summary: string }) {
   const router = useRouter()
+  const [confirming, setConfirming] = useState(false)
   const [reasons, setReasons] = useState<Record<string, string>>({})
   const [error, setError] = useState<string | null>(null)
   const [done, setDone] = useState<string | null>(null)
@@ -28,11 +30,13 @@ export function ReleasePanel({ setId, setNumber, exceptions, uncovered = [], unm
       }),
     onSuccess: (r) => {
       setError(null)
+      setConfirming(false)
       setDone(`Set ${setNumber} is released. Package ${r.filename}, SHA-256 ${r.sha256}.`)
       router.refresh()
     },
     onError: (e) => {
       setError(e.message)
+      setConfirming(false)
       router.refresh()
     },
   })
@@ -43,7 +47,8 @@ export function ReleasePanel({ setId, setNumber, exceptions, uncovered = [], unm
     if (missing.length) return setError(`Give a reason for each traction exception (${missing.length} without one)`)
     const unwaived = uncovered.filter((x) => !(reasons[x.key] ?? '').trim())
     if (unwaived.length) return setError(`Give a reason for each release condition without a drive report (${unwaived.length} without one)`)
-    release.mutate()
+    setError(null)
+    setConfirming(true)
   }
 
   return (
@@ -97,9 +102,22 @@ export function ReleasePanel({ setId, setNumber, exceptions, uncovered = [], unm
       )}
       {error && <p role="alert" className="error-text text-sm">{error}</p>}
       {done && <p role="status" className="rounded bg-accent-soft px-2 py-1 text-sm break-words">{done}</p>}
-      <button type="submit" className="btn-primary" disabled={release.isPending}>
-        {release.isPending ? 'Releasing…' : `Release Set ${setNumber}`}
-      </button>
+      {confirming ? (
+        <ConfirmStep
+          summary={summary}
+          confirmLabel={`Yes, release Set ${setNumber}`}
+          pending={release.isPending}
+          onConfirm={() => release.mutate()}
+          onCancel={() => {
+            setConfirming(false)
+            setTimeout(() => document.getElementById(`release-${setId}`)?.focus(), 0)
+          }}
+        />
+      ) : (
+        <button id={`release-${setId}`} type="submit" className="btn-primary" disabled={release.isPending}>
+          {`Release Set ${setNumber}`}
+        </button>
+      )}
     </form>
   )
 }

@@ -22,6 +22,8 @@ export interface LogReadOptions extends Omit<LogAnalyserOptions, 'wheelChannels'
   wheelRadiusM?: number
   /** Run the effective-radius calibration as a first pass (where the source can be read twice). Default true. */
   calibrateRadius?: boolean
+  /** Told of every analysed sample with its measured slip (NaN when not judged): the replay reads the log this way. */
+  onSample?: (sample: LogSample, slip: number) => void
 }
 
 /** The analysis plus which columns were read and which were ignored. */
@@ -58,8 +60,9 @@ export interface CalibrationSink extends Omit<LogRowSink, 'finish'> {
 export function createLogRowSink(opts: LogReadOptions, delimiter = ','): LogRowSink {
   let analyser: ReturnType<typeof createLogAnalyser> | null = null
   const r = createRecordReader(opts, delimiter, (layout, timeColumn) => {
-    analyser = createLogAnalyser({ ...opts, timeColumn, wheelChannels: layoutWheelChannels(layout) })
-    return analyser.push
+    const a = (analyser = createLogAnalyser({ ...opts, timeColumn, wheelChannels: layoutWheelChannels(layout) }))
+    const hook = opts.onSample
+    return hook ? (s: LogSample) => hook(s, a.push(s)) : a.push
   })
   return {
     rows: r.rows,

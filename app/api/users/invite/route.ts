@@ -14,7 +14,7 @@ const inviteSchema = createUserSchema.omit({ password: true })
 export const POST = withRole(['admin'], async (req, { user }) => {
   const input: z.infer<typeof inviteSchema> = await readJson(req, inviteSchema)
   // An unguessable password nobody knows until the invitee sets their own.
-  const created = await createUser({ ...input, passwordHash: await hashPassword(randomBytes(32).toString('base64url')) })
+  const created = await createUser({ ...input, passwordHash: await hashPassword(randomBytes(32).toString('base64url')), invited: true })
   await recordAudit({ actorId: user.id, action: 'user.invite', entityType: 'user', entityId: created.id, details: { email: created.email, role: created.role } })
   await sendOneTimeLink(created, 'invite', user.id)
   return Response.json({ user: created }, { status: 201 })

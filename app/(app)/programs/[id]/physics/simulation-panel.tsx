@@ -37,7 +37,7 @@ export function SimulationPanel({ map, rev, choice, units }: { map: ProgramMap; 
       <h2 className="text-lg font-semibold">{launch ? 'Launch' : 'Lift-off'} simulation on {map.name} r{rev}</h2>
       <p className="text-sm text-slate-600">
         {launch
-          ? 'From standstill, the pedal steps (ramp 0 s) or ramps to the chosen position; the map torque is limited by the motor and battery and passed through the tyre model.'
+          ? 'From standstill, the pedal steps (ramp 0 s) or ramps to the chosen position; the map torque is limited by the motor and battery and passed through the tyre model. The model has no traction control and a rigid driveline, and looks the map up on the speed the program names (road speed unless it says driven-wheel speed): with road speed on snow or ice nothing cuts the torque when the wheels spin, so the slip can grow very large while the truck barely moves (docs/physics.md §9a).'
           : 'At the starting speed the accelerator is released; the regen map’s 0 % row brakes the drive axle until 2 km/h.'}
       </p>
       <form className="flex flex-wrap items-end gap-3" onSubmit={(e) => { e.preventDefault(); run.mutate() }}>

@@ -8,6 +8,7 @@ import { MANOEUVRES, type ManoeuvreKind } from '@/physics/drivability'
 import { loadCaseLabel } from '@/physics/load-cases'
 import { surfaceLabel } from '@/physics/surfaces'
 import { DrivabilityPlots } from './drivability-plots'
+import { GradeSection } from './grade-section'
 
 export const metadata = { title: 'Drivability' }
 
@@ -46,6 +47,12 @@ export default async function DrivabilityPage(props: { params: Promise<{ id: str
           Tip-in (a pedal step from a held speed), tip-out (pedal released into lift-off regen) and launch, through the set’s{' '}
           {result.ramps ? `torque ramp limits v${result.ramps.number}` : 'maps with no ramp limits (the request reaches the motor at once)'}, on every
           release condition of parameter version v{set.paramVersion.number}. The model assumes no traction control and a rigid driveline (docs/physics.md).
+        </p>
+        <p className="max-w-3xl text-sm text-slate-600" data-testid="map-speed-source">
+          {result.mapSpeedSource === 'driven-wheel'
+            ? 'The maps are looked up on the driven-wheel speed (from the motor speed): a spin raises the looked-up speed, so a map whose torque falls with speed asks for less and the spin partly limits itself.'
+            : 'The maps are looked up on the road speed: a spinning wheel does not change the request, so on a low-friction launch nothing but the map and the ramps limits the torque and the slip can grow large while the truck barely moves.'}{' '}
+          Neither is traction control; the program’s parameters say which speed the controller uses.
         </p>
       </div>
       <form method="get" className="card space-y-3" aria-labelledby="settings-heading">
@@ -102,6 +109,7 @@ export default async function DrivabilityPage(props: { params: Promise<{ id: str
           </table>
         </div>
       </section>
+      {result.grade && <GradeSection checks={result.grade} programId={set.programId} />}
       {chosen && trace && (
         <section id="traces" className="space-y-2" aria-labelledby="traces-heading">
           <h2 id="traces-heading" className="text-lg font-semibold">Traces: {chosen.label}</h2>

@@ -8,6 +8,7 @@ import { limitsOrNull } from '@/app/_components/map-grid/limits-or-null'
 import { MapPageHeader } from '@/app/_components/map-grid/map-page-header'
 import { getMap } from '@/db/queries/maps'
 import { getRevision } from '@/db/queries/revisions'
+import { MarkdownNotes } from '@/app/_components/markdown-notes'
 
 export const metadata = { title: 'Map revision' }
 
@@ -41,7 +42,7 @@ export default async function RevisionPage(props: { params: Promise<{ id: string
           by {revision.authorName} · <time dateTime={revision.createdAt.toISOString()}>{revision.createdAt.toISOString().replace('T', ' ').slice(0, 16)} UTC</time> · checksum{' '}
           <code className="break-all text-xs">{revision.checksum}</code>
         </p>
-        {revision.notes && <pre className="whitespace-pre-wrap font-sans text-slate-700">{revision.notes}</pre>}
+        <MarkdownNotes text={revision.notes} />
         <p className="text-slate-600" data-testid="judged-with">
           Findings below are judged with parameter version {map.programParamVersion} of {map.programName} (its latest); a map set is judged with the version it names.
         </p>

@@ -1,9 +1,13 @@
 import { and, asc, eq, sql } from 'drizzle-orm'
 import type { MapTable } from '../../maps'
 import { getDb } from '../client'
-import { mapRevisions, maps, users, vehiclePrograms } from '../schema'
+import { executePrepared } from '../prepared'
+import type { RevisionState } from '../../domain/revision-states'
+import type { VehicleParams } from '../../physics/vehicle'
+import { mapRevisions, maps, users, vehiclePrograms, type ReleaseConditions } from '../schema'
 import { recordAudit } from './audit'
 import { insertRevision, revisionSummaryColumns } from './revisions'
+import { revisionTable } from './revision-tables'
 
 export interface MapSummary {
   id: number
@@ -87,13 +91,23 @@ export async function createMap(
 export async function getRevisionWithMap(revisionId: number) {
   const db = await getDb()
   const rows = await db
-    .select({ map: mapWithProgramColumns, revision: { ...revisionSummaryColumns, table: mapRevisions.table } })
+    .select({ map: mapWithProgramColumns, revision: revisionSummaryColumns })
     .from(mapRevisions)
     .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
     .where(eq(mapRevisions.id, revisionId))
-  return rows[0] ?? null
+  return withTable(rows[0])
+}
+
+/**
+ * Adds the revision's table from the revision-table cache: the row read each time carries only what
+ * can change (the map, its program, the revision's state and author name), never the table itself.
+ */
+async function withTable<T extends { revision: { id: number } }>(row: T | undefined): Promise<(T & { revision: T['revision'] & { table: MapTable } }) | null> {
+  if (!row) return null
+  const table = await revisionTable(row.revision.id)
+  return table && { ...row, revision: { ...row.revision, table } }
 }
 
 /** The latest revision of every map, with its table and the program's parameters, in one query (the overview's findings). */
@@ -107,17 +121,64 @@ export async function listLatestRevisions() {
     .orderBy(asc(vehiclePrograms.name), asc(maps.kind), asc(maps.name))
 }
 
-/** A map, its program and one revision of it (the latest when `number` is omitted) in one round trip; null when either is missing. */
+/**
+ * The hottest read (every GET of a map, the editor, the compare page): a map, its program and the
+ * summary of one revision, as a prepared statement. Column for column what mapWithProgramColumns
+ * and revisionSummaryColumns select; `$2` = -1 means the latest revision (arguments are integers only).
+ */
+const MAP_WITH_REVISION_SQL = `
+  select m.id, m.name, m.kind, m.description, m.program_id, p.name as program_name,
+    (select max(pv.number)::int from param_versions pv where pv.program_id = p.id) as program_param_version,
+    p.params as program_params, p.release_conditions as program_release_conditions, m.created_at,
+    r.id as revision_id, r.map_id as revision_map_id, r.number, r.parent_id, r.author_id, u.name as author_name,
+    r.message, r.notes, r.checksum, r.state, r.created_at as revision_created_at
+  from maps m
+  join vehicle_programs p on p.id = m.program_id
+  join map_revisions r on r.map_id = m.id
+    and r.number = coalesce(nullif($2, -1)::int, (select max(x.number) from map_revisions x where x.map_id = m.id))
+  join users u on u.id = r.author_id
+  where m.id = $1`
+
+type Row = Record<string, unknown>
+const date = (v: unknown) => (v instanceof Date ? v : new Date(String(v)))
+
+function mapWithRevisionFromRow(r: Row) {
+  return {
+    map: {
+      id: r.id as number,
+      name: r.name as string,
+      kind: r.kind as 'drive' | 'regen',
+      description: r.description as string,
+      programId: r.program_id as number,
+      programName: r.program_name as string,
+      programParamVersion: r.program_param_version as number,
+      programParams: r.program_params as VehicleParams,
+      programReleaseConditions: r.program_release_conditions as ReleaseConditions,
+      createdAt: date(r.created_at),
+    },
+    revision: {
+      id: r.revision_id as number,
+      mapId: r.revision_map_id as number,
+      number: r.number as number,
+      parentId: r.parent_id as number | null,
+      authorId: r.author_id as number,
+      authorName: r.author_name as string,
+      message: r.message as string,
+      notes: r.notes as string,
+      checksum: r.checksum as string,
+      state: r.state as RevisionState,
+      createdAt: date(r.revision_created_at),
+    },
+  }
+}
+
+/**
+ * A map, its program and one revision of it (the latest when `number` is omitted) in one round
+ * trip, the table from the revision-table cache; null when either is missing.
+ */
 export async function getMapWithRevision(mapId: number, number?: number) {
-  const db = await getDb()
-  const rows = await db
-    .select({ map: mapWithProgramColumns, revision: { ...revisionSummaryColumns, table: mapRevisions.table } })
-    .from(maps)
-    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
-    .innerJoin(mapRevisions, and(eq(mapRevisions.mapId, maps.id), eq(mapRevisions.number, number ?? latestNumberOf)))
-    .innerJoin(users, eq(users.id, mapRevisions.authorId))
-    .where(eq(maps.id, mapId))
-  return rows[0] ?? null
+  const rows = await executePrepared('map_with_revision', MAP_WITH_REVISION_SQL, [mapId, number ?? -1])
+  return withTable(rows[0] && mapWithRevisionFromRow(rows[0]))
 }
 
 /**

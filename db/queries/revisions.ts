@@ -2,6 +2,7 @@ import { and, desc, eq, lt, sql } from 'drizzle-orm'
 import type { MapTable } from '../../maps'
 import { checksum } from '../checksum'
 import type { RevisionState } from '../../domain/revision-states'
+import { revisionTable } from './revision-tables'
 import { getDb, type Db } from '../client'
 import { mapRevisions, maps, users } from '../schema'
 import { recordAudit } from './audit'
@@ -150,13 +151,16 @@ export async function countRevisions(mapId: number): Promise<number> {
 export async function getRevision(mapId: number, number?: number): Promise<Revision | null> {
   const db = await getDb()
   const rows = await db
-    .select({ ...revisionSummaryColumns, table: mapRevisions.table })
+    .select(revisionSummaryColumns)
     .from(mapRevisions)
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
     .where(number === undefined ? eq(mapRevisions.mapId, mapId) : and(eq(mapRevisions.mapId, mapId), eq(mapRevisions.number, number)))
     .orderBy(desc(mapRevisions.mapId), desc(mapRevisions.number))
     .limit(1)
-  return rows[0] ?? null
+  const summary = rows[0]
+  // The table never changes once written: it comes from the revision-table cache, not this row.
+  const table = summary && (await revisionTable(summary.id))
+  return summary && table ? { ...summary, table } : null
 }
 
 /** A saved revision as saveRevision returned it (a repeated save answers with the first). */

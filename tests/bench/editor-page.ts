@@ -7,7 +7,7 @@ import fs from 'node:fs'
 import path from 'node:path'
 import zlib from 'node:zlib'
 import { chromium, type Page } from 'playwright-core'
-import { figure, isMain, median, ROOT, runStandalone, type BenchResult, type Figure } from './report'
+import { DIST_DIR, figure, isMain, median, ROOT, runStandalone, type BenchResult, type Figure } from './report'
 import { signIn, startServer, type BenchServer } from './server'
 
 const BENCH = 'editor-page'
@@ -23,7 +23,7 @@ interface RouteStats { route: string; firstLoadChunkPaths: string[] }
 
 /** Gzip bytes of the route's first-load chunks, plot chunks left out. */
 export function firstLoadGzip(): { bytes: number; chunks: number; plotChunks: number } {
-  const file = path.join(ROOT, '.next', 'diagnostics', 'route-bundle-stats.json')
+  const file = path.join(DIST_DIR, 'diagnostics', 'route-bundle-stats.json')
   const stats = JSON.parse(fs.readFileSync(file, 'utf8')) as RouteStats[]
   const route = stats.find((r) => r.route === ROUTE)
   if (!route) throw new Error(`${ROUTE} not in ${file}`)

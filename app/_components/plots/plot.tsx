@@ -8,6 +8,13 @@ import dynamic from 'next/dynamic'
 import type { Data, Layout } from 'plotly.js'
 import { dataAsText, layoutAsText, plotConfig } from './plot-text'
 
+/**
+ * The plot library (several MB to fetch and run). Loaded when the first plot mounts, after the page
+ * has hydrated: loading it any earlier runs it before hydration and leaves the page's buttons dead
+ * for that long.
+ */
+export const loadPlotLibrary = () => import('./plotly-component')
+
 const PlotlyComponent = dynamic(() => import('./plotly-component'), {
   ssr: false,
   loading: () => <div className="grid h-full min-h-40 place-items-center text-sm text-slate-500">Loading plot…</div>,

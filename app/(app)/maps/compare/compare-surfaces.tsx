@@ -3,7 +3,9 @@
 import { useMemo, useState } from 'react'
 import { ChangeTable, type ChangeRow } from '@/app/_components/plots/change-table'
 import { DIFF_SCALE } from '@/app/_components/plots/palette'
+import { SurfacePending } from '@/app/_components/plots/surface-pending'
 import { SurfacePlot, type Camera } from '@/app/_components/plots/surface-plot'
+import { useSurfacesLater } from '@/app/_components/plots/use-surfaces-later'
 import type { UnitSet } from '@/maps'
 import type { MapDiff, MapTable } from '@/maps'
 import type { MapOverlay } from '@/physics/overlay'
@@ -41,16 +43,22 @@ export function CompareSurfaces({ a, b, diff, units, limits, rows }: Props) {
   const delta = useMemo(() => differenceTable(a.table, diff), [a.table, diff])
   const dMax = Math.max(1, ...diff.changed.map((c) => Math.abs(c.delta)).filter(Number.isFinite))
   const common = { units, camera, onCamera: setCamera, range: shared }
+  // The slip heat maps and the change table come first; the three WebGL surfaces follow.
+  const draw = useSurfacesLater()
+  const titleA = `A: ${a.mapName} r${a.number}`
+  const titleB = `B: ${b.mapName} r${b.number}`
   return (
     <>
       <div className="grid gap-4 lg:grid-cols-2" data-testid="compare-surfaces">
-        <div className="card p-2"><SurfacePlot {...common} table={a.table} title={`A: ${a.mapName} r${a.number}`} filename={`map-${a.mapId}-r${a.number}`} limitBySpeed={limits ? limitOf(limits.a) : undefined} /></div>
-        <div className="card p-2"><SurfacePlot {...common} table={b.table} title={`B: ${b.mapName} r${b.number}`} filename={`map-${b.mapId}-r${b.number}`} limitBySpeed={limits ? limitOf(limits.b) : undefined} /></div>
+        <div className="card p-2">{draw ? <SurfacePlot {...common} table={a.table} title={titleA} filename={`map-${a.mapId}-r${a.number}`} limitBySpeed={limits ? limitOf(limits.a) : undefined} /> : <SurfacePending />}</div>
+        <div className="card p-2">{draw ? <SurfacePlot {...common} table={b.table} title={titleB} filename={`map-${b.mapId}-r${b.number}`} limitBySpeed={limits ? limitOf(limits.b) : undefined} /> : <SurfacePending />}</div>
       </div>
       <section className="grid gap-4 lg:grid-cols-2">
         <div className="card p-2">
-          <SurfacePlot units={units} camera={camera} onCamera={setCamera} table={delta} range={{ min: -dMax, max: dMax }} colorscale={DIFF_SCALE} diverging
-            title="Difference B − A" zLabel={`B − A (${units.torque})`} filename={`difference-${a.mapId}-r${a.number}-${b.mapId}-r${b.number}`} />
+          {draw ? (
+            <SurfacePlot units={units} camera={camera} onCamera={setCamera} table={delta} range={{ min: -dMax, max: dMax }} colorscale={DIFF_SCALE} diverging
+              title="Difference B − A" zLabel={`B − A (${units.torque})`} filename={`difference-${a.mapId}-r${a.number}-${b.mapId}-r${b.number}`} />
+          ) : <SurfacePending />}
         </div>
         <div className="card space-y-2">
           <h2 className="font-semibold">Changed cells, largest first</h2>

@@ -4,8 +4,7 @@
  */
 import 'server-only'
 import { overlayFor } from '@/app/_lib/physics/overlay'
-import { getMap } from '@/db/queries/maps'
-import { getRevision } from '@/db/queries/revisions'
+import { getMapWithRevision } from '@/db/queries/maps'
 import { diff } from '@/maps'
 import { loadCasesFor } from '@/physics'
 import { initialChoice, type CompareViewData, type Side } from './compare-data'
@@ -13,10 +12,10 @@ import type { RevisionRef } from './revision-ref'
 
 export type Comparison = { ok: true; view: CompareViewData } | { ok: false; problem: string }
 
+/** A map and one of its revisions in one query (the table from the revision-table cache); null when either is missing. */
 async function side(ref: RevisionRef) {
-  const map = await getMap(ref.mapId)
-  const rev = map ? await getRevision(map.id, ref.number) : null
-  return map && rev ? { map, rev } : null
+  const found = await getMapWithRevision(ref.mapId, ref.number)
+  return found && { map: found.map, rev: found.revision }
 }
 
 export async function loadComparison(a: RevisionRef, b: RevisionRef, q: Record<string, string | string[] | undefined>): Promise<Comparison> {

@@ -2,7 +2,7 @@ import { withRole } from '@/app/_lib/http/access'
 import { NotFoundError } from '@/app/_lib/http/errors'
 import { intParam } from '@/app/_lib/http/request'
 import { getMapWithLatest } from '@/db/queries/maps'
-import { limitsFromVehicle, validate } from '@/maps'
+import { revisionFindings } from '@/app/_lib/maps/revision-findings'
 
 // GET /api/maps/:id — a map, its vehicle program, its latest revision and that revision's findings
 export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }) => {
@@ -10,6 +10,6 @@ export const GET = withRole<{ id: string }>('signed-in', async (_req, { params }
   const found = await getMapWithLatest(id)
   if (!found) throw new NotFoundError(`Map ${id}`)
   const { map, latest } = found
-  const findings = latest ? validate(latest.table, limitsFromVehicle(map.programParams)) : []
+  const findings = latest ? revisionFindings(latest.table, map.programParams) : []
   return Response.json({ map, latest, findings })
 })

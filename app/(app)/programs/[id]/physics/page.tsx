@@ -6,27 +6,50 @@ import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { EDITORS } from '@/app/_lib/auth/roles'
 import { tractionTable } from '@/app/_lib/physics/traction'
 import { batteryCornerRows } from '@/app/_lib/physics/battery-corners'
-import { getMapWithLatest, listMaps } from '@/db/queries/maps'
+import { overlayFor } from '@/app/_lib/physics/overlay'
+import { getMapWithLatest, getMapWithRevision, listMaps } from '@/db/queries/maps'
 import { getProgram } from '@/db/queries/programs'
 import { loadCasesFor } from '@/physics'
 import { PhysicsWorkbench } from './physics-workbench'
+import { initialState, type InitialPlots, type PhysicsState, type ProgramMap } from './physics-state'
 import { BatteryCornersTable } from './battery-corners-table'
 
 export const metadata = { title: 'Program physics' }
 
+/**
+ * The chosen revision's table and overlay for the first paint, so the plots need no request after
+ * the page loads (both cached by revision on the server). Null when there is nothing to plot or the
+ * choice is refused; the client then asks the overlay route, which names the problem.
+ */
+async function firstPlots(s: PhysicsState): Promise<InitialPlots | null> {
+  if (!s.map) return null
+  const found = await getMapWithRevision(s.map, s.rev)
+  if (!found) return null
+  const choice = { loadCase: s.loadCase, surface: s.surface, gradePct: s.gradePct }
+  const { table } = found.revision
+  try {
+    // Judged as the overlay route judges it: the map's program, its design lateral acceleration.
+    return { map: s.map, rev: s.rev, choice, table, overlay: overlayFor(found.map.programParams, table, choice, found.map.programReleaseConditions?.designLateralAccelMps2) }
+  } catch {
+    return null
+  }
+}
+
 /** /programs/:id/physics[?map=&rev=&loadCase=&surface=&gradePct=&units=] — traction limits and launch / lift-off simulations. */
 export default async function ProgramPhysicsPage(props: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser()
-  const program = await getProgram(pageId((await props.params).id, 'Program id'))
+  const id = pageId((await props.params).id, 'Program id')
+  const [program, listed, query] = await Promise.all([getProgram(id), listMaps({ programId: id }), props.searchParams])
   if (!program) notFound()
-  const maps = (await listMaps({ programId: program.id })).filter((m) => m.latestNumber !== null)
+  const maps: ProgramMap[] = listed.filter((m) => m.latestNumber !== null).map((m) => ({ id: m.id, name: m.name, kind: m.kind, latestNumber: m.latestNumber ?? 1 }))
+  const loadCases = loadCasesFor(program.params)
   const corners = program.releaseConditions.batteryCorners ?? []
-  // Only read the regen maps' tables when there are corners to evaluate them at.
-  const regen = corners.length
-    ? (await Promise.all(maps.filter((m) => m.kind === 'regen').map((m) => getMapWithLatest(m.id))))
-        .filter((m) => m !== null)
-        .map((m) => ({ name: m.map.name, number: m.latest.number, table: m.latest.table }))
-    : []
+  // Only read the regen maps' tables when there are corners to evaluate them at; both reads at once.
+  const [initialPlots, regenFound] = await Promise.all([
+    firstPlots(initialState(query, maps, loadCases)),
+    Promise.all(corners.length ? maps.filter((m) => m.kind === 'regen').map((m) => getMapWithLatest(m.id)) : []),
+  ])
+  const regen = regenFound.filter((m) => m !== null).map((m) => ({ name: m.map.name, number: m.latest.number, table: m.latest.table }))
   return (
     <div className="space-y-4">
       <div>
@@ -39,10 +62,11 @@ export default async function ProgramPhysicsPage(props: { params: Promise<{ id: 
       <SafetyCaution />
       <PhysicsWorkbench
         programId={program.id}
-        loadCases={loadCasesFor(program.params)}
-        maps={maps.map((m) => ({ id: m.id, name: m.name, kind: m.kind, latestNumber: m.latestNumber ?? 1 }))}
+        loadCases={loadCases}
+        maps={maps}
         initialTraction={tractionTable(program.params)}
-        query={await props.searchParams}
+        initialPlots={initialPlots}
+        query={query}
         canEdit={EDITORS.includes(user.role)}
       />
       <BatteryCornersTable rows={batteryCornerRows(program.params, program.releaseConditions, regen)} minDecelMps2={program.releaseConditions.minLiftOffDecelMps2} hasTable={Boolean(program.params.batteryPowerTable)} />

@@ -3,45 +3,30 @@
  * The physics page body: which revision and conditions (kept in the URL), the traction table, the
  * map with its traction-limit sheet and slip heat map, and the launch or lift-off simulation.
  */
-import { OverlayControls, type OverlayChoice } from '@/app/_components/plots/overlay-controls'
-import { UNITS, unitSystem } from '@/maps'
+import { OverlayControls } from '@/app/_components/plots/overlay-controls'
+import { UNITS } from '@/maps'
 import { useQueryState } from '@/app/_components/plots/use-query-state'
 import type { TractionRow } from '@/app/_lib/physics/traction'
-import { SURFACE_IDS, type LoadCase } from '@/physics'
+import type { LoadCase } from '@/physics'
 import { MapPhysics } from './map-physics'
+import { initialState, type InitialPlots, type PhysicsState, type ProgramMap } from './physics-state'
 import { SimulationPanel } from './simulation-panel'
 import { TractionTable } from './traction-table'
 
-export interface ProgramMap { id: number; name: string; kind: 'drive' | 'regen'; latestNumber: number }
+export type { ProgramMap }
 
 interface Props {
   programId: number
   loadCases: LoadCase[]
   maps: ProgramMap[]
   initialTraction: TractionRow[]
+  initialPlots: InitialPlots | null
   query: Record<string, string | string[] | undefined>
   canEdit: boolean
 }
 
-type State = OverlayChoice & { map: number; rev: number }
-
-function initialState(q: Props['query'], maps: ProgramMap[], loadCases: LoadCase[]): State {
-  const s = (k: string) => (typeof q[k] === 'string' ? (q[k] as string) : undefined)
-  const map = maps.find((m) => m.id === Number(s('map'))) ?? maps.find((m) => m.kind === 'drive') ?? maps[0]
-  const rev = Number(s('rev'))
-  const g = Number(s('gradePct') ?? 0)
-  return {
-    map: map?.id ?? 0,
-    rev: map && Number.isInteger(rev) && rev >= 1 && rev <= map.latestNumber ? rev : (map?.latestNumber ?? 0),
-    loadCase: loadCases.find((l) => l === s('loadCase')) ?? loadCases[0],
-    surface: SURFACE_IDS.find((x) => x === s('surface')) ?? 'wet-asphalt',
-    gradePct: Number.isFinite(g) && Math.abs(g) <= 30 ? g : 0,
-    units: unitSystem(s('units')),
-  }
-}
-
 export function PhysicsWorkbench(props: Props) {
-  const [state, setState] = useQueryState<State>(initialState(props.query, props.maps, props.loadCases))
+  const [state, setState] = useQueryState<PhysicsState>(initialState(props.query, props.maps, props.loadCases))
   const units = UNITS[state.units]
   const map = props.maps.find((m) => m.id === state.map)
   return (
@@ -65,7 +50,7 @@ export function PhysicsWorkbench(props: Props) {
       {map ? (
         <>
           <SimulationPanel key={`${map.id}-${state.rev}`} map={map} rev={state.rev} choice={state} units={units} />
-          <MapPhysics map={map} rev={state.rev} choice={state} units={units} canEdit={props.canEdit} />
+          <MapPhysics map={map} rev={state.rev} choice={state} units={units} canEdit={props.canEdit} initial={props.initialPlots} />
         </>
       ) : (
         <p className="card text-sm text-slate-600">This program has no maps yet; create one to simulate a launch or a lift-off.</p>

@@ -9,7 +9,7 @@ import { api } from '@/app/_components/api-client'
 import type { OverlayChoice } from '@/app/_components/plots/overlay-controls'
 import { tableNumber, type UnitSet } from '@/maps'
 import type { SimulationResponse } from '@/app/_lib/physics/simulate'
-import type { ProgramMap } from './physics-workbench'
+import type { ProgramMap } from './physics-state'
 import { SimulationPlots } from './simulation-plots'
 import { SimulationSummary } from './simulation-summary'
 

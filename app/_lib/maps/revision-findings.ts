@@ -1,0 +1,16 @@
+import { limitsFromVehicle, validate, type Finding, type MapTable } from '@/maps'
+import type { VehicleParams } from '@/physics/vehicle'
+import { tableMemo } from './table-memo'
+
+/** A few parameter sets per table: a program gains a parameter version now and then, not per request. */
+const memo = tableMemo<Finding[]>(4)
+
+/**
+ * Findings of a stored revision under a program's parameters. Both are immutable once stored (a
+ * save makes a new revision, a parameter change a new version), so the result is memoised beside
+ * the cached table, keyed by the limits the parameters give.
+ */
+export function revisionFindings(table: MapTable, params: VehicleParams): Finding[] {
+  const limits = limitsFromVehicle(params)
+  return memo(table, JSON.stringify(limits), () => validate(table, limits))
+}

@@ -43,3 +43,6 @@ export { formatExact, parseExact, humanNumber, cellNumber, tableNumber } from '.
 export { starterTable, regenCeilingBySpeed, STARTER_PEDAL_AXIS, STARTER_SPEED_AXIS } from './starter'
 export { crossChecks } from './cross-checks'
 export type { CrossCheck } from './cross-checks'
+export { clearCells, fillDown, fillRight, CLEARED_TORQUE_NM } from './fill'
+export { mergeTables, resolveMerge } from './merge'
+export type { MergeConflict, MergeResult, MergeSide } from './merge'

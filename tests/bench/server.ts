@@ -45,7 +45,7 @@ function buildsInProgress(): number[] {
 
 /** Waits (up to 10 min) until no `next build` runs in this tree and a build is present. */
 async function waitForQuietBuild(): Promise<void> {
-  const hasBuild = () => fs.existsSync(path.join(ROOT, '.next', 'BUILD_ID'))
+  const hasBuild = () => fs.existsSync(path.join(ROOT, process.env.NEXT_DIST_DIR || '.next', 'BUILD_ID'))
   for (let waited = 0; (buildsInProgress().length > 0 || (waited > 0 && !hasBuild())) && waited < 600_000; waited += 2000) await sleep(2000)
 }
 

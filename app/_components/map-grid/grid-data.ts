@@ -32,6 +32,12 @@ export function toGridData(table: MapTable, u: UnitSet): GridCell[][] {
   ]
 }
 
+/** The one grid cell (`row`, `col`, axes included) of toGridData, without building the rest. */
+export function gridCellOf(table: MapTable, u: UnitSet, row: number, col: number): GridCell {
+  if (row === 0) return col === 0 ? cornerText(table, u) : shown(u.speedOut(table.colAxis[col - 1]))
+  return col === 0 ? shown(table.rowAxis[row - 1]) : shown(u.torqueOut(table.values[row - 1][col - 1]))
+}
+
 // Spreadsheets often copy "1,200" with a thousands separator; accept exactly that shape.
 const GROUPED = /^-?\d{1,3}(,\d{3})+(\.\d+)?$/
 

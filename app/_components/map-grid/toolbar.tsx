@@ -1,7 +1,8 @@
 'use client'
 /**
  * Operations on the selected cells, undo and redo. Every operation goes through runOp, and a
- * refusal (bad number, breakpoint out of order, too few breakpoints…) is shown, never swallowed.
+ * refusal (bad number, breakpoint out of order, too few breakpoints…) goes to the editor's one
+ * message line, never swallowed.
  */
 import { useState, type ReactNode } from 'react'
 import { humanNumber } from '@/maps'
@@ -14,6 +15,8 @@ export interface ToolbarProps extends Omit<OpInput, 'text'> {
   redo: () => void
   canUndo: boolean
   canRedo: boolean
+  /** The editor's one message line: an operation's refusal, or null after one that worked. */
+  onMessage: (error: string | null) => void
 }
 
 function Group({ children, label }: { children: ReactNode; label: string }) {
@@ -27,7 +30,6 @@ function Group({ children, label }: { children: ReactNode; label: string }) {
 export function Toolbar(p: ToolbarProps) {
   const [text, setText] = useState<Record<string, string>>({ set: '', scale: '5', offset: '50', insert: '' })
   const [insertAxis, setInsertAxis] = useState<'insert-row' | 'insert-col'>('insert-col')
-  const [error, setError] = useState<string | null>(null)
   const { table, range, units } = p
   const sel = valueSelection(table, range)
   const row = selectedRow(table, range)
@@ -36,9 +38,9 @@ export function Toolbar(p: ToolbarProps) {
   const run = (op: OpName, key?: string) => {
     try {
       p.onApply(runOp(op, { ...p, text: key ? text[key] : undefined }))
-      setError(null)
+      p.onMessage(null)
     } catch (e) {
-      setError(e instanceof Error ? e.message : String(e))
+      p.onMessage(e instanceof Error ? e.message : String(e))
     }
   }
   const input = (key: string, label: string, unit: string) => (
@@ -89,11 +91,6 @@ export function Toolbar(p: ToolbarProps) {
           {btn(col === null ? 'Remove speed column' : `Remove ${humanNumber(units.speedOut(table.colAxis[col]))} ${units.speed} column`, () => run('remove-col'), col === null)}
         </Group>
       </div>
-      {error && (
-        <p role="alert" className="error-text text-sm">
-          {error}
-        </p>
-      )}
     </div>
   )
 }

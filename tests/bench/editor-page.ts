@@ -7,7 +7,7 @@ import fs from 'node:fs'
 import path from 'node:path'
 import zlib from 'node:zlib'
 import { chromium, type Page } from 'playwright-core'
-import { figure, isMain, median, ROOT, runStandalone, type BenchResult, type Figure } from './report'
+import { DIST_DIR, figure, isMain, median, ROOT, runStandalone, type BenchResult, type Figure } from './report'
 import { signIn, startServer, type BenchServer } from './server'
 
 const BENCH = 'editor-page'
@@ -23,7 +23,7 @@ interface RouteStats { route: string; firstLoadChunkPaths: string[] }
 
 /** Gzip bytes of the route's first-load chunks, plot chunks left out. */
 export function firstLoadGzip(): { bytes: number; chunks: number; plotChunks: number } {
-  const file = path.join(ROOT, process.env.NEXT_DIST_DIR || '.next', 'diagnostics', 'route-bundle-stats.json')
+  const file = path.join(DIST_DIR, 'diagnostics', 'route-bundle-stats.json')
   const stats = JSON.parse(fs.readFileSync(file, 'utf8')) as RouteStats[]
   const route = stats.find((r) => r.route === ROUTE)
   if (!route) throw new Error(`${ROUTE} not in ${file}`)
@@ -97,11 +97,11 @@ async function traceEdit(page: Page): Promise<string> {
 }
 
 export async function runEditorPage(shared?: BenchServer): Promise<BenchResult> {
-  const server = shared ?? (await startServer()) // builds first when stale, so the stats below exist
   const bundle = firstLoadGzip()
   const figures: Figure[] = [
     figure(BENCH, 'first-load JS, gzip (build stats)', bundle.bytes / 1000, 'kB', { op: '<', limit: 400 }, `${bundle.chunks} chunks${bundle.plotChunks ? `, ${bundle.plotChunks} plot chunks left out` : ', no plot code among them'}`),
   ]
+  const server = shared ?? (await startServer())
   const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS })
   try {
     const { baseUrl } = server

@@ -24,6 +24,8 @@ export interface Figure {
 export interface BenchResult { bench: string; figures: Figure[]; notes?: string[] }
 
 export const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..')
+/** The production build's folder (NEXT_DIST_DIR lets several worktrees' builds live side by side, as next.config.ts does). */
+export const DIST_DIR = path.join(ROOT, process.env.NEXT_DIST_DIR || '.next')
 export const RESULTS_FILE = path.join(ROOT, 'docs', 'benchmarks.json')
 
 function meets(value: number, t: Target): boolean {

@@ -7,7 +7,7 @@ import { spawn, type ChildProcess } from 'node:child_process'
 import fs from 'node:fs'
 import net from 'node:net'
 import path from 'node:path'
-import { ROOT } from './report'
+import { DIST_DIR, ROOT } from './report'
 import { signIn as signInAs } from '../support/sign-in'
 
 export const DEMO_EMAIL = 'calib@brackwater.example'
@@ -45,7 +45,7 @@ function buildsInProgress(): number[] {
 
 /** Waits (up to 10 min) until no `next build` runs in this tree and a build is present. */
 async function waitForQuietBuild(): Promise<void> {
-  const hasBuild = () => fs.existsSync(path.join(ROOT, process.env.NEXT_DIST_DIR || '.next', 'BUILD_ID'))
+  const hasBuild = () => fs.existsSync(path.join(DIST_DIR, 'BUILD_ID'))
   for (let waited = 0; (buildsInProgress().length > 0 || (waited > 0 && !hasBuild())) && waited < 600_000; waited += 2000) await sleep(2000)
 }
 

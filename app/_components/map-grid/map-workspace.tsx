@@ -11,6 +11,7 @@ import { FindingsList } from './findings-list'
 import MapGrid, { type GridApi, type MapGridProps } from './map-grid'
 import type { GridRange } from './selection'
 import { SmallPlot } from './small-plot'
+import { TractionLegend } from './traction-shading'
 
 export interface MapWorkspaceProps {
   table: MapTable
@@ -48,6 +49,7 @@ export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, on
       <div className="min-w-0 space-y-2">
         <MapGrid table={table} units={units} scale={scale} findings={findings} describe={describe} readOnly={!onEdit} onEdit={onEdit} onCommand={onCommand} onNotice={onNotice} onSelect={onSelect} onApi={onApi} cellShade={cellShade} />
         <ColourLegend scale={scale} units={units} ceiling={limits ? 'motor peak' : undefined} />
+        {cellShade && <TractionLegend kind={table.kind} />}
         <div className="flex items-center gap-2 pt-2 text-xs">
           <span className="text-slate-600">Plot</span>
           <button type="button" className={`btn px-2 py-0.5 text-xs ${along === 'speed' ? 'bg-accent-soft' : ''}`} onClick={() => setAlong('speed')} aria-pressed={along === 'speed'}>

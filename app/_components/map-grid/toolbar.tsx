@@ -5,7 +5,8 @@
  * message line, never swallowed.
  */
 import { useState, type ReactNode } from 'react'
-import { humanNumber } from '@/maps'
+import { humanNumber, type UnitSet } from '@/maps'
+import { readCell, shown } from './grid-data'
 import { runOp, type OpInput, type OpName } from './ops'
 import { selectedCol, selectedRow, valueSelection } from './selection'
 
@@ -31,6 +32,12 @@ export function Toolbar(p: ToolbarProps) {
   const [text, setText] = useState<Record<string, string>>({ set: '', scale: '5', offset: '50', insert: '' })
   const [insertAxis, setInsertAxis] = useState<'insert-row' | 'insert-col'>('insert-col')
   const { table, range, units } = p
+  // A unit switch converts what is typed but not applied yet, so "400" N·m does not become 400 lbf·ft.
+  const [typedIn, setTypedIn] = useState(units)
+  if (typedIn !== units) {
+    setTypedIn(units)
+    setText(convertTyped(text, insertAxis, typedIn, units))
+  }
   const sel = valueSelection(table, range)
   const row = selectedRow(table, range)
   const col = selectedCol(table, range)
@@ -93,4 +100,19 @@ export function Toolbar(p: ToolbarProps) {
       </div>
     </div>
   )
+}
+
+/** The toolbar's typed numbers moved from one unit system to another (scale % needs nothing); text that is no number stays. */
+export function convertTyped(text: Record<string, string>, insertAxis: 'insert-row' | 'insert-col', from: UnitSet, to: UnitSet): Record<string, string> {
+  const move = (t: string | undefined, f: (n: number) => number) => {
+    const n = readCell(t ?? '')
+    return n instanceof Error || !t?.trim() ? (t ?? '') : String(shown(f(n)))
+  }
+  const torque = (n: number) => to.torqueOut(from.torqueIn(n))
+  return {
+    ...text,
+    set: move(text.set, torque),
+    offset: move(text.offset, torque),
+    insert: insertAxis === 'insert-col' ? move(text.insert, (n) => to.speedOut(from.speedIn(n))) : (text.insert ?? ''),
+  }
 }

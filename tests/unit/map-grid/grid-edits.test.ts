@@ -38,3 +38,13 @@ describe('grid edits', () => {
     expect(changedMarks(a, new Map([['2:2', { severity: 'warning' as const, messages: ['y'] }]]))).toEqual(['1:1', '2:2'])
   })
 })
+
+describe('toolbar inputs across a unit switch', () => {
+  it('converts typed torque and speed, leaves percentages and non-numbers', async () => {
+    const { convertTyped } = await import('@/app/_components/map-grid/toolbar')
+    // 1 lbf·ft = 1.3558179483 N·m and 1 mph = 1.609344 km/h (NIST SP 811, appendix B).
+    const out = convertTyped({ set: '1355.8', scale: '5', offset: 'abc', insert: '16.1' }, 'insert-col', UNITS.metric, UNITS.imperial)
+    expect(out).toEqual({ set: '1000', scale: '5', offset: 'abc', insert: '10' })
+    expect(convertTyped({ set: '', scale: '5', offset: '50', insert: '35' }, 'insert-row', UNITS.metric, UNITS.imperial).insert).toBe('35')
+  })
+})

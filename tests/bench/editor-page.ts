@@ -6,7 +6,9 @@
 import fs from 'node:fs'
 import path from 'node:path'
 import zlib from 'node:zlib'
+import sparticuz from '@sparticuz/chromium'
 import { chromium, type Page } from 'playwright-core'
+import { chooseChromium } from '../e2e/browser'
 import { DIST_DIR, figure, isMain, median, ROOT, runStandalone, type BenchResult, type Figure } from './report'
 import { signIn, startServer, type BenchServer } from './server'
 
@@ -102,7 +104,10 @@ export async function runEditorPage(shared?: BenchServer): Promise<BenchResult> 
     figure(BENCH, 'first-load JS, gzip (build stats)', bundle.bytes / 1000, 'kB', { op: '<', limit: 400 }, `${bundle.chunks} chunks${bundle.plotChunks ? `, ${bundle.plotChunks} plot chunks left out` : ', no plot code among them'}`),
   ]
   const server = shared ?? (await startServer())
-  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS })
+  // The e2e suite's choice of browser: CHROMIUM_PATH, Debian's, else the one inside @sparticuz/chromium.
+  const choice = chooseChromium(process.env, fs.existsSync, () => sparticuz.args)
+  if (choice.source === 'npm') await sparticuz.executablePath()
+  const browser = await chromium.launch({ executablePath: choice.executablePath, args: choice.source === 'npm' ? choice.args : CHROMIUM_ARGS })
   try {
     const { baseUrl } = server
     const { cookie, cookies } = await signIn(baseUrl)

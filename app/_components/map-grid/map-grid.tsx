@@ -114,9 +114,9 @@ function gridSettings(box: GridBox, data: GridCell[][], renderer: ReturnType<typ
       const cmd = gridCommand(e)
       const sel = this.getSelectedLast()
       if (!cmd || !sel || readOnly || this.getActiveEditor()?.isOpened()) return
-      e.preventDefault()
-      e.stopImmediatePropagation() // Handsontable's own Delete would empty the cells, which a map cannot hold
+      e.preventDefault() // the browser's bookmark (Ctrl+D) and reload (Ctrl+R)
       box.props.onCommand?.(cmd, { r0: Math.min(sel[0], sel[2]), c0: Math.min(sel[1], sel[3]), r1: Math.max(sel[0], sel[2]), c1: Math.max(sel[1], sel[3]) })
+      return false // skips Handsontable's own Delete, which would empty the cells: a map cell cannot be empty
     },
     beforePaste(this: Hot, pasted: unknown[][], coords: { startRow: number; startCol: number }[]) {
       const at = coords[0]

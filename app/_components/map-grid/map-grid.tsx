@@ -32,7 +32,8 @@ registerCellType(TextCellType)
 registerPlugin(CopyPaste)
 
 const COPY_PASTE = { rowsLimit: 65, columnsLimit: 65 }
-const colWidth = (c: number) => (c === 0 ? 118 : 58)
+// Value columns leave room for a traction chip beside a five-digit number with its sign.
+const colWidth = (c: number) => (c === 0 ? 118 : 66)
 const heightFor = (rows: number) => (rows > 24 ? 560 : 'auto')
 /** Source tag of the grid's own updates from the table, which beforeChange lets through unchecked. */
 const SYNC = 'mw-sync'

@@ -125,7 +125,10 @@ function gridSettings(box: GridBox, data: GridCell[][], renderer: ReturnType<typ
       const msg = pasteOverflow(this.countRows(), this.countCols(), at.startRow, at.startCol, pasted.length, Math.max(...pasted.map((r) => r.length)))
       if (msg) box.props.onNotice?.(msg)
     },
-    afterSelectionEnd: (r0: number, c0: number, r1: number, c1: number) => box.props.onSelect?.({ r0, c0, r1, c1 }),
+    afterSelectionEnd(this: Hot, r0: number, c0: number, r1: number, c1: number) {
+      labelGrid(this) // the cell editor's field is made on the first selection
+      box.props.onSelect?.({ r0, c0, r1, c1 })
+    },
     copyPaste: COPY_PASTE,
     maxRows: data.length,
     maxCols: data[0]?.length ?? 0,
@@ -137,6 +140,15 @@ function gridSettings(box: GridBox, data: GridCell[][], renderer: ReturnType<typ
     outsideClickDeselects: false,
     // One Tab stop: arrows move inside the grid, Tab and Shift+Tab leave it.
     tabNavigation: false,
+    // Handsontable's treegrid roles fail axe (aria-required-children: its rows sit in presentational
+    // holders); without them the grid is a plain HTML table, which screen readers read as one.
+    ariaTags: false,
+    afterInit(this: Hot) {
+      labelGrid(this)
+    },
+    afterBeginEditing(this: Hot) {
+      labelGrid(this)
+    },
     autoWrapRow: true,
     autoWrapCol: true,
   }
@@ -212,4 +224,14 @@ function renderCells(h: Hot, render: ReturnType<typeof makeRenderer>, keys: stri
 function cellElements(h: Hot, row: number, col: number): HTMLTableCellElement[] {
   const root = h.rootElement
   return [...root.querySelectorAll<HTMLTableCellElement>(`td[data-cell="${row}-${col}"]`)]
+}
+
+/**
+ * Names for the parts axe checks: the cell editor's text field gets a label, and the scrolling
+ * holder can take focus, so a keyboard user can scroll a wide map (focus then moves into the grid).
+ */
+function labelGrid(h: Hot): void {
+  const root = h.rootElement
+  root.querySelector('.ht_master > .wtHolder')?.setAttribute('tabindex', '0')
+  for (const t of root.ownerDocument.querySelectorAll('textarea.handsontableInput:not([aria-label])')) t.setAttribute('aria-label', 'Cell value')
 }

@@ -79,5 +79,7 @@ export function makeRenderer(store: RenderStore): Renderer {
     TD.title = [...(mark ? mark.messages : []), ...(traction ? [`Traction: ${tractionText(traction)}`] : [])].join('\n')
     if (mark) TD.classList.add(mark.severity === 'error' ? 'mw-error' : 'mw-warning')
     TD.setAttribute('data-cell', `${row}-${col}`)
+    // The grid marks the selected cell with aria-selected, which a plain table cell may not carry.
+    TD.setAttribute('role', 'gridcell')
   }
 }

@@ -112,6 +112,15 @@ function gridSettings(box: GridBox, data: GridCell[][], renderer: ReturnType<typ
       }
     },
     beforeKeyDown(this: Hot, e: KeyboardEvent) {
+      if (e.key === 'Tab' && !e.ctrlKey && !e.metaKey && !e.altKey && !this.getActiveEditor()?.isOpened()) {
+        // One Tab stop: Tab and Shift+Tab go to the page's next or previous control, never to another cell.
+        const to = focusableBeyond(this.rootElement, e.shiftKey)
+        if (!to) return
+        e.preventDefault()
+        this.unlisten()
+        to.focus()
+        return false
+      }
       const cmd = gridCommand(e)
       const sel = this.getSelectedLast()
       if (!cmd || !sel || readOnly || this.getActiveEditor()?.isOpened()) return
@@ -234,4 +243,13 @@ function labelGrid(h: Hot): void {
   const root = h.rootElement
   root.querySelector('.ht_master > .wtHolder')?.setAttribute('tabindex', '0')
   for (const t of root.ownerDocument.querySelectorAll('textarea.handsontableInput:not([aria-label])')) t.setAttribute('aria-label', 'Cell value')
+}
+
+const FOCUSABLE = 'a[href], button:not([disabled]), input:not([disabled]):not([type="hidden"]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])'
+
+/** The first keyboard-focusable element after (or, backwards, the last before) the grid, outside it. */
+function focusableBeyond(root: HTMLElement, backwards: boolean): HTMLElement | null {
+  const all = [...root.ownerDocument.querySelectorAll<HTMLElement>(FOCUSABLE)].filter((el) => !root.contains(el) && el.getClientRects().length > 0)
+  const after = (el: HTMLElement) => Boolean(root.compareDocumentPosition(el) & Node.DOCUMENT_POSITION_FOLLOWING)
+  return backwards ? (all.filter((el) => !after(el)).at(-1) ?? null) : (all.find(after) ?? null)
 }

@@ -114,7 +114,8 @@ function gridSettings(box: GridBox, data: GridCell[][], renderer: ReturnType<typ
     beforeKeyDown(this: Hot, e: KeyboardEvent) {
       if (e.key === 'Tab' && !e.ctrlKey && !e.metaKey && !e.altKey && !this.getActiveEditor()?.isOpened()) {
         // One Tab stop: Tab and Shift+Tab go to the page's next or previous control, never to another cell.
-        const to = focusableBeyond(this.rootElement, e.shiftKey)
+        // The bound is our wrapper: Handsontable keeps its focus catchers beside its root element.
+        const to = focusableBeyond(this.rootElement.closest<HTMLElement>('.mw-grid') ?? this.rootElement, e.shiftKey)
         if (!to) return
         e.preventDefault()
         this.unlisten()
@@ -247,7 +248,7 @@ function labelGrid(h: Hot): void {
 
 const FOCUSABLE = 'a[href], button:not([disabled]), input:not([disabled]):not([type="hidden"]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])'
 
-/** The first keyboard-focusable element after (or, backwards, the last before) the grid, outside it. */
+/** The first keyboard-focusable element after (or, backwards, the last before) `root`, outside it. */
 function focusableBeyond(root: HTMLElement, backwards: boolean): HTMLElement | null {
   const all = [...root.ownerDocument.querySelectorAll<HTMLElement>(FOCUSABLE)].filter((el) => !root.contains(el) && el.getClientRects().length > 0)
   const after = (el: HTMLElement) => Boolean(root.compareDocumentPosition(el) & Node.DOCUMENT_POSITION_FOLLOWING)

@@ -35,6 +35,11 @@ const COPY_PASTE = { rowsLimit: 65, columnsLimit: 65 }
 // Value columns leave room for a traction chip beside a five-digit number with its sign.
 const colWidth = (c: number) => (c === 0 ? 118 : 66)
 const heightFor = (rows: number) => (rows > 24 ? 560 : 'auto')
+/**
+ * The grid as wide as its columns (a little slack for borders): a wide map then scrolls in our
+ * wrapper, which holds the grid's focusable parts, instead of in a holder no key can reach.
+ */
+const widthFor = (cols: number) => (cols > 0 ? colWidth(0) + colWidth(1) * (cols - 1) + 4 : '100%')
 /** Source tag of the grid's own updates from the table, which beforeChange lets through unchecked. */
 const SYNC = 'mw-sync'
 /** Above this many changed marks one full render is cheaper than cell by cell. */
@@ -146,7 +151,7 @@ function gridSettings(box: GridBox, data: GridCell[][], renderer: ReturnType<typ
     fixedColumnsStart: 1,
     colWidths: colWidth,
     height: heightFor(data.length),
-    width: '100%',
+    width: widthFor(data[0]?.length ?? 0),
     outsideClickDeselects: false,
     // One Tab stop: arrows move inside the grid, Tab and Shift+Tab leave it.
     tabNavigation: false,
@@ -193,7 +198,7 @@ export default function MapGrid(props: MapGridProps) {
     const markKeys = changedMarks(lastMarks.current, marks)
     lastMarks.current = marks
     if (sync.reload) {
-      h.updateSettings({ data: next.map((r) => [...r]), maxRows: next.length, maxCols: next[0]?.length ?? 0, height: heightFor(next.length) })
+      h.updateSettings({ data: next.map((r) => [...r]), maxRows: next.length, maxCols: next[0]?.length ?? 0, height: heightFor(next.length), width: widthFor(next[0]?.length ?? 0) })
       return
     }
     if (sync.cells.length > 0) h.setDataAtCell(sync.cells, SYNC) // renders the grid with the new store
@@ -213,7 +218,7 @@ export default function MapGrid(props: MapGridProps) {
   }, [props.onApi])
 
   return (
-    <div className="mw-grid overflow-hidden rounded-md border border-line" data-testid="map-grid">
+    <div className="mw-grid max-w-full overflow-x-auto rounded-md border border-line" data-testid="map-grid">
       <GridHost hotRef={hot} settings={settings} />
     </div>
   )
@@ -236,13 +241,9 @@ function cellElements(h: Hot, row: number, col: number): HTMLTableCellElement[] 
   return [...root.querySelectorAll<HTMLTableCellElement>(`td[data-cell="${row}-${col}"]`)]
 }
 
-/**
- * Names for the parts axe checks: the cell editor's text field gets a label, and the scrolling
- * holder can take focus, so a keyboard user can scroll a wide map (focus then moves into the grid).
- */
+/** The cell editor's text field gets a name (axe: label). */
 function labelGrid(h: Hot): void {
   const root = h.rootElement
-  root.querySelector('.ht_master > .wtHolder')?.setAttribute('tabindex', '0')
   for (const t of root.ownerDocument.querySelectorAll('textarea.handsontableInput:not([aria-label])')) t.setAttribute('aria-label', 'Cell value')
 }
 

@@ -218,7 +218,22 @@ export default function MapGrid(props: MapGridProps) {
   }, [props.onApi])
 
   return (
-    <div className="mw-grid max-w-full overflow-x-auto rounded-md border border-line" data-testid="map-grid">
+    // The wrapper scrolls a wide map, so it takes focus (axe: scrollable-region-focusable) and hands it
+    // straight to the grid's selected cell: still one Tab stop.
+    <div
+      className="mw-grid max-w-full overflow-x-auto rounded-md border border-line"
+      data-testid="map-grid"
+      role="region"
+      aria-label="Map grid: arrow keys move, Enter edits, Tab leaves"
+      tabIndex={0}
+      onFocus={(e) => {
+        const h = hot.current?.hotInstance
+        if (e.target !== e.currentTarget || !h) return
+        const sel = h.getSelectedLast()
+        h.selectCell(sel ? sel[0] : 1, sel ? sel[1] : 1)
+        h.listen()
+      }}
+    >
       <GridHost hotRef={hot} settings={settings} />
     </div>
   )

@@ -117,16 +117,6 @@ function gridSettings(box: GridBox, data: GridCell[][], renderer: ReturnType<typ
       }
     },
     beforeKeyDown(this: Hot, e: KeyboardEvent) {
-      if (e.key === 'Tab' && !e.ctrlKey && !e.metaKey && !e.altKey && !this.getActiveEditor()?.isOpened()) {
-        // One Tab stop: Tab and Shift+Tab go to the page's next or previous control, never to another cell.
-        // The bound is our wrapper: Handsontable keeps its focus catchers beside its root element.
-        const to = focusableBeyond(this.rootElement.closest<HTMLElement>('.mw-grid') ?? this.rootElement, e.shiftKey)
-        if (!to) return
-        e.preventDefault()
-        this.unlisten()
-        to.focus()
-        return false
-      }
       const cmd = gridCommand(e)
       const sel = this.getSelectedLast()
       if (!cmd || !sel || readOnly || this.getActiveEditor()?.isOpened()) return
@@ -226,6 +216,18 @@ export default function MapGrid(props: MapGridProps) {
       role="region"
       aria-label="Map grid: arrow keys move, Enter edits, Tab leaves"
       tabIndex={0}
+      onKeyDownCapture={(e) => {
+        // One Tab stop: Tab and Shift+Tab go to the page's next or previous control, never to another
+        // cell. Taken here, before Handsontable's own listener on the document sees the key.
+        const h = hot.current?.hotInstance
+        if (e.key !== 'Tab' || e.ctrlKey || e.metaKey || e.altKey || !h || h.getActiveEditor()?.isOpened()) return
+        const to = focusableBeyond(e.currentTarget, e.shiftKey)
+        if (!to) return
+        e.preventDefault()
+        e.stopPropagation()
+        h.unlisten()
+        to.focus()
+      }}
       onFocus={(e) => {
         const h = hot.current?.hotInstance
         if (e.target !== e.currentTarget || !h) return
@@ -262,7 +264,9 @@ function labelGrid(h: Hot): void {
   for (const t of root.ownerDocument.querySelectorAll('textarea.handsontableInput:not([aria-label])')) t.setAttribute('aria-label', 'Cell value')
 }
 
-const FOCUSABLE = 'a[href], button:not([disabled]), input:not([disabled]):not([type="hidden"]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])'
+const FOCUSABLE = ['a[href]', 'button:not([disabled])', 'input:not([disabled]):not([type="hidden"])', 'select:not([disabled])', 'textarea:not([disabled])', '[tabindex]:not([tabindex="-1"])']
+  .map((s) => `${s}:not(.handsontableInput):not(.htFocusCatcher)`)
+  .join(', ')
 
 /** The first keyboard-focusable element after (or, backwards, the last before) `root`, outside it. */
 function focusableBeyond(root: HTMLElement, backwards: boolean): HTMLElement | null {

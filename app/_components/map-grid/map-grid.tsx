@@ -196,6 +196,25 @@ export default function MapGrid(props: MapGridProps) {
     else renderCells(h, renderer, markKeys)
   }, [store, renderer, box, table, units, scale, findings, describe, cellShade])
 
+  // One Tab stop: Tab and Shift+Tab go to the page's next or previous control, never to another
+  // cell. Taken on the window's capture phase, before any of Handsontable's own listeners.
+  const wrapper = useRef<HTMLDivElement>(null)
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      const h = hot.current?.hotInstance
+      const box = wrapper.current
+      if (e.key !== 'Tab' || e.ctrlKey || e.metaKey || e.altKey || !h || !box || !box.contains(document.activeElement) || h.getActiveEditor()?.isOpened()) return
+      const to = focusableBeyond(box, e.shiftKey)
+      if (!to) return
+      e.preventDefault()
+      e.stopImmediatePropagation()
+      h.unlisten()
+      to.focus()
+    }
+    window.addEventListener('keydown', onKey, true)
+    return () => window.removeEventListener('keydown', onKey, true)
+  }, [])
+
   useEffect(() => {
     const instance = hot.current?.hotInstance
     const onApi = props.onApi
@@ -212,22 +231,11 @@ export default function MapGrid(props: MapGridProps) {
     // straight to the grid's selected cell: still one Tab stop.
     <div
       className="mw-grid max-w-full overflow-x-auto rounded-md border border-line"
+      ref={wrapper}
       data-testid="map-grid"
       role="region"
       aria-label="Map grid: arrow keys move, Enter edits, Tab leaves"
       tabIndex={0}
-      onKeyDownCapture={(e) => {
-        // One Tab stop: Tab and Shift+Tab go to the page's next or previous control, never to another
-        // cell. Taken here, before Handsontable's own listener on the document sees the key.
-        const h = hot.current?.hotInstance
-        if (e.key !== 'Tab' || e.ctrlKey || e.metaKey || e.altKey || !h || h.getActiveEditor()?.isOpened()) return
-        const to = focusableBeyond(e.currentTarget, e.shiftKey)
-        if (!to) return
-        e.preventDefault()
-        e.stopPropagation()
-        h.unlisten()
-        to.focus()
-      }}
       onFocus={(e) => {
         const h = hot.current?.hotInstance
         if (e.target !== e.currentTarget || !h) return

@@ -234,7 +234,7 @@ export default function MapGrid(props: MapGridProps) {
       ref={wrapper}
       data-testid="map-grid"
       role="region"
-      aria-label="Map grid: arrow keys move, Enter edits, Tab leaves"
+      aria-label="Map grid: arrow keys move, Enter edits"
       tabIndex={0}
       onFocus={(e) => {
         const h = hot.current?.hotInstance

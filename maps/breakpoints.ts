@@ -80,10 +80,20 @@ export function setBreakpoint(table: MapTable, axis: AxisName, index: number, va
   const prev = index > 0 ? list[index - 1] : -Infinity
   const next = index < list.length - 1 ? list[index + 1] : Infinity
   if (!(value > prev && value < next)) {
-    const range = `${index > 0 ? `above ${formatExact(prev)}` : ''}${index > 0 && index < list.length - 1 ? ' and ' : ''}${index < list.length - 1 ? `below ${formatExact(next)}` : ''}`
-    throw new MapEditError('breakpoint-order', `${label(axis)} breakpoint ${index + 1} must stay ${range}; ${formatExact(value)} would break the order`)
+    const unit = (v: number) => `${formatExact(v)} ${axis === 'row' ? '%' : 'km/h'}`
+    throw new MapEditError('breakpoint-order', breakpointOrderMessage(label(axis), index, prev, next, value, unit))
   }
   const out = cloneTable(table)
   ;(axis === 'row' ? out.rowAxis : out.colAxis)[index] = value
   return out
+}
+
+/**
+ * Why a moved breakpoint breaks the order, with its position (#, counted from 1) kept apart from
+ * its values (with units), e.g. "speed breakpoint #3 must lie between 3 km/h and 10 km/h; 12 km/h
+ * would break the order". `prev`/`next` are ±Infinity at the ends of the axis.
+ */
+export function breakpointOrderMessage(axisWord: string, index: number, prev: number, next: number, value: number, fmt: (v: number) => string): string {
+  const range = Number.isFinite(prev) && Number.isFinite(next) ? `between ${fmt(prev)} and ${fmt(next)}` : Number.isFinite(prev) ? `above ${fmt(prev)}` : `below ${fmt(next)}`
+  return `${axisWord} breakpoint #${index + 1} must lie ${range}; ${fmt(value)} would break the order`
 }

@@ -6,7 +6,8 @@
 import fs from 'node:fs'
 import path from 'node:path'
 import zlib from 'node:zlib'
-import { chromium, type Page } from 'playwright-core'
+import type { Page } from 'playwright-core'
+import { launchChromium } from './browser'
 import { DIST_DIR, figure, isMain, median, ROOT, runStandalone, type BenchResult, type Figure } from './report'
 import { signIn, startServer, type BenchServer } from './server'
 
@@ -14,7 +15,6 @@ const BENCH = 'editor-page'
 const ROUTE = '/maps/[id]/edit'
 const LOADS = 5
 const EDITS = 7
-const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync']
 const CELL = '.ht_master [data-cell="3-3"]'
 const PLOT = 'figure[aria-label="Plot of the selected row or column"]'
 const isPlotCode = (src: Buffer) => /plotly/i.test(src.toString('latin1'))
@@ -102,7 +102,8 @@ export async function runEditorPage(shared?: BenchServer): Promise<BenchResult> 
     figure(BENCH, 'first-load JS, gzip (build stats)', bundle.bytes / 1000, 'kB', { op: '<', limit: 400 }, `${bundle.chunks} chunks${bundle.plotChunks ? `, ${bundle.plotChunks} plot chunks left out` : ', no plot code among them'}`),
   ]
   const server = shared ?? (await startServer())
-  const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS })
+  // The e2e suite's choice of browser: CHROMIUM_PATH, Debian's, else the one inside @sparticuz/chromium.
+  const browser = await launchChromium()
   try {
     const { baseUrl } = server
     const { cookie, cookies } = await signIn(baseUrl)

@@ -68,7 +68,7 @@ test.describe('map grid editor', () => {
     await expect(page.getByText(/Restored unsaved edits from/)).toHaveCount(0)
   })
 
-  test('a save on a stale revision keeps the edits, compares, and saves after a rebase', async ({ page, browser }) => {
+  test('a save on a stale revision keeps the edits, compares, and saves after a merge', async ({ page, browser }) => {
     await signIn(page, DEMO.calib)
     const { id, base } = await openEditor(page, 'Site regen')
     const value = String(200 + base)
@@ -90,7 +90,8 @@ test.describe('map grid editor', () => {
     await expect(conflict).toContainText(`Revision ${base + 1} was saved after`)
     await expect(conflict).toContainText('changes 1 of')
     await expect(gridCell(page, 2, 6)).toHaveText(value)
-    await page.getByRole('button', { name: `Rebase my edits on revision ${base + 1}` }).click()
+    await page.getByRole('button', { name: `Merge onto revision ${base + 1}` }).click()
+    await expect(gridCell(page, 2, 6)).toHaveText(value)
     await page.getByRole('button', { name: 'Save revision' }).click()
     await expect(page).toHaveURL(new RegExp(`/maps/${id}\\?saved=${base + 2}$`))
   })

@@ -9,17 +9,15 @@ import type { MapTable } from '@/maps'
 import type { ColourScale } from './colour-scale'
 import { markKey, type CellMark } from './finding-marks'
 import { cellNumber, type UnitSet } from '@/maps'
+import { TRACTION_STYLE, tractionText, type CellTraction } from './traction-marks'
 
 export interface RenderContext {
   table: MapTable
   units: UnitSet
   scale: ColourScale
   marks: Map<string, CellMark>
-  /**
-   * Optional extra shading per value cell (table row and column, 0-based), drawn over the colour
-   * scale: a CSS colour with alpha, or null for none. Reserved for overlays such as tyre slip.
-   */
-  cellShade?: (row: number, col: number) => string | null
+  /** Optional traction per value cell (table row and column, 0-based), shown as a marked chip and in the hover text. */
+  cellShade?: (row: number, col: number) => CellTraction | null
 }
 
 type Renderer = (instance: Handsontable.Core, TD: HTMLTableCellElement, row: number, col: number, prop: string | number, value: unknown, cellProperties: Handsontable.CellProperties) => void
@@ -52,21 +50,36 @@ export function makeRenderer(store: RenderStore): Renderer {
     TD.classList.add('mw-cell', row === 0 && col === 0 ? 'mw-corner' : isAxis ? 'mw-axis' : 'mw-value')
     TD.style.backgroundColor = ''
     TD.style.color = ''
-    TD.style.boxShadow = ''
     TD.textContent = typeof value === 'number' ? cellNumber(value) : String(value ?? '')
+    let traction: CellTraction | null = null
     // Inline like the value colours, so the theme's cell background cannot win over the axis band.
     if (isAxis) TD.style.backgroundColor = row === 0 && col === 0 ? AXIS_CORNER : AXIS_BAND
     if (!isAxis && typeof value === 'number') {
       const nm = units.torqueIn(value)
       TD.style.backgroundColor = scale.colour(nm)
       TD.style.color = scale.text(nm)
-      const shade = cellShade?.(row - 1, col - 1)
-      // An inset shadow paints over the background without replacing it, so both stay readable.
-      if (shade) TD.style.boxShadow = `inset 0 0 0 100px ${shade}`
+      traction = cellShade?.(row - 1, col - 1) ?? null
+      if (traction && traction.level !== 'margin') {
+        const style = TRACTION_STYLE[traction.level]
+        const chip = document.createElement('span')
+        chip.className = `mw-traction mw-traction-${traction.level}`
+        chip.setAttribute('aria-hidden', 'true')
+        chip.textContent = style.glyph
+        TD.prepend(chip)
+      }
+      if (traction) {
+        // Read after the number by screen readers; sighted users get it on hover.
+        const sr = document.createElement('span')
+        sr.className = 'sr-only'
+        sr.textContent = `, ${tractionText(traction)}`
+        TD.append(sr)
+      }
     }
     const mark = marks.get(markKey(row, col))
-    TD.title = mark ? mark.messages.join('\n') : ''
+    TD.title = [...(mark ? mark.messages : []), ...(traction ? [`Traction: ${tractionText(traction)}`] : [])].join('\n')
     if (mark) TD.classList.add(mark.severity === 'error' ? 'mw-error' : 'mw-warning')
     TD.setAttribute('data-cell', `${row}-${col}`)
+    // The grid marks the selected cell with aria-selected, which a plain table cell may not carry.
+    TD.setAttribute('role', 'gridcell')
   }
 }

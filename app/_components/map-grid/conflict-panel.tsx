@@ -1,24 +1,28 @@
 'use client'
 /**
  * Someone saved a newer revision while this draft was open. The edits are kept; this shows what
- * the newer revision changed relative to the draft's base and offers to put the edits on top.
+ * the newer revision changed relative to the draft's base and merges the two cell by cell.
  */
 import { useQuery } from '@tanstack/react-query'
 import Link from 'next/link'
 import { cellLabel, diff, type MapTable, humanNumber, renderParts, type UnitSet } from '@/maps'
 import { api } from '@/app/_components/api-client'
 import type { RevisionAnswer } from './api-types'
+import { MergeChoices } from './merge-choices'
 
 export interface ConflictPanelProps {
   mapId: number
   message: string
   latestNumber: number
   baseTable: MapTable
+  /** The unsaved draft. */
+  table: MapTable
   units: UnitSet
-  onRebase: (number: number, table: MapTable) => void
+  /** Continue with `merged` on top of revision `number` (whose table is `theirs`). */
+  onMerged: (number: number, theirs: MapTable, merged: MapTable) => void
 }
 
-export function ConflictPanel({ mapId, message, latestNumber, baseTable, units: u, onRebase }: ConflictPanelProps) {
+export function ConflictPanel({ mapId, message, latestNumber, baseTable, table, units: u, onMerged }: ConflictPanelProps) {
   const newer = useQuery({
     queryKey: ['map', mapId, 'revision', latestNumber],
     queryFn: () => api<RevisionAnswer>(`/api/maps/${mapId}/revisions/${latestNumber}`),
@@ -46,15 +50,10 @@ export function ConflictPanel({ mapId, message, latestNumber, baseTable, units: 
               {humanNumber(u.torqueOut(big.delta))} {u.torque}).
             </p>
           )}
-          <div className="flex flex-wrap gap-2 pt-1">
-            <button type="button" className="btn-primary" onClick={() => onRebase(rev.number, rev.table)}>
-              Rebase my edits on revision {rev.number}
-            </button>
-            <Link className="btn" href={`/maps/${mapId}/revisions/${rev.number}`} target="_blank">
-              Open revision {rev.number}
-            </Link>
-          </div>
-          <p className="text-xs text-slate-600">Rebasing keeps your table exactly as it is and saves it on top of revision {rev.number}, so your table replaces what revision {rev.number} changed. Open it first to carry over anything you want to keep.</p>
+          <MergeChoices parent={baseTable} mine={table} theirs={rev.table} theirsNumber={rev.number} units={u} onDone={(merged) => onMerged(rev.number, rev.table, merged)} />
+          <Link className="btn inline-block" href={`/maps/${mapId}/revisions/${rev.number}`} target="_blank">
+            Open revision {rev.number}
+          </Link>
         </div>
       )}
     </section>

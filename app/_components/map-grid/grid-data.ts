@@ -3,7 +3,7 @@
  * column 0 holds the pedal breakpoints, the rest are torque values. Keeping the axes inside
  * the data lets a calibrator edit a breakpoint like any cell and paste a block that carries them.
  */
-import { mapSelection, parseExact, setBreakpoint, type AxisName, type MapTable, type UnitSet } from '@/maps'
+import { breakpointOrderMessage, humanNumber, mapSelection, parseExact, setBreakpoint, type AxisName, type MapTable, type UnitSet } from '@/maps'
 
 export type GridCell = number | string
 /** One edit as the grid reports it: grid row, grid column, the new raw value. */
@@ -32,6 +32,12 @@ export function toGridData(table: MapTable, u: UnitSet): GridCell[][] {
   ]
 }
 
+/** The one grid cell (`row`, `col`, axes included) of toGridData, without building the rest. */
+export function gridCellOf(table: MapTable, u: UnitSet, row: number, col: number): GridCell {
+  if (row === 0) return col === 0 ? cornerText(table, u) : shown(u.speedOut(table.colAxis[col - 1]))
+  return col === 0 ? shown(table.rowAxis[row - 1]) : shown(u.torqueOut(table.values[row - 1][col - 1]))
+}
+
 // Spreadsheets often copy "1,200" with a thousands separator; accept exactly that shape.
 const GROUPED = /^-?\d{1,3}(,\d{3})+(\.\d+)?$/
 
@@ -48,7 +54,15 @@ export function readCell(value: unknown): number | Error {
  * (each move must stay between its current neighbours), so moves are retried until none is left
  * or none can go; then the last refusal is the message.
  */
-function moveBreakpoints(table: MapTable, axis: AxisName, moves: Map<number, number>): MapTable {
+function moveBreakpoints(table: MapTable, axis: AxisName, moves: Map<number, number>, u: UnitSet): MapTable {
+  // Refusals in the units the engineer typed in (the map module speaks km/h).
+  const fmt = axis === 'row' ? (v: number) => `${humanNumber(v)} %` : (v: number) => `${humanNumber(u.speedOut(v))} ${u.speed}`
+  const orderCheck = (t: MapTable, i: number, v: number) => {
+    const list = axis === 'row' ? t.rowAxis : t.colAxis
+    const prev = i > 0 ? list[i - 1] : -Infinity
+    const next = i < list.length - 1 ? list[i + 1] : Infinity
+    if (!(v > prev && v < next)) throw new Error(breakpointOrderMessage(axis === 'row' ? 'pedal' : 'speed', i, prev, next, v, fmt))
+  }
   let t = table
   const pending = new Map(moves)
   while (pending.size > 0) {
@@ -56,6 +70,7 @@ function moveBreakpoints(table: MapTable, axis: AxisName, moves: Map<number, num
     let refusal: unknown = null
     for (const [i, v] of [...pending]) {
       try {
+        orderCheck(t, i, v)
         t = setBreakpoint(t, axis, i, v)
         pending.delete(i)
       } catch (e) {
@@ -90,7 +105,7 @@ export function applyGridEdits(table: MapTable, edits: GridEdit[], u: UnitSet): 
     const box = { r0: Math.min(...keys.map((k) => k[0])), r1: Math.max(...keys.map((k) => k[0])), c0: Math.min(...keys.map((k) => k[1])), c1: Math.max(...keys.map((k) => k[1])) }
     t = mapSelection(t, box, (v, r, c) => cells.get(`${r},${c}`) ?? v)
   }
-  if (rowMoves.size > 0) t = moveBreakpoints(t, 'row', rowMoves)
-  if (colMoves.size > 0) t = moveBreakpoints(t, 'col', colMoves)
+  if (rowMoves.size > 0) t = moveBreakpoints(t, 'row', rowMoves, u)
+  if (colMoves.size > 0) t = moveBreakpoints(t, 'col', colMoves, u)
   return t
 }

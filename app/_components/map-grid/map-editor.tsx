@@ -3,14 +3,16 @@
  * The grid editor of one map: draft (with undo, persisted locally), toolbar, unit switch,
  * workspace, save, import and export. Loaded in the browser only (see lazy.tsx).
  */
-import { useCallback, useMemo, useRef, useState } from 'react'
+import { useCallback, useLayoutEffect, useMemo, useRef, useState } from 'react'
 import { validate, type MapLimits, type MapTable, UNITS, type UnitSystem } from '@/maps'
 import { ExportLinks } from './export-links'
 import { applyGridEdits, type GridEdit } from './grid-data'
+import type { GridCommand } from './grid-keys'
 import { ImportPanel } from './import-panel'
 import type { GridApi } from './map-grid'
 import { MapWorkspace } from './map-workspace'
 import { SavePanel } from './save-panel'
+import { clearedText, runGridCommand } from './ops'
 import type { GridRange } from './selection'
 import { Toolbar } from './toolbar'
 import { UnitSwitch } from './unit-switch'
@@ -38,7 +40,9 @@ export default function MapEditor({ mapId, limits, vehicle = null, designLateral
   const [system, setSystem] = useState<UnitSystem>('metric')
   const units = UNITS[system]
   const [range, setRange] = useState<GridRange | null>(null)
-  const [editError, setEditError] = useState<string | null>(null)
+  // One message line for the grid and the toolbar, so refusals replace each other instead of piling up.
+  const [notice, setNotice] = useState<{ tone: 'error' | 'info'; text: string } | null>(null)
+  const showError = useCallback((text: string | null) => setNotice(text ? { tone: 'error', text } : null), [])
   const gridApi = useRef<GridApi | null>(null)
   const onGridApi = useCallback((a: GridApi | null) => {
     gridApi.current = a
@@ -49,17 +53,54 @@ export default function MapEditor({ mapId, limits, vehicle = null, designLateral
 
   useUndoKeys(undo, redo, useCallback(() => gridApi.current?.isEditing() ?? false, []))
 
+  // The grid calls back from its own events, possibly twice before React renders again: read the
+  // newest table from a ref, and move the ref on at once when an edit is applied.
+  const current = useRef(table)
+  useLayoutEffect(() => {
+    current.current = table
+  }, [table])
+  const commit = useCallback(
+    (next: MapTable) => {
+      current.current = next
+      apply(next)
+    },
+    [apply],
+  )
   const onEdit = useCallback(
-    (edits: GridEdit[]) => {
+    (edits: GridEdit[]): MapTable | null => {
       try {
-        apply(applyGridEdits(table, edits, units))
-        setEditError(null)
+        const next = applyGridEdits(current.current, edits, units)
+        commit(next)
+        setNotice((n) => (n?.tone === 'error' ? null : n))
+        return next
       } catch (e) {
-        setEditError(e instanceof Error ? e.message : String(e))
+        showError(`Edit refused — ${e instanceof Error ? e.message : String(e)}`)
+        return null
       }
     },
-    [apply, table, units],
+    [commit, units, showError],
   )
+  const onCommand = useCallback(
+    (cmd: GridCommand, r: GridRange) => {
+      try {
+        commit(runGridCommand(cmd, current.current, r))
+        setNotice(null)
+      } catch (e) {
+        showError(e instanceof Error ? e.message : String(e))
+      }
+    },
+    [commit, showError],
+  )
+  const { rebase } = draft
+  const onMerged = useCallback(
+    (b: { number: number; table: MapTable }, merged: MapTable) => {
+      rebase(b)
+      commit(merged)
+      setNotice({ tone: 'info', text: `Merged onto revision ${b.number}: check the result, then save.` })
+    },
+    [rebase, commit],
+  )
+  const onNotice = useCallback((text: string) => setNotice({ tone: 'info', text }), [])
   const baseErrors = useMemo(() => validate(draft.base.table).filter((f) => f.severity === 'error'), [draft.base.table])
 
   return (
@@ -82,12 +123,19 @@ export default function MapEditor({ mapId, limits, vehicle = null, designLateral
         <TractionShadingControls vehicle={vehicle} choice={shading} onChange={setShading} counts={traction} kind={table.kind} />
         <span className="ml-auto"><UnitSwitch value={system} onChange={setSystem} /></span>
       </div>
-      <Toolbar table={table} range={range} units={units} limits={limits} onApply={apply} undo={undo} redo={redo} canUndo={draft.canUndo} canRedo={draft.canRedo} />
-      {editError && <p role="alert" className="error-text text-sm">Edit refused — {editError}</p>}
-      <MapWorkspace table={table} units={units} limits={limits} range={range} onSelect={setRange} onEdit={onEdit} onGridApi={onGridApi} cellShade={traction.shade} />
+      <Toolbar table={table} range={range} units={units} limits={limits} onApply={commit} undo={undo} redo={redo} canUndo={draft.canUndo} canRedo={draft.canRedo} onMessage={showError} />
+      <p className="text-xs text-slate-600" id="grid-keys-help">
+        In the grid: arrow keys move, Enter edits; Delete clears the selected cells to {clearedText(units)}, Ctrl+D fills down, Ctrl+R fills right, Ctrl+Z undoes.
+      </p>
+      {notice && (
+        <p role={notice.tone === 'error' ? 'alert' : 'status'} className={notice.tone === 'error' ? 'error-text text-sm' : 'rounded-md bg-accent-soft px-3 py-2 text-sm'} data-testid="editor-message">
+          {notice.text}
+        </p>
+      )}
+      <MapWorkspace table={table} units={units} limits={limits} range={range} onSelect={setRange} onEdit={onEdit} onCommand={onCommand} onNotice={onNotice} onGridApi={onGridApi} cellShade={traction.shade} />
       <div className="grid gap-4 lg:grid-cols-2">
         {canSave && (
-          <SavePanel mapId={mapId} draftId={draft.draftId} table={table} base={draft.base} dirty={draft.dirty} message={draft.message} notes={draft.notes} setMessage={draft.setMessage} setNotes={draft.setNotes} units={units} onSaved={draft.finish} onRebase={draft.rebase} />
+          <SavePanel mapId={mapId} draftId={draft.draftId} table={table} base={draft.base} dirty={draft.dirty} message={draft.message} notes={draft.notes} setMessage={draft.setMessage} setNotes={draft.setNotes} units={units} onSaved={draft.finish} onMerged={onMerged} />
         )}
         <div className="space-y-4">
           {canSave && <ImportPanel mapId={mapId} parentNumber={draft.base.number} blocked={draft.dirty} />}

@@ -8,10 +8,10 @@ import { validate, type Finding, type MapLimits, type MapTable, findingMessage, 
 import { ColourLegend } from './colour-legend'
 import { colourScale } from './colour-scale'
 import { FindingsList } from './findings-list'
-import type { GridEdit } from './grid-data'
 import MapGrid, { type GridApi, type MapGridProps } from './map-grid'
 import type { GridRange } from './selection'
 import { SmallPlot } from './small-plot'
+import { TractionLegend } from './traction-shading'
 
 export interface MapWorkspaceProps {
   table: MapTable
@@ -19,13 +19,15 @@ export interface MapWorkspaceProps {
   limits: MapLimits | null
   range: GridRange | null
   onSelect: (r: GridRange) => void
-  onEdit?: (edits: GridEdit[]) => void
+  onEdit?: MapGridProps['onEdit']
+  onCommand?: MapGridProps['onCommand']
+  onNotice?: MapGridProps['onNotice']
   /** Receives the grid's API (select a cell, is a cell editor open) once it has mounted. */
   onGridApi?: (api: GridApi | null) => void
   cellShade?: MapGridProps['cellShade']
 }
 
-export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, onGridApi, cellShade }: MapWorkspaceProps) {
+export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, onCommand, onNotice, onGridApi, cellShade }: MapWorkspaceProps) {
   const [api, setApi] = useState<GridApi | null>(null)
   const [along, setAlong] = useState<'speed' | 'pedal'>('speed')
   const findings = useMemo(() => validate(table, limits ?? undefined), [table, limits])
@@ -45,8 +47,9 @@ export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, on
   return (
     <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_20rem]">
       <div className="min-w-0 space-y-2">
-        <MapGrid table={table} units={units} scale={scale} findings={findings} describe={describe} readOnly={!onEdit} onEdit={onEdit} onSelect={onSelect} onApi={onApi} cellShade={cellShade} />
+        <MapGrid table={table} units={units} scale={scale} findings={findings} describe={describe} readOnly={!onEdit} onEdit={onEdit} onCommand={onCommand} onNotice={onNotice} onSelect={onSelect} onApi={onApi} cellShade={cellShade} />
         <ColourLegend scale={scale} units={units} ceiling={limits ? 'motor peak' : undefined} />
+        {cellShade && <TractionLegend kind={table.kind} />}
         <div className="flex items-center gap-2 pt-2 text-xs">
           <span className="text-slate-600">Plot</span>
           <button type="button" className={`btn px-2 py-0.5 text-xs ${along === 'speed' ? 'bg-accent-soft' : ''}`} onClick={() => setAlong('speed')} aria-pressed={along === 'speed'}>

@@ -2,9 +2,10 @@
  * The toolbar's operations, each a call into maps/ with the typed input converted from display
  * units to SI. Errors are thrown with messages a calibrator can act on.
  */
-import { addOffset, clampToEnvelope, fillLinear, insertBreakpoint, mapSelection, removeBreakpoint, scaleBy, setValue, smooth, wholeTable, type MapLimits, type MapTable, type UnitSet } from '@/maps'
+import { addOffset, clampToEnvelope, clearCells, CLEARED_TORQUE_NM, fillDown, fillRight, fillLinear, insertBreakpoint, mapSelection, removeBreakpoint, scaleBy, setValue, smooth, wholeTable, type MapLimits, type MapTable, type UnitSet } from '@/maps'
 import { readCell } from './grid-data'
-import { selectedCol, selectedRow, valueSelection, type GridRange } from './selection'
+import type { GridCommand } from './grid-keys'
+import { selectedCol, selectedRow, valueCellsIn, valueSelection, type GridRange } from './selection'
 
 export type OpName = 'set' | 'scale' | 'offset' | 'fill-rows' | 'fill-cols' | 'smooth' | 'clamp' | 'insert-row' | 'insert-col' | 'remove-row' | 'remove-col'
 
@@ -64,3 +65,19 @@ export function runOp(op: OpName, { table, range, units, limits, text }: OpInput
     }
   }
 }
+
+/**
+ * The grid's spreadsheet keys on a selection (grid coordinates). Breakpoints are never cleared or
+ * filled: every breakpoint of a map is needed, and removing one is the toolbar's job.
+ */
+export function runGridCommand(cmd: GridCommand, table: MapTable, range: GridRange): MapTable {
+  const sel = valueCellsIn(table, range)
+  if (!sel)
+    throw new Error(cmd === 'clear' ? 'Breakpoints cannot be cleared — a map needs every one. Use Remove pedal row or Remove speed column to drop one.' : 'Select torque cells to fill; breakpoints are not filled.')
+  if (cmd === 'clear') return clearCells(table, sel)
+  if (cmd === 'fill-down') return fillDown(table, sel)
+  return fillRight(table, sel)
+}
+
+/** What a cleared cell holds, in the display unit (for the editor's help text). */
+export const clearedText = (u: UnitSet) => `${u.torqueOut(CLEARED_TORQUE_NM)} ${u.torque}`

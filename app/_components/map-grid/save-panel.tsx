@@ -3,7 +3,7 @@
  * Save the draft as a new revision: a required message saying why, optional markdown notes.
  * The fields are checked with the API's own schema (react-hook-form + zod), so both refuse the
  * same input with the same words. A 409 (someone saved in between) keeps the draft and opens the
- * comparison and rebase offer.
+ * comparison and the cell-by-cell merge.
  */
 import { zodResolver } from '@hookform/resolvers/zod'
 import { useMutation } from '@tanstack/react-query'
@@ -38,7 +38,8 @@ export interface SavePanelProps {
   setNotes: (n: string) => void
   units: UnitSet
   onSaved: () => void
-  onRebase: (b: Base) => void
+  /** After a conflict: continue with `table` on top of the newer revision `b`. */
+  onMerged: (b: Base, table: MapTable) => void
 }
 
 export function SavePanel(p: SavePanelProps) {
@@ -95,9 +96,10 @@ export function SavePanel(p: SavePanelProps) {
           message={conflict.message}
           latestNumber={conflict.latestNumber}
           baseTable={p.base.table}
+          table={p.table}
           units={p.units}
-          onRebase={(number, table) => {
-            p.onRebase({ number, table })
+          onMerged={(number, theirs, merged) => {
+            p.onMerged({ number, table: theirs }, merged)
             setConflict(null)
             save.reset()
           }}

@@ -42,3 +42,15 @@ export function selectedCol(table: MapTable, g: GridRange | null): number | null
   if (!g || g.c0 !== g.c1 || g.c0 < 1 || g.c0 > table.colAxis.length) return null
   return g.c0 - 1
 }
+
+/**
+ * Only the value cells inside a grid block (axis cells left out), for the spreadsheet keys: a
+ * Delete on a row that includes its breakpoint clears the torque values, never the breakpoint.
+ */
+export function valueCellsIn(table: MapTable, g: GridRange): Selection | null {
+  const r0 = Math.max(1, Math.min(g.r0, g.r1)) - 1
+  const r1 = Math.min(table.rowAxis.length, Math.max(g.r0, g.r1)) - 1
+  const c0 = Math.max(1, Math.min(g.c0, g.c1)) - 1
+  const c1 = Math.min(table.colAxis.length, Math.max(g.c0, g.c1)) - 1
+  return r0 <= r1 && c0 <= c1 ? { r0, c0, r1, c1 } : null
+}

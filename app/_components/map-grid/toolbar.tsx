@@ -1,10 +1,12 @@
 'use client'
 /**
  * Operations on the selected cells, undo and redo. Every operation goes through runOp, and a
- * refusal (bad number, breakpoint out of order, too few breakpoints…) is shown, never swallowed.
+ * refusal (bad number, breakpoint out of order, too few breakpoints…) goes to the editor's one
+ * message line, never swallowed.
  */
 import { useState, type ReactNode } from 'react'
-import { humanNumber } from '@/maps'
+import { humanNumber, type UnitSet } from '@/maps'
+import { readCell, shown } from './grid-data'
 import { runOp, type OpInput, type OpName } from './ops'
 import { selectedCol, selectedRow, valueSelection } from './selection'
 
@@ -14,6 +16,8 @@ export interface ToolbarProps extends Omit<OpInput, 'text'> {
   redo: () => void
   canUndo: boolean
   canRedo: boolean
+  /** The editor's one message line: an operation's refusal, or null after one that worked. */
+  onMessage: (error: string | null) => void
 }
 
 function Group({ children, label }: { children: ReactNode; label: string }) {
@@ -27,8 +31,13 @@ function Group({ children, label }: { children: ReactNode; label: string }) {
 export function Toolbar(p: ToolbarProps) {
   const [text, setText] = useState<Record<string, string>>({ set: '', scale: '5', offset: '50', insert: '' })
   const [insertAxis, setInsertAxis] = useState<'insert-row' | 'insert-col'>('insert-col')
-  const [error, setError] = useState<string | null>(null)
   const { table, range, units } = p
+  // A unit switch converts what is typed but not applied yet, so "400" N·m does not become 400 lbf·ft.
+  const [typedIn, setTypedIn] = useState(units)
+  if (typedIn !== units) {
+    setTypedIn(units)
+    setText(convertTyped(text, insertAxis, typedIn, units))
+  }
   const sel = valueSelection(table, range)
   const row = selectedRow(table, range)
   const col = selectedCol(table, range)
@@ -36,9 +45,9 @@ export function Toolbar(p: ToolbarProps) {
   const run = (op: OpName, key?: string) => {
     try {
       p.onApply(runOp(op, { ...p, text: key ? text[key] : undefined }))
-      setError(null)
+      p.onMessage(null)
     } catch (e) {
-      setError(e instanceof Error ? e.message : String(e))
+      p.onMessage(e instanceof Error ? e.message : String(e))
     }
   }
   const input = (key: string, label: string, unit: string) => (
@@ -89,11 +98,21 @@ export function Toolbar(p: ToolbarProps) {
           {btn(col === null ? 'Remove speed column' : `Remove ${humanNumber(units.speedOut(table.colAxis[col]))} ${units.speed} column`, () => run('remove-col'), col === null)}
         </Group>
       </div>
-      {error && (
-        <p role="alert" className="error-text text-sm">
-          {error}
-        </p>
-      )}
     </div>
   )
+}
+
+/** The toolbar's typed numbers moved from one unit system to another (scale % needs nothing); text that is no number stays. */
+export function convertTyped(text: Record<string, string>, insertAxis: 'insert-row' | 'insert-col', from: UnitSet, to: UnitSet): Record<string, string> {
+  const move = (t: string | undefined, f: (n: number) => number) => {
+    const n = readCell(t ?? '')
+    return n instanceof Error || !t?.trim() ? (t ?? '') : String(shown(f(n)))
+  }
+  const torque = (n: number) => to.torqueOut(from.torqueIn(n))
+  return {
+    ...text,
+    set: move(text.set, torque),
+    offset: move(text.offset, torque),
+    insert: insertAxis === 'insert-col' ? move(text.insert, (n) => to.speedOut(from.speedIn(n))) : (text.insert ?? ''),
+  }
 }

@@ -43,7 +43,7 @@ export function useMapDraft(mapId: number, pageBase: Base) {
     setDraftId(newDraftId())
   }, [clear, pageBase, reset])
 
-  /** Put the edits on top of a newer revision: the edited table stays exactly as it is. */
+  /** Move the draft onto a newer revision (the merged table is applied by the caller, undoably). */
   const rebase = useCallback((next: Base) => setBase(next), [])
 
   /** After a save the draft is done with. */

@@ -4,7 +4,8 @@ import type { RevisionSummary } from '@/db/queries/revisions'
 import { STATE_LABELS } from '@/domain/revision-states'
 
 
-export function HistoryTable(props: { mapId: number; revisions: RevisionSummary[]; total: number; canEdit: boolean }) {
+/** The history of one map; a sent-back revision shows the lead's comment beside its state. */
+export function HistoryTable(props: { mapId: number; revisions: RevisionSummary[]; total: number; canEdit: boolean; sentBack?: Map<number, { comment: string; by: string }> }) {
   return (
     <div className="card overflow-x-auto p-0">
       <table className="w-full text-sm">
@@ -27,7 +28,14 @@ export function HistoryTable(props: { mapId: number; revisions: RevisionSummary[
               <td className="px-3 py-2 whitespace-nowrap">{formatTime(r.createdAt)}</td>
               <td className="px-3 py-2">{r.message}</td>
               <td className="px-3 py-2 font-mono text-xs" title={r.checksum}>{shortChecksum(r.checksum)}</td>
-              <td className="px-3 py-2" data-testid={`state-${r.number}`}>{STATE_LABELS[r.state]}</td>
+              <td className="px-3 py-2" data-testid={`state-${r.number}`}>
+                {STATE_LABELS[r.state]}
+                {r.state === 'returned' && props.sentBack?.get(r.id) && (
+                  <p className="mt-1 max-w-xs text-xs text-slate-700" data-testid={`sent-back-${r.number}`}>
+                    {props.sentBack.get(r.id)?.by}: “{props.sentBack.get(r.id)?.comment}”
+                  </p>
+                )}
+              </td>
               <td className="px-3 py-2 whitespace-nowrap">
                 <Link href={`/maps/${props.mapId}/revisions/${r.number}`} className="text-accent hover:underline">Open</Link>
                 {' · '}

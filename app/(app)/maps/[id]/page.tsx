@@ -11,6 +11,7 @@ import { formatTime } from '@/app/_components/format'
 import { releasedRevisionOfMap } from './released-set'
 import { HistoryTable } from './history-table'
 import { NotebookEntries } from './notebook-entries'
+import { SubmitAfterSave } from './submit-after-save'
 
 export const metadata = { title: 'Map notebook' }
 
@@ -31,6 +32,10 @@ export default async function MapNotebookPage(props: {
     releasedRevisionOfMap(map),
   ])
   const latest = revisions[0]
+  const savedRev = typeof saved === 'string' ? revisions.find((r) => String(r.number) === saved) : undefined
+  // The newest send-back comment of each revision (events come newest first), shown beside it.
+  const sentBack = new Map<number, { comment: string; by: string }>()
+  for (const e of events) if (e.action === 'send_back' && !sentBack.has(e.revisionId)) sentBack.set(e.revisionId, { comment: e.comment ?? '', by: e.actorName })
   return (
     <div className="space-y-6">
       <div className="flex flex-wrap items-start gap-3">
@@ -77,14 +82,12 @@ export default async function MapNotebookPage(props: {
           )}
         </div>
       </div>
-      {typeof saved === 'string' && (
-        <p role="status" className="rounded bg-accent-soft px-3 py-2 text-sm">
-          Saved revision {saved}.
-        </p>
+      {typeof saved === 'string' && /^\d+$/.test(saved) && (
+        <SubmitAfterSave number={Number(saved)} revisionId={savedRev?.id ?? null} canSubmit={EDITORS.includes(user.role) && savedRev?.state === 'draft' && savedRev.authorId === user.id} />
       )}
       <section>
         <h2 className="mb-2 text-lg font-semibold">History</h2>
-        <HistoryTable mapId={map.id} revisions={revisions} total={total} canEdit={EDITORS.includes(user.role)} />
+        <HistoryTable mapId={map.id} revisions={revisions} total={total} canEdit={EDITORS.includes(user.role)} sentBack={sentBack} />
       </section>
       <section>
         <h2 className="mb-2 text-lg font-semibold">Notebook</h2>

@@ -19,7 +19,7 @@ import { deliverableAtShaft } from './envelope'
 import { motorTorqueFromWheel, overallRatio } from './driveline'
 import { PhysicsInputError, requireFinite } from './errors'
 import { axleLoadsFor } from './load-case'
-import type { LoadCase } from './load-cases'
+import { loadCasesFor, type LoadCase } from './load-cases'
 import type { SurfaceId } from './surfaces'
 import type { MapTable } from './table'
 import { checkMap, lookup } from './table-lookup'
@@ -153,4 +153,50 @@ export function gradeDemands(r: GradeRequirements): GradeDemand[] {
     throw new PhysicsInputError(r.holdGradePct === undefined ? 'holdGradePct' : 'holdSpeedKmh', 'a hold needs both a grade and a speed')
   if (r.holdGradePct !== undefined && r.holdSpeedKmh !== undefined) out.push({ kind: 'hold', gradePct: r.holdGradePct, speedKmh: r.holdSpeedKmh })
   return out
+}
+
+/** One speed column of the drive map's full-pedal row against the declared grade and the release conditions' traction. */
+export interface BandCell {
+  speedKmh: number
+  /** Motor torque to keep climbing the declared grade at this speed, laden, N·m. */
+  neededNm: number
+  /** The smallest traction limit over the release surfaces × load cases at this speed (flat road), N·m, and where. */
+  allowedNm: number
+  worstSurface: SurfaceId
+  worstLoadCase: LoadCase
+  /** The map's full-pedal torque here, N·m. */
+  mapNm: number
+  /** needed > allowed: no single map satisfies both here. */
+  empty: boolean
+  status: 'in-band' | 'below-needed' | 'above-allowed' | 'no-band'
+}
+
+/**
+ * The band the full-pedal row must lie in, per speed breakpoint: at least the torque to climb the declared grade
+ * (the start grade, else the hold grade) laden, at most the traction limit of the worst release surface and load case.
+ * Null when the version declares no grade. Where the band is empty no single map can satisfy both.
+ * @example fullPedalBand(truck, drive, { startGradePct: 12 }, { surfaces: ['packed-snow'], loadCases: ['empty'] })
+ */
+export function fullPedalBand(vehicle: VehicleParams, drive: MapTable, req: GradeRequirements, c: { surfaces: readonly SurfaceId[]; loadCases: readonly LoadCase[] }): BandCell[] | null {
+  const gradePct = req.startGradePct ?? req.holdGradePct
+  if (gradePct === undefined || drive.kind !== 'drive') return null
+  checkMap(drive)
+  const laden: LoadCase = vehicle.trailer ? 'trailer-laden' : 'laden'
+  const m = axleLoadsFor(vehicle, laden).model.totalMassKg
+  const offered = new Set<LoadCase>(loadCasesFor(vehicle))
+  const limits = c.surfaces.flatMap((surface) => c.loadCases.filter((l) => offered.has(l)).map((loadCase) => ({ surface, loadCase, at: prepareCellSlip({ vehicle, loadCase, surface, applyEnvelope: false }) })))
+  const fullPedal = drive.rowAxis[drive.rowAxis.length - 1]
+  return drive.colAxis.map((speedKmh) => {
+    const neededNm = motorTorqueFromWheel(vehicle, gradeWheelForceN(vehicle, m, gradePct, Math.min(speedKmh, 150)).total * vehicle.wheelRadiusM)
+    let allowedNm = Infinity
+    let worst = limits[0]
+    for (const l of limits) {
+      const a = Math.abs(l.at(1, speedKmh).motorTorqueAtLimitNm)
+      if (a < allowedNm) { allowedNm = a; worst = l }
+    }
+    const mapNm = lookup(drive, fullPedal, speedKmh)
+    const empty = neededNm > allowedNm
+    const status = empty ? 'no-band' : mapNm < neededNm ? 'below-needed' : mapNm > allowedNm ? 'above-allowed' : 'in-band'
+    return { speedKmh, neededNm, allowedNm, worstSurface: worst?.surface ?? 'dry-asphalt', worstLoadCase: worst?.loadCase ?? laden, mapNm, empty, status }
+  })
 }

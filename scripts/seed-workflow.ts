@@ -124,9 +124,9 @@ export async function seedWorkflow(db: Db): Promise<boolean> {
   await release(set2, lead)
 
   // Parameter version 2: the laden centre of gravity measured after the body change, and a minimum lift-off
-  // deceleration at the battery corners (so the set under test shows the lift-off finding; sets 1 and 2 were released before it).
+  // deceleration at the battery corners and a 12 % laden start (so the set under test shows those checks; sets 1 and 2 were released before them).
   const program = (await getProgram(tipper.id))!
-  await updateProgram(tipper.id, { name: program.name, description: program.description, params: { ...program.params, ladenCgHeightM: program.params.ladenCgHeightM + 0.05 }, releaseConditions: { ...program.releaseConditions, minLiftOffDecelMps2: 0.3 }, reason: 'Laden CG height measured on the tilt table after the body change (+5 cm); lift-off regen must keep 0.3 m/s² at the battery corners' }, calib.id)
+  await updateProgram(tipper.id, { name: program.name, description: program.description, params: { ...program.params, ladenCgHeightM: program.params.ladenCgHeightM + 0.05 }, releaseConditions: { ...program.releaseConditions, minLiftOffDecelMps2: 0.3, startGradePct: 12 }, reason: 'Laden CG height measured on the tilt table after the body change (+5 cm); lift-off regen must keep 0.3 m/s² at the battery corners; a laden start on the quarry ramp (12 %)' }, calib.id)
 
   // Set 3: the launch-capped drive revision with set 2's regen, judged with version 2, under test.
   const d3 = await revision(db, 'Site drive', 3)

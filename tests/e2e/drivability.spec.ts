@@ -44,6 +44,12 @@ test('an engineer sharpens the tip-in ramp, sees tip-in break the jerk limit, so
   await expect(page.getByTestId('drivability-plots')).toBeVisible()
   await expectAccessible(page, 'the drivability page')
 
+  // The start grade the program declares shows as a band under the full-pedal row in the editor.
+  await page.goto('/maps')
+  await page.getByRole('link', { name: 'Site drive', exact: true }).first().click()
+  await page.goto(`${page.url()}/edit`)
+  await expect(page.getByTestId('grade-band')).toContainText('climb 12 % laden')
+
   await saveTipIn(page, programId, '1500', 'Soften the tip-in for comfort')
   const soft = await setWithLatestRamps(page, programId)
   await page.goto(`/sets/${soft}/drivability`)

@@ -20,6 +20,8 @@ import { useMapDraft } from './use-map-draft'
 import { useUndoKeys } from './use-undo-keys'
 import { TractionShadingControls, useTractionShade, type ShadingChoice } from './traction-shading'
 import type { VehicleParams } from '@/physics/vehicle'
+import type { ReleaseConditions } from '@/db/schema'
+import { GradeBand } from './grade-band'
 
 export interface MapEditorProps {
   mapId: number
@@ -28,13 +30,15 @@ export interface MapEditorProps {
   vehicle?: VehicleParams | null
   /** The program's design lateral acceleration, m/s² (release condition; absent = the physics default). */
   designLateralAccelMps2?: number
+  /** The program's release conditions, for the full-pedal band against its declared grade (none: no band). */
+  releaseConditions?: ReleaseConditions | null
   base: { number: number; table: MapTable }
   canSave: boolean
 }
 
 const when = (iso: string) => new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })
 
-export default function MapEditor({ mapId, limits, vehicle = null, designLateralAccelMps2, base: pageBase, canSave }: MapEditorProps) {
+export default function MapEditor({ mapId, limits, vehicle = null, designLateralAccelMps2, releaseConditions = null, base: pageBase, canSave }: MapEditorProps) {
   const [pageBaseState] = useState(pageBase)
   const draft = useMapDraft(mapId, pageBaseState)
   const [system, setSystem] = useState<UnitSystem>('metric')
@@ -133,6 +137,7 @@ export default function MapEditor({ mapId, limits, vehicle = null, designLateral
         </p>
       )}
       <MapWorkspace table={table} units={units} limits={limits} range={range} onSelect={setRange} onEdit={onEdit} onCommand={onCommand} onNotice={onNotice} onGridApi={onGridApi} cellShade={traction.shade} />
+      <GradeBand table={table} vehicle={vehicle} conditions={releaseConditions} units={units} />
       <div className="grid gap-4 lg:grid-cols-2">
         {canSave && (
           <SavePanel mapId={mapId} draftId={draft.draftId} table={table} base={draft.base} dirty={draft.dirty} message={draft.message} notes={draft.notes} setMessage={draft.setMessage} setNotes={draft.setNotes} units={units} onSaved={draft.finish} onMerged={onMerged} />

@@ -81,3 +81,21 @@ describe('declared requirements', () => {
     expect(() => gradeWheelForceN(vehicle, 1000, -3, 0)).toThrow(/gradePct/)
   })
 })
+
+describe('the full-pedal band in the editor', () => {
+  it('is the grade torque (as the start check computes it) up to the worst release condition’s traction limit; empty where they cross', async () => {
+    const { fullPedalBand, checkGrade: check } = await import('@/physics/gradeability')
+    const { prepareCellSlip } = await import('@/physics/cell-slip')
+    const { vehicle: truck } = await import('@/tests/support/fixtures')
+    const drive = { kind: 'drive' as const, rowAxis: [0, 100], colAxis: [0, 20, 60], values: [[0, 0, 0], [1500, 1200, 500]] }
+    const band = fullPedalBand(truck, drive, { startGradePct: 8 }, { surfaces: ['dry-asphalt', 'packed-snow'], loadCases: ['empty', 'laden'] })!
+    expect(band).toHaveLength(3)
+    // At 0 km/h the needed torque is the start check's own figure.
+    expect(band[0].neededNm).toBeCloseTo(check({ vehicle: truck, drive }, { kind: 'start', gradePct: 8, speedKmh: 0 }).neededNm, 9)
+    // The worst release condition is the lightest drive axle on the slipperiest surface.
+    expect(band[0]).toMatchObject({ worstSurface: 'packed-snow', worstLoadCase: 'empty' })
+    expect(band[0].allowedNm).toBeCloseTo(Math.abs(prepareCellSlip({ vehicle: truck, loadCase: 'empty', surface: 'packed-snow', applyEnvelope: false })(1, 0).motorTorqueAtLimitNm), 9)
+    for (const c of band) expect(c.empty).toBe(c.neededNm > c.allowedNm)
+    expect(fullPedalBand(truck, drive, {}, { surfaces: ['dry-asphalt'], loadCases: ['laden'] })).toBeNull()
+  })
+})

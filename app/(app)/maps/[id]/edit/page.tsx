@@ -24,7 +24,7 @@ export default async function EditMapPage(props: { params: Promise<{ id: string 
   return (
     <div className="space-y-4">
       <MapPageHeader map={map} revision={revision} title="Edit" />
-      <MapEditorLazy mapId={map.id} limits={limitsOrNull(map.programParams)} vehicle={map.programParams} designLateralAccelMps2={map.programReleaseConditions?.designLateralAccelMps2} base={{ number: revision.number, table: revision.table }} canSave={EDITORS.includes(user.role)} />
+      <MapEditorLazy mapId={map.id} limits={limitsOrNull(map.programParams)} vehicle={map.programParams} designLateralAccelMps2={map.programReleaseConditions?.designLateralAccelMps2} releaseConditions={map.programReleaseConditions} base={{ number: revision.number, table: revision.table }} canSave={EDITORS.includes(user.role)} />
     </div>
   )
 }

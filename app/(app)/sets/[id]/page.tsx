@@ -1,4 +1,5 @@
 import Link from 'next/link'
+import { MapError } from '@/maps'
 import { notFound } from 'next/navigation'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { NotFoundError } from '@/app/_lib/http/errors'
@@ -41,7 +42,8 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
     setGateFor(set),
     listReports({ setId: set.id }),
     listReports({ programId: set.programId }),
-    testPackage(set),
+    // A draft validation refuses can be in a set (driven on a closed course), but it cannot be packaged.
+    testPackage(set).catch((e: unknown) => (e instanceof MapError ? { error: e.message } : Promise.reject(e))),
     currentSetRelease(set.programId),
     // Withdrawals and later releases of the program say who withdrew this set's release and what replaced it.
     firstRelease
@@ -126,7 +128,7 @@ export default async function SetPage(props: { params: Promise<{ id: string }> }
             setNumber={set.number}
             summary={`Withdraw the release of Set ${set.number}: everyone is told not to use it; ${restore ? `Set ${restore.setNumber}, the release before it, goes back to the trucks` : `${set.programName} will have no released set`}.`}
           />}
-        <SetDownloads setId={set.id} status={set.status} release={latest} test={{ sha256: test.sha256, bytes: test.bytes.length }} />
+        <SetDownloads setId={set.id} status={set.status} release={latest} test={'error' in test ? { error: test.error } : { sha256: test.sha256, bytes: test.bytes.length }} />
       </section>
       <SetReports setId={set.id} reports={reports} canFile={user.role === 'test_driver' && set.status !== 'withdrawn'} />
       <EvidenceReplay setId={set.id} reports={programReports.filter((r) => r.setId !== set.id).slice(0, 20)} />

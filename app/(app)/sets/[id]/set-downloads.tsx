@@ -19,16 +19,22 @@ function Digest({ sha256, bytes }: { sha256: string; bytes: number }) {
 }
 
 /** The test package (always) and the frozen release package (once released), each with its digest. */
-export function SetDownloads(props: { setId: number; status: SetStatus; release: SetRelease | null; test: { sha256: string; bytes: number } }) {
+export function SetDownloads(props: { setId: number; status: SetStatus; release: SetRelease | null; test: { sha256: string; bytes: number } | { error: string } }) {
   const { setId, status, release } = props
   return (
     <section className="card space-y-4" aria-labelledby="downloads-heading" data-testid="set-downloads">
       <h3 id="downloads-heading" className="font-semibold">Packages</h3>
-      <div>
-        <a className="btn" href={`/api/sets/${setId}/package?kind=test`} data-testid="test-package-link">Test package (not for release)</a>
-        <p className="mt-1 text-xs text-slate-600">For test drives on a closed course only; every file in it says so. Built from the set as it stands now.</p>
-        <Digest {...props.test} />
-      </div>
+      {'error' in props.test ? (
+        <p className="text-sm" data-testid="test-package-refused">
+          <span className="font-semibold">No test package:</span> {props.test.error}
+        </p>
+      ) : (
+        <div>
+          <a className="btn" href={`/api/sets/${setId}/package?kind=test`} data-testid="test-package-link">Test package (not for release)</a>
+          <p className="mt-1 text-xs text-slate-600">For test drives on a closed course only; every file in it says so. Built from the set as it stands now.</p>
+          <Digest {...props.test} />
+        </div>
+      )}
       {(status === 'released' || status === 'retired') && release && (
         <div>
           {release.packageSha256 && release.packageBytes !== null ? (

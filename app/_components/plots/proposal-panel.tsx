@@ -23,8 +23,14 @@ export interface ProposalPanelProps {
   units: UnitSet
 }
 
+/** The margins the proposal accepts, %, the same range the propose route checks. */
+const MARGIN_RANGE = [0, 50] as const
+
 export function ProposalPanel({ mapId, mapName, baseNumber, choice, units }: ProposalPanelProps) {
-  const [margin, setMargin] = useState(10)
+  const [marginText, setMarginText] = useState('10')
+  const margin = Number(marginText)
+  // Refused, not clamped: a margin typed as 80 must not silently become 50.
+  const marginError = marginText.trim() === '' || !Number.isFinite(margin) || margin < MARGIN_RANGE[0] || margin > MARGIN_RANGE[1] ? `The margin must be ${MARGIN_RANGE[0]}–${MARGIN_RANGE[1]} % (got ${marginText.trim() || 'nothing'})` : null
   const [message, setMessage] = useState('')
   const where = `${LOAD_CASE_LABELS[choice.loadCase].toLowerCase()} on ${SURFACES[choice.surface].label.toLowerCase()}${choice.gradePct ? `, ${choice.gradePct} % grade` : ''}`
   const propose = useMutation({
@@ -44,15 +50,16 @@ export function ProposalPanel({ mapId, mapName, baseNumber, choice, units }: Pro
     <section className="card space-y-3" aria-label="Traction-safe draft">
       <div className="flex flex-wrap items-end gap-3">
         <h3 className="font-semibold">Traction-safe draft of {mapName} r{baseNumber}</h3>
-        <label className="w-28">
-          <span className="label">Margin (%)</span>
-          <input className="field" type="number" min={0} max={50} value={margin} onChange={(e) => setMargin(Math.min(50, Math.max(0, Number(e.target.value) || 0)))} />
+        <label className="w-32">
+          <span className="label">Margin, {MARGIN_RANGE[0]}–{MARGIN_RANGE[1]} %</span>
+          <input className="field" inputMode="decimal" aria-invalid={marginError !== null} aria-describedby={marginError ? 'margin-error' : undefined} value={marginText} onChange={(e) => setMarginText(e.target.value)} />
         </label>
-        <button type="button" className="btn" disabled={propose.isPending} onClick={() => { save.reset(); propose.mutate() }}>
+        <button type="button" className="btn" disabled={propose.isPending || marginError !== null} onClick={() => { save.reset(); propose.mutate() }}>
           {propose.isPending ? 'Proposing…' : 'Propose a traction-safe draft'}
         </button>
         <span className="text-xs text-slate-500">for {where}</span>
       </div>
+      {marginError && <p id="margin-error" className="error-text" role="alert" data-testid="margin-error">{marginError}</p>}
       {propose.error && <p className="error-text" role="alert">{propose.error.message}</p>}
       {p && (
         <div className="space-y-3">

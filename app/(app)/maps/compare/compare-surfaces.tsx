@@ -43,11 +43,11 @@ export function CompareSurfaces({ a, b, diff, units, limits, rows }: Props) {
   const common = { units, camera, onCamera: setCamera, range: shared }
   return (
     <>
-      <div className="grid gap-4 lg:grid-cols-2" data-testid="compare-surfaces">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]" data-testid="compare-surfaces">
         <div className="card p-2"><SurfacePlot {...common} table={a.table} title={`A: ${a.mapName} r${a.number}`} filename={`map-${a.mapId}-r${a.number}`} limitBySpeed={limits ? limitOf(limits.a) : undefined} /></div>
         <div className="card p-2"><SurfacePlot {...common} table={b.table} title={`B: ${b.mapName} r${b.number}`} filename={`map-${b.mapId}-r${b.number}`} limitBySpeed={limits ? limitOf(limits.b) : undefined} /></div>
       </div>
-      <section className="grid gap-4 lg:grid-cols-2">
+      <section className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <div className="card p-2">
           <SurfacePlot units={units} camera={camera} onCamera={setCamera} table={delta} range={{ min: -dMax, max: dMax }} colorscale={DIFF_SCALE} diverging
             title="Difference B − A" zLabel={`B − A (${units.torque})`} filename={`difference-${a.mapId}-r${a.number}-${b.mapId}-r${b.number}`} />

@@ -88,6 +88,7 @@ test('a log with other column names is mapped from its own header; a failed log 
   await expect(form).toBeVisible()
   await expect(form.getByText('(required)', { exact: true })).toHaveCount(3)
   await checkPage(page, 'the column mapping form')
+  await form.screenshot({ path: 'docs/driver-column-mapping.png' })
   // Sending it short of a required column says what is missing and sends nothing.
   await form.getByRole('button', { name: 'Upload with these columns' }).click()
   await expect(form.getByRole('alert')).toContainText('Time is required')
@@ -142,6 +143,7 @@ test('every table and list fits the phone: reports list, measured against predic
     expect(open && open.x >= 0 && open.x + open.width <= 390, `Open link of row ${i}`).toBe(true)
   }
   await checkPage(page, 'the reports list')
+  await page.screenshot({ path: 'docs/driver-reports-phone.png' })
 
   // The demo report with a log on a released set: the prediction, one block per event, and the plot.
   await rows.filter({ hasText: 'Dara Driver' }).filter({ has: page.getByText(/Site drive r2/) }).first().getByRole('link', { name: 'Open' }).click()

@@ -35,7 +35,7 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
           <Link href="/reports" className="hover:underline">Drive reports</Link> · {report.programName}
         </p>
         <h1 className="text-2xl font-bold">
-          <Link href={`/sets/${report.setId}`} className="text-accent hover:underline">Set {report.setNumber}</Link> — {report.drivenOn}
+          <Link href={`/sets/${report.setId}`} className="text-accent underline">Set {report.setNumber}</Link> — {report.drivenOn}
         </h1>
         <p className="text-sm text-slate-600">
           {user.id === report.driverId && !report.leadReadAt && (

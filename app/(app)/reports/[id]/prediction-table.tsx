@@ -33,7 +33,7 @@ export function PredictionTable({ predictions }: { predictions: Prediction[] }) 
           </li>
         ))}
       </ol>
-      <div className="hidden overflow-x-auto sm:block">
+      <div className="hidden overflow-x-auto sm:block" tabIndex={0} role="region" aria-label="Measured against predicted, by event">
         <table className="w-full text-sm" data-testid="prediction-table">
           <thead className="text-left text-xs uppercase text-slate-600">
             <tr><th>Event</th><th>Start (s)</th><th>Pedal (%)</th><th>Speed (km/h)</th><th>Map torque (N·m)</th><th>Measured peak slip</th><th>Predicted slip</th><th>Traction used</th></tr>

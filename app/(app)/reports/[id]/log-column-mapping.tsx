@@ -74,8 +74,9 @@ function ChannelPicker(props: { row: ChannelRow; headers: readonly string[]; nee
     props.onChange(next)
   }
   return (
-    <div className="grid gap-1 sm:grid-cols-[1fr_12rem_7rem] sm:items-center">
-      <label htmlFor={`${id}-h`} className="text-sm">
+    // On a phone: the name over the header and unit side by side; wider, all three on one line.
+    <div className="grid grid-cols-[minmax(0,1fr)_6rem] items-center gap-1 sm:grid-cols-[minmax(0,1fr)_12rem_7rem]">
+      <label htmlFor={`${id}-h`} className="col-span-2 text-sm sm:col-span-1">
         {row.label} {req && <span className="text-xs font-semibold text-danger">({req})</span>}
       </label>
       <select id={`${id}-h`} className="field" aria-required={row.required === 'yes' || (row.required === 'regen' && props.needsBrake)} value={choice?.header ?? ''} onChange={(e) => set(e.target.value)}>

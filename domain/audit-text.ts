@@ -39,6 +39,7 @@ export const AUDIT_ACTION_LABELS: Readonly<Record<string, string>> = {
   'report.log-upload': 'Log uploaded',
   'report.log-remove': 'Log removed',
   'report.log-reanalyse': 'Log analysed again',
+  'report.log-remap': 'Log columns mapped again',
 }
 
 /** @example auditActionLabel('set.withdraw') // 'Release withdrawn' */
@@ -150,6 +151,10 @@ function sentence(action: string, d: Details): string {
       return join(quote(d.fileName), size(d.sizeBytes) && `(${size(d.sizeBytes)})`)
     case 'report.log-reanalyse':
       return join(quote(d.fileName), quote(d.why) && `— ${quote(d.why)}`)
+    case 'report.log-remap': {
+      const n = d.to && typeof d.to === 'object' ? Object.keys(d.to).length : 0
+      return join(quote(d.fileName), `— ${n === 0 ? 'no column mapped (the file’s own names)' : `${n} column${n === 1 ? '' : 's'} mapped`}`)
+    }
     default:
       return ''
   }

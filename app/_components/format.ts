@@ -8,3 +8,13 @@ export function formatTime(d: Date | string): string {
 export function shortChecksum(c: string): string {
   return c.slice(0, 12)
 }
+
+/**
+ * Bytes as the team reads a file size, in SI units (1 kB = 1000 B, as IEC 80000-13 defines the k prefix):
+ * under 1 MB in kB, so a small log never reads "0.0 MB". @example formatBytes(48_213) // '48.2 kB'
+ */
+export function formatBytes(n: number): string {
+  if (n < 1000) return `${n} B`
+  if (n < 999_950) return `${(n / 1000).toFixed(1)} kB`
+  return `${(n / 1_000_000).toFixed(1)} MB`
+}

@@ -2,6 +2,7 @@ import { z } from 'zod'
 import { MAX_ID } from './query'
 import { FLAG_SEVERITIES, SEVERITY_LABELS } from '@/domain/report-safety'
 import { LOAD_CASE_IDS, MAP_KINDS, SURFACE_IDS } from '@/physics'
+import { findLogColumn } from '@/physics/drive-log/columns'
 import { atMost } from './text'
 
 export { SEVERITY_LABELS }
@@ -65,6 +66,19 @@ export type ReportInput = z.infer<typeof reportInputSchema>
 export const logColumnMappingSchema = z
   .record(z.string().max(100, atMost('A column name', 100)), z.string().max(200, atMost('A header name', 200)))
   .refine((m) => Object.keys(m).length <= 40, 'At most 40 mapped columns')
+
+/** A corrected column mapping for a stored log (the driver retries a failed analysis): only our own column names, each header used once. */
+export const logRemapSchema = z.object({
+  mapping: logColumnMappingSchema.superRefine((m, ctx) => {
+    const seen = new Map<string, string>()
+    for (const [ours, theirs] of Object.entries(m)) {
+      if (!findLogColumn(ours)) ctx.addIssue({ code: 'custom', path: [ours], message: `${ours} is not a column Mapwright reads` })
+      else if (theirs.trim() === '') ctx.addIssue({ code: 'custom', path: [ours], message: `the header name for ${ours} is empty` })
+      else if (seen.has(theirs)) ctx.addIssue({ code: 'custom', path: [ours], message: `header "${theirs}" is already mapped to ${seen.get(theirs)}` })
+      seen.set(theirs, ours)
+    }
+  }),
+})
 
 /** A comment on a drive report. */
 export const reportCommentSchema = z.object({ body: z.string().trim().min(1, 'The comment is empty').max(5000, atMost('The comment', 5000)) })

@@ -59,6 +59,29 @@ export async function removeLogUnlessRead(logId: number, reportId: number, actor
   })
 }
 
+/**
+ * The filing driver corrects a log's column mapping: the new mapping is stored and the log goes back
+ * to 'uploaded' for any server's worker, with its audit row (old and new mapping), unless a lead has
+ * read the report meanwhile (the report row is locked first). 'read' when read; null when no such log.
+ */
+export async function remapLogUnlessRead(logId: number, reportId: number, mapping: Record<string, string>, actorId: number) {
+  const db = await getDb()
+  return db.transaction(async (tx) => {
+    const [report] = await tx.select({ leadReadAt: driveReports.leadReadAt }).from(driveReports).where(eq(driveReports.id, reportId)).for('update')
+    if (!report) return null
+    if (report.leadReadAt) return 'read' as const
+    const [before] = await tx.select({ mapping: driveLogs.mapping }).from(driveLogs).where(and(eq(driveLogs.id, logId), eq(driveLogs.reportId, reportId)))
+    if (!before) return null
+    const [row] = await tx
+      .update(driveLogs)
+      .set({ mapping, status: 'uploaded', progressBytes: 0, errorMessage: null, claimedBy: null, leaseUntil: null, attempts: 0 })
+      .where(eq(driveLogs.id, logId))
+      .returning(columns)
+    await recordAudit({ actorId, action: 'report.log-remap', entityType: 'drive_report', entityId: reportId, details: { logId, fileName: row.fileName, from: before.mapping, to: mapping } }, tx)
+    return row
+  })
+}
+
 export async function listLogs(reportId: number) {
   const db = await getDb()
   return db.select(columns).from(driveLogs).where(eq(driveLogs.reportId, reportId)).orderBy(asc(driveLogs.id))

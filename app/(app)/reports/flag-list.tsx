@@ -17,7 +17,8 @@ export function FlagList(props: { form: Form; fields: FieldArrayWithId<ReportFor
         const e = formState.errors.flags?.[i]
         return (
           <div key={f.id} className="grid grid-cols-2 gap-2 rounded-md border border-line p-2 sm:grid-cols-6" data-testid={`flag-${i}`}>
-            <div>
+            {/* On a phone the map and severity take a full row each, so "4 — Safety concern" is never cut. */}
+            <div className="col-span-2">
               <label htmlFor={`flag-${i}-map`} className="label">Map</label>
               <select id={`flag-${i}-map`} className="field" {...register(`flags.${i}.map`)}>
                 {/* A flag from a draft older than sets names no map; one on a map this set lacks stays visible so the driver can move it. */}
@@ -27,7 +28,7 @@ export function FlagList(props: { form: Form; fields: FieldArrayWithId<ReportFor
                 ))}
               </select>
             </div>
-            <div>
+            <div className="col-span-2">
               <label htmlFor={`flag-${i}-severity`} className="label">Severity</label>
               <select id={`flag-${i}-severity`} className="field" {...register(`flags.${i}.severity`, { valueAsNumber: true })}>
                 {Object.entries(SEVERITY_LABELS).map(([n, label]) => (
@@ -43,7 +44,7 @@ export function FlagList(props: { form: Form; fields: FieldArrayWithId<ReportFor
               <label htmlFor={`flag-${i}-speed`} className="label">km/h</label>
               <input id={`flag-${i}-speed`} inputMode="decimal" className="field" {...register(`flags.${i}.speedKmh`, { valueAsNumber: true })} />
             </div>
-            <div className="col-span-2">
+            <div className="col-span-2 sm:col-span-6">
               <label htmlFor={`flag-${i}-what`} className="label">What happened</label>
               <input id={`flag-${i}-what`} className="field" {...register(`flags.${i}.what`)} />
             </div>

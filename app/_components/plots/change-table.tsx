@@ -21,7 +21,8 @@ export function ChangeTable({ rows, units: u, testId = 'change-table', empty = '
   const hasNote = rows.some((r) => r.note)
   return (
     <div className="space-y-2">
-      <div className="max-h-96 overflow-auto rounded border border-line">
+      {/* Focusable, so the keyboard can scroll a long list (and a wide one on a phone). */}
+      <div className="max-h-96 overflow-auto rounded border border-line" tabIndex={0} role="region" aria-label="Changed cells">
         <table className="w-full text-sm tabular-nums" data-testid={testId}>
           <thead className="sticky top-0 bg-paper text-left text-xs uppercase text-slate-500">
             <tr>

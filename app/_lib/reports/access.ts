@@ -26,6 +26,7 @@ export const AFTER_READ = {
   edit: 'A lead engineer has read this report; it can no longer be edited. Add a comment instead.',
   'add-log': 'A lead engineer has read this report, so no log can be added to it any more. File a new report for the new drive, or ask a lead.',
   'remove-log': 'A lead engineer has read this report, so its logs can no longer be removed.',
+  'remap-log': 'A lead engineer has read this report, so its logs can no longer be mapped again; a lead can still run the analysis again.',
 } as const
 
 /** After a lead engineer has read a report, what it says and which logs it has stay as the lead read them. */

@@ -19,7 +19,7 @@ describe('after filing', () => {
     expect(mail[0].raw).toMatch(/set_1_=28Lift-off_r1=29/) // the subject, quoted-printable: "set 1 (Lift-off r1)"
   })
 
-  it('a driver edits until a lead has read the report; engineers comment, drivers cannot', async () => {
+  it('a driver edits until a lead has read the report; engineers comment, and the filing driver answers after the read', async () => {
     const { reportId, setId, driverCookie, cookie: engineerCookie } = await filedReport()
     const lead = await sessionCookie(await makeUser('lead_engineer'))
     expect((await call(readRoute.POST, { method: 'POST', cookie: driverCookie, params: { id: String(reportId) } })).status).toBe(403)
@@ -27,8 +27,16 @@ describe('after filing', () => {
     const late = await call(reportRoute.PUT, { method: 'PUT', cookie: driverCookie, params: { id: String(reportId) }, body: reportBody(setId, { comments: 'late edit' }) })
     expect(late.status).toBe(409)
     expect((await call(commentsRoute.POST, { method: 'POST', cookie: engineerCookie, params: { id: String(reportId) }, body: { body: 'Seen; capped launch in r3' } })).status).toBe(201)
-    expect((await call(commentsRoute.POST, { method: 'POST', cookie: driverCookie, params: { id: String(reportId) }, body: { body: 'me too' } })).status).toBe(403)
+    const answer = await call(commentsRoute.POST, { method: 'POST', cookie: driverCookie, params: { id: String(reportId) }, body: { body: 'It spun on wet cobbles at the depot gate' } })
+    expect(answer.status).toBe(201)
+    // Another driver is not part of this report's conversation.
+    const stranger = await sessionCookie(await makeUser('test_driver'))
+    const refused = await call(commentsRoute.POST, { method: 'POST', cookie: stranger, params: { id: String(reportId) }, body: { body: 'me too' } })
+    expect(refused.status).toBe(403)
+    expect(refused.body.error.message).toBe('Only the driver who filed this report may comment on it')
     const list = await call(commentsRoute.GET, { cookie: driverCookie, params: { id: String(reportId) } })
-    expect(list.body.comments.map((c: { body: string }) => c.body)).toEqual(['Seen; capped launch in r3'])
+    expect(list.body.comments.map((c: { body: string }) => c.body)).toEqual(['Seen; capped launch in r3', 'It spun on wet cobbles at the depot gate'])
+    // The answer leaves the report as the lead read it: still read, still not editable.
+    expect((await call(reportRoute.PUT, { method: 'PUT', cookie: driverCookie, params: { id: String(reportId) }, body: reportBody(setId, { comments: 'later' }) })).status).toBe(409)
   })
 })

@@ -16,6 +16,9 @@ describe('audit text', () => {
     expect(auditSentence('set.withdraw', { reason: 'Judder on  wet\nramps', restoredSetId: 3 })).toBe('Reason: “Judder on wet ramps” — the release before it is back in the trucks.')
     expect(auditSentence('set.release', { acknowledgements: [{}, {}], replacedSetId: null })).toBe('With 2 traction exceptions acknowledged.')
     expect(auditSentence('user.invite', { email: 'a@b.example', role: 'test_driver' })).toBe('a@b.example as test driver.')
+    expect(auditActionLabel('report.log-remap')).toBe('Log columns mapped again')
+    expect(auditSentence('report.log-remap', { fileName: 'run.csv', from: {}, to: { time_s: 't', road_speed_kmh: 'VehSpd' } })).toBe('“run.csv” — 2 columns mapped.')
+    expect(auditSentence('report.log-remap', { fileName: 'run.csv', from: { time_s: 't' }, to: {} })).toBe('“run.csv” — no column mapped (the file’s own names).')
   })
 
   it('gives sizes below 1 MB in kB and cuts long quotes to one line', () => {

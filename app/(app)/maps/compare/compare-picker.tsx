@@ -16,7 +16,7 @@ export function ComparePicker({ maps, a, b, problem }: { maps: MapSummary[]; a?:
   return (
     <form method="get" action="/maps/compare" className="card space-y-3">
       {problem && <p role="alert" className="rounded bg-red-50 px-3 py-2 text-sm text-danger">{problem}</p>}
-      <div className="grid gap-3 sm:grid-cols-2">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-3 sm:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <label>
           <span className="label">A (before)</span>
           <select name="a" className="field" defaultValue={a}>{options(maps)}</select>

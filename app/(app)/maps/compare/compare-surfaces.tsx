@@ -49,11 +49,11 @@ export function CompareSurfaces({ a, b, diff, units, limits, rows }: Props) {
   const titleB = `B: ${b.mapName} r${b.number}`
   return (
     <>
-      <div className="grid gap-4 lg:grid-cols-2" data-testid="compare-surfaces">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]" data-testid="compare-surfaces">
         <div className="card p-2">{draw ? <SurfacePlot {...common} table={a.table} title={titleA} filename={`map-${a.mapId}-r${a.number}`} limitBySpeed={limits ? limitOf(limits.a) : undefined} /> : <SurfacePending />}</div>
         <div className="card p-2">{draw ? <SurfacePlot {...common} table={b.table} title={titleB} filename={`map-${b.mapId}-r${b.number}`} limitBySpeed={limits ? limitOf(limits.b) : undefined} /> : <SurfacePending />}</div>
       </div>
-      <section className="grid gap-4 lg:grid-cols-2">
+      <section className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
         <div className="card p-2">
           {draw ? (
             <SurfacePlot units={units} camera={camera} onCamera={setCamera} table={delta} range={{ min: -dMax, max: dMax }} colorscale={DIFF_SCALE} diverging

@@ -45,7 +45,7 @@ export function CompareView(props: CompareViewData & { canEdit: boolean }) {
       <section className="space-y-2">
         <h2 className="text-lg font-semibold">Predicted slip</h2>
         {failed && <p className="error-text" role="alert">{failed.message}</p>}
-        <div className="grid gap-4 lg:grid-cols-2">
+        <div className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
           {oa.data && <div className="card"><SlipHeatmap table={a.table} overlay={oa.data} units={units} title={`A: ${label(a)}`} filename={`slip-${a.mapId}-r${a.number}`} testId="slip-heatmap-a" /></div>}
           {ob.data && <div className="card"><SlipHeatmap table={b.table} overlay={ob.data} units={units} title={`B: ${label(b)}`} filename={`slip-${b.mapId}-r${b.number}`} testId="slip-heatmap-b" /></div>}
         </div>

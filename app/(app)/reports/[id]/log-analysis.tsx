@@ -48,7 +48,7 @@ export function LogAnalysisView(props: { reportId: number; logId: number; setId:
       </dl>
       <LogTimePlot analysis={a} />
       {a.events.length > 0 && (
-        <div className="overflow-x-auto">
+        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Slip events">
           <table className="w-full text-sm" data-testid="event-table">
             <thead className="text-left text-xs uppercase text-slate-500">
               <tr><th>Event</th><th>Start (s)</th><th>Duration (s)</th><th>Peak slip</th><th>Pedal at start (%)</th><th>Speed at start (km/h)</th></tr>

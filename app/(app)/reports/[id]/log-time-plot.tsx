@@ -40,7 +40,9 @@ export function LogTimePlot({ analysis: a }: { analysis: AnalysisResult }) {
   const layout: Partial<Layout> = {
     height: 560,
     showlegend: true,
-    legend: { orientation: 'h', y: -0.08 },
+    // Above the plots, clear of the time axis title; on a phone it wraps to three rows, which the top margin holds.
+    legend: { orientation: 'h', x: 0, xanchor: 'left', y: 1.01, yanchor: 'bottom' },
+    margin: { l: 56, r: 16, t: 100, b: 48 },
     grid: { rows: 4, columns: 1, pattern: 'coupled' },
     xaxis: { title: { text: 'Time (s)' } },
     yaxis: { title: { text: 'km/h' } },

@@ -6,6 +6,10 @@ import { isLogPending, type LogStatus } from '@/domain/log-statuses'
 import { uploadLog } from './upload-log'
 import { LogAnalysisView } from './log-analysis'
 import { LogColumnHelp } from './log-column-help'
+import { LogColumnMapping } from './log-column-mapping'
+import { formatBytes } from '@/app/_components/format'
+import { readFileHeader, readStoredHeader } from '@/app/_lib/reports/column-mapping/header-names'
+import { guessChoices, mappingProblems, type Choices } from '@/app/_lib/reports/column-mapping/column-choices'
 
 export interface LogItem {
   id: number
@@ -14,21 +18,24 @@ export interface LogItem {
   status: LogStatus
   progressBytes: number
   errorMessage: string | null
+  /** The column mapping it was read with: `{ ourColumn: theirHeader }`. */
+  mapping: Record<string, string>
   createdAt: string
 }
 
-const mb = (b: number) => `${(b / (1024 * 1024)).toFixed(1)} MB`
+/** A file (to upload) or a stored log (to read again) waiting for its columns to be picked. */
+type Mapping = { fileName: string; headers: string[]; initial: Choices } & ({ file: File } | { logId: number })
 
 /**
  * The report's drive logs. The filing driver attaches and removes logs until a lead engineer has
  * read the report; the driver or a lead can run an analysis again. Each is in the audit trail.
  */
-export function LogsPanel(props: { reportId: number; setId: number; initialLogs: LogItem[]; isDriver: boolean; isLead: boolean; read: boolean }) {
+export function LogsPanel(props: { reportId: number; setId: number; initialLogs: LogItem[]; isDriver: boolean; isLead: boolean; read: boolean; needsBrake: boolean }) {
   const qc = useQueryClient()
   const canUpload = props.isDriver && !props.read
   const [upload, setUpload] = useState<{ name: string; fraction: number } | null>(null)
   const [error, setError] = useState<string | null>(null)
-  const [mapping, setMapping] = useState('')
+  const [mapping, setMapping] = useState<Mapping | null>(null)
   const logs = useQuery({
     queryKey: ['logs', props.reportId],
     initialData: { logs: props.initialLogs },
@@ -42,16 +49,47 @@ export function LogsPanel(props: { reportId: number; setId: number; initialLogs:
     mutationFn: (logId: number) => api(`/api/reports/${props.reportId}/logs/${logId}`, { method: 'POST' }),
     onSuccess: (_d, logId) => Promise.all([refresh(), qc.invalidateQueries({ queryKey: ['log', logId] })]),
   })
+  const remap = useMutation({
+    mutationFn: (v: { logId: number; mapping: Record<string, string> }) => api(`/api/reports/${props.reportId}/logs/${v.logId}`, { method: 'PATCH', json: { mapping: v.mapping } }),
+    onSuccess: (_d, v) => {
+      setMapping(null)
+      return Promise.all([refresh(), qc.invalidateQueries({ queryKey: ['log', v.logId] })])
+    },
+  })
   const remove = useMutation({
     mutationFn: (logId: number) => api(`/api/reports/${props.reportId}/logs/${logId}`, { method: 'DELETE' }),
     onSuccess: refresh,
   })
 
-  async function onFile(file: File) {
+  // The file's header is read here first: a log in our own column names goes up at once; any other asks which column is which.
+  async function onPick(file: File) {
     setError(null)
+    setMapping(null)
+    try {
+      const headers = await readFileHeader(file)
+      const initial = guessChoices(headers)
+      if (mappingProblems(initial, props.needsBrake).length === 0) await send(file, {})
+      else setMapping({ file, fileName: file.name, headers, initial })
+    } catch (e) {
+      setError(e instanceof Error ? e.message : String(e))
+    }
+  }
+
+  async function mapAgain(l: LogItem) {
+    setError(null)
+    try {
+      const headers = await readStoredHeader(`/api/reports/${props.reportId}/logs/${l.id}/file`)
+      setMapping({ logId: l.id, fileName: l.fileName, headers, initial: guessChoices(headers, l.mapping) })
+    } catch (e) {
+      setError(e instanceof Error ? e.message : String(e))
+    }
+  }
+
+  async function send(file: File, columns: Record<string, string>) {
+    setMapping(null)
     setUpload({ name: file.name, fraction: 0 })
     const q = new URLSearchParams({ name: file.name })
-    if (mapping.trim()) q.set('mapping', mapping.trim())
+    if (Object.keys(columns).length > 0) q.set('mapping', JSON.stringify(columns))
     try {
       await uploadLog(`/api/reports/${props.reportId}/logs?${q}`, file, (fraction) => setUpload({ name: file.name, fraction }))
       await qc.invalidateQueries({ queryKey: ['logs', props.reportId] })
@@ -69,11 +107,21 @@ export function LogsPanel(props: { reportId: number; setId: number; initialLogs:
       {canUpload && (
         <div className="space-y-2">
           <label htmlFor="log-file" className="label">Attach the vehicle’s data log (CSV, up to 200 MB)</label>
-          <input id="log-file" type="file" accept=".csv,text/csv" disabled={Boolean(upload)} onChange={(e) => e.target.files?.[0] && onFile(e.target.files[0])} />
-          <details className="text-sm">
-            <summary className="cursor-pointer text-slate-600">Different column names? Map them</summary>
-            <textarea aria-label="Column mapping (JSON)" className="field mt-1 font-mono text-xs" rows={3} placeholder='{"road_speed_kmh": "VehSpd", "time_s": "t"}' value={mapping} onChange={(e) => setMapping(e.target.value)} />
-          </details>
+          <input id="log-file" type="file" accept=".csv,text/csv" className="block w-full max-w-full text-sm" disabled={Boolean(upload)} onChange={(e) => e.target.files?.[0] && onPick(e.target.files[0])} />
+          <p className="text-xs text-slate-600">A log whose columns carry other names asks which is which before it is sent.</p>
+          {mapping && 'file' in mapping && (
+            <LogColumnMapping
+              key={`file:${mapping.fileName}`}
+              fileName={mapping.fileName}
+              headers={mapping.headers}
+              initial={mapping.initial}
+              needsBrake={props.needsBrake}
+              submitLabel="Upload with these columns"
+              busy={Boolean(upload)}
+              onSubmit={(m) => void send(mapping.file, m)}
+              onCancel={() => setMapping(null)}
+            />
+          )}
           <LogColumnHelp />
           {upload && <Progress label={`Uploading ${upload.name}`} fraction={upload.fraction} />}
           {error && <p role="alert" className="error-text text-sm">{error}</p>}
@@ -82,14 +130,17 @@ export function LogsPanel(props: { reportId: number; setId: number; initialLogs:
       {logs.data.logs.length === 0 && <p className="text-sm text-slate-500">No log attached.</p>}
       {logs.data.logs.map((l) => (
         <div key={l.id} className="space-y-2 border-t border-line pt-2" data-testid={`log-${l.id}`}>
-          <p className="text-sm">
-            <a className="text-accent hover:underline" href={`/api/reports/${props.reportId}/logs/${l.id}/file`}>{l.fileName}</a> · {mb(l.sizeBytes)} · <span data-testid="log-status">{l.status}</span>
+          <p className="text-sm break-words">
+            <a className="text-accent hover:underline" href={`/api/reports/${props.reportId}/logs/${l.id}/file`}>{l.fileName}</a> · {formatBytes(l.sizeBytes)} · <span data-testid="log-status">{l.status}</span>
           </p>
           {isLogPending(l.status) && <Progress label="Reading the log" fraction={l.sizeBytes ? l.progressBytes / l.sizeBytes : 0} />}
           {l.status === 'failed' && <p role="alert" className="error-text text-sm">{l.errorMessage}</p>}
           {!isLogPending(l.status) && (props.isDriver || props.isLead) && (
             <p className="flex flex-wrap gap-2">
               <button type="button" className="btn" disabled={again.isPending} onClick={() => again.mutate(l.id)}>Analyse again</button>
+              {canUpload && l.status === 'failed' && (
+                <button type="button" className="btn" onClick={() => void mapAgain(l)}>Map the columns again</button>
+              )}
               {canUpload && (
                 <button type="button" className="btn text-danger" disabled={remove.isPending} onClick={() => window.confirm(`Remove ${l.fileName} from this report?`) && remove.mutate(l.id)}>
                   Remove this log
@@ -99,6 +150,20 @@ export function LogsPanel(props: { reportId: number; setId: number; initialLogs:
           )}
           {again.error && again.variables === l.id && <p role="alert" className="error-text text-sm">{again.error.message}</p>}
           {remove.error && remove.variables === l.id && <p role="alert" className="error-text text-sm">{remove.error.message}</p>}
+          {mapping && 'logId' in mapping && mapping.logId === l.id && (
+            <LogColumnMapping
+              key={`log:${l.id}`}
+              fileName={l.fileName}
+              headers={mapping.headers}
+              initial={mapping.initial}
+              needsBrake={props.needsBrake}
+              submitLabel="Analyse again with these columns"
+              busy={remap.isPending}
+              onSubmit={(m) => remap.mutate({ logId: l.id, mapping: m })}
+              onCancel={() => setMapping(null)}
+            />
+          )}
+          {remap.error && remap.variables?.logId === l.id && <p role="alert" className="error-text text-sm">{remap.error.message}</p>}
           {l.status === 'done' && <LogAnalysisView reportId={props.reportId} logId={l.id} setId={props.setId} />}
         </div>
       ))}

@@ -14,7 +14,8 @@ export function OccupancyGrid({ occupancy: o, events, mapKind }: { occupancy: Ma
     marks.set(k, (marks.get(k) ?? 0) + 1)
   }
   return (
-    <div className="overflow-x-auto">
+    // Focusable, so a keyboard can scroll it on a phone; shading kept light enough that dark numbers read (≥ 4.5:1).
+    <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Time in each map cell">
       <h3 className="mb-1 text-sm font-semibold">Time in each map cell, with events</h3>
       <table className="border-collapse text-[11px]" data-testid="occupancy-grid">
         <thead>
@@ -31,8 +32,8 @@ export function OccupancyGrid({ occupancy: o, events, mapKind }: { occupancy: Ma
                 const sec = o.seconds[r][c]
                 const n = marks.get(`${r}:${c}`)
                 return (
-                  <td key={s} title={`${sec.toFixed(1)} s${n ? `, ${n} event(s)` : ''}`} className="h-6 min-w-9 border border-line text-center tabular-nums" style={{ background: `rgba(15,107,92,${(0.85 * sec) / max})`, color: sec / max > 0.5 ? 'white' : undefined }}>
-                    {n ? <span className="font-bold text-amber-600">●{n}</span> : sec >= 1 ? Math.round(sec) : ''}
+                  <td key={s} title={`${sec.toFixed(1)} s${n ? `, ${n} event(s)` : ''}`} className="h-6 min-w-9 border border-line text-center tabular-nums" style={{ background: `rgba(15,107,92,${(0.55 * sec) / max})` }}>
+                    {n ? <span className="rounded bg-white px-0.5 font-bold text-amber-800">●{n}</span> : sec >= 1 ? Math.round(sec) : ''}
                   </td>
                 )
               })}

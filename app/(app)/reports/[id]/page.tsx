@@ -35,7 +35,7 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
           <Link href="/reports" className="hover:underline">Drive reports</Link> · {report.programName}
         </p>
         <h1 className="text-2xl font-bold">
-          <Link href={`/sets/${report.setId}`} className="text-accent hover:underline">Set {report.setNumber}</Link> — {report.drivenOn}
+          <Link href={`/sets/${report.setId}`} className="text-accent underline">Set {report.setNumber}</Link> — {report.drivenOn}
         </h1>
         <p className="text-sm text-slate-600">
           {user.id === report.driverId && !report.leadReadAt && (
@@ -85,7 +85,7 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
         </section>
       )}
       <SafetyPanel reportId={report.id} safety={report.safety} resolution={report.safetyResolution} canResolve={user.role === 'lead_engineer'} />
-      <ReportDiscussion reportId={report.id} canComment={user.role === 'lead_engineer' || user.role === 'calibration_engineer'} canMarkRead={user.role === 'lead_engineer'} readAt={report.leadReadAt?.toISOString() ?? null} />
+      <ReportDiscussion reportId={report.id} canComment={user.role === 'lead_engineer' || user.role === 'calibration_engineer' || user.id === report.driverId} canMarkRead={user.role === 'lead_engineer'} isDriver={user.id === report.driverId} readAt={report.leadReadAt?.toISOString() ?? null} />
       {isLead && (
         <SetCorrection
           reportId={report.id}
@@ -99,6 +99,7 @@ export default async function ReportPage(props: { params: Promise<{ id: string }
         isDriver={user.id === report.driverId}
         isLead={isLead}
         read={Boolean(report.leadReadAt)}
+        needsBrake={!report.driveMapId}
       />
     </div>
   )

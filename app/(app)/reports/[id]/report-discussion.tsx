@@ -8,8 +8,8 @@ import { MarkdownNotes } from '@/app/_components/markdown-notes'
 
 interface CommentItem { id: number; body: string; createdAt: string; authorName: string }
 
-/** Engineers' comments on a report, and the lead's "read" mark that ends the driver's edits. */
-export function ReportDiscussion(props: { reportId: number; canComment: boolean; canMarkRead: boolean; readAt: string | null }) {
+/** Engineers' comments on a report, the filing driver's answers, and the lead's "read" mark that ends the driver's edits (not the answers). */
+export function ReportDiscussion(props: { reportId: number; canComment: boolean; canMarkRead: boolean; readAt: string | null; isDriver?: boolean }) {
   const router = useRouter()
   const qc = useQueryClient()
   const key = ['report-comments', props.reportId]
@@ -29,17 +29,18 @@ export function ReportDiscussion(props: { reportId: number; canComment: boolean;
   return (
     <section className="card space-y-2">
       <h2 className="font-semibold">Discussion</h2>
-      <p className="text-xs text-slate-500">{props.readAt ? `Read by a lead engineer on ${formatTime(props.readAt)}; the driver can no longer edit it.` : 'Not yet read by a lead engineer.'}</p>
+      <p className="text-xs text-slate-500">{props.readAt ? `Read by a lead engineer on ${formatTime(props.readAt)}; the driver can no longer edit it, but can still answer here.` : 'Not yet read by a lead engineer.'}</p>
       {props.canMarkRead && !props.readAt && <button type="button" className="btn" onClick={() => read.mutate()}>Mark as read</button>}
       <ul className="space-y-1 text-sm">
         {list.data?.comments.map((c) => <li key={c.id}><span className="text-slate-500">{c.authorName}, {formatTime(c.createdAt)}:</span> <MarkdownNotes text={c.body} /></li>)}
       </ul>
       {props.canComment && (
         <div className="flex gap-2">
-          <input aria-label="Comment on this report" className="field" value={body} onChange={(e) => setBody(e.target.value)} />
-          <button type="button" className="btn" disabled={!body.trim() || add.isPending} onClick={() => add.mutate()}>Comment</button>
+          <input aria-label={props.isDriver ? 'Answer on this report' : 'Comment on this report'} className="field min-w-0" value={body} onChange={(e) => setBody(e.target.value)} />
+          <button type="button" className="btn shrink-0" disabled={!body.trim() || add.isPending} onClick={() => add.mutate()}>{props.isDriver ? 'Answer' : 'Comment'}</button>
         </div>
       )}
+      {add.error && <p role="alert" className="error-text text-sm">{add.error.message}</p>}
     </section>
   )
 }

@@ -1,11 +1,6 @@
 import type { SetRelease, SetStatus } from '@/db/queries/sets'
+import { formatBytes } from '@/app/_components/format'
 
-/** Bytes as the team reads a file size: `12.4 kB`. */
-export function formatBytes(n: number): string {
-  if (n < 1000) return `${n} B`
-  if (n < 1_000_000) return `${(n / 1000).toFixed(1)} kB`
-  return `${(n / 1_000_000).toFixed(1)} MB`
-}
 
 function Digest({ sha256, bytes }: { sha256: string; bytes: number }) {
   return (

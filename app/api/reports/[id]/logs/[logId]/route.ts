@@ -2,9 +2,11 @@ import { withRole } from '@/app/_lib/http/access'
 import { ConflictError, ForbiddenError, NotFoundError } from '@/app/_lib/http/errors'
 import { AFTER_READ, assertOwner, assertUnread, loadReport } from '@/app/_lib/reports/access'
 import { intParam } from '@/app/_lib/http/request'
-import { reanalyseLog } from '@/app/_lib/reports/log-jobs'
+import { nudgeLogWorker, reanalyseLog } from '@/app/_lib/reports/log-jobs'
+import { readJson } from '@/app/_lib/http/request'
+import { logRemapSchema } from '@/app/_schemas/report'
 import { deleteObject } from '@/app/_lib/storage/object-store'
-import { getLog, removeLogUnlessRead } from '@/db/queries/logs'
+import { getLog, remapLogUnlessRead, removeLogUnlessRead } from '@/db/queries/logs'
 import { getSet } from '@/db/queries/sets'
 import { predictEvents } from '@/app/_lib/reports/log-prediction'
 
@@ -36,6 +38,20 @@ export const POST = withRole<{ id: string; logId: string }>(['test_driver', 'lea
   if (user.role !== 'lead_engineer') assertOwner(report, user)
   const queued = await reanalyseLog(log, user.id, 'requested')
   if (!queued) throw new NotFoundError(`Log ${params.logId} of report ${report.id}`)
+  return Response.json({ log: queued }, { status: 202 })
+})
+
+// PATCH /api/reports/:id/logs/:logId { mapping } — the filing driver corrects the column mapping (a failed parse) and the
+// log is analysed again from its stored file, until a lead has read the report; audited with the old and new mapping
+export const PATCH = withRole<{ id: string; logId: string }>(['test_driver'], async (req, { user, params }) => {
+  const { report, log } = await loadLog(params.id, params.logId)
+  if (report.driverId !== user.id) throw new ForbiddenError('Only the driver who filed this report may change how its logs are read')
+  assertUnread(report, 'remap-log')
+  const { mapping } = await readJson(req, logRemapSchema)
+  const queued = await remapLogUnlessRead(log.id, report.id, mapping, user.id)
+  if (queued === 'read') throw new ConflictError(AFTER_READ['remap-log'])
+  if (!queued) throw new NotFoundError(`Log ${params.logId} of report ${report.id}`)
+  nudgeLogWorker()
   return Response.json({ log: queued }, { status: 202 })
 })
 

@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test'
-import { DEMO, signIn } from './helpers'
+import { DEMO, openMapByName, signIn } from './helpers'
 import { expectAccessible } from './axe'
 
 /** The demo tipper program's id, from the programs list. */
@@ -45,9 +45,7 @@ test('an engineer sharpens the tip-in ramp, sees tip-in break the jerk limit, so
   await expectAccessible(page, 'the drivability page')
 
   // The start grade the program declares shows as a band under the full-pedal row in the editor.
-  await page.goto('/maps')
-  await page.getByRole('link', { name: 'Site drive', exact: true }).first().click()
-  await page.goto(`${page.url()}/edit`)
+  await page.goto(`/maps/${await openMapByName(page, 'Site drive')}/edit`)
   await expect(page.getByTestId('grade-band')).toContainText('climb 12 % laden')
 
   await saveTipIn(page, programId, '1500', 'Soften the tip-in for comfort')

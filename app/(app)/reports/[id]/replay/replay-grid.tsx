@@ -21,9 +21,10 @@ export function ReplayGrid({ grid }: { grid: NonNullable<ReplayResult['grid']> }
                 <th scope="row" className="px-1 text-left">{grid.rowAxis[r]} %</th>
                 {grid.colAxis.map((_, c) => {
                   const sec = grid.seconds[r][c]
-                  const shade = max > 0 && sec > 0 ? 0.15 + 0.6 * (sec / max) : 0
+                  // A light tint under dark text at every level (text contrast stays ≥ 4.5:1; the number says the amount).
+                  const shade = max > 0 && sec > 0 ? 0.1 + 0.35 * (sec / max) : 0
                   return (
-                    <td key={c} className="border border-line px-1 text-center" style={shade ? { background: `rgba(180, 35, 24, ${shade.toFixed(2)})`, color: shade > 0.45 ? '#fff' : undefined } : undefined}
+                    <td key={c} className="border border-line px-1 text-center" style={shade ? { background: `rgba(180, 35, 24, ${shade.toFixed(2)})`, color: '#111827' } : undefined}
                       title={sec > 0 ? `${sec.toFixed(1)} s, up to ${Math.round(grid.worstExcessNm[r][c])} N·m more` : undefined}>
                       {sec > 0 ? sec.toFixed(1) : ''}
                     </td>

@@ -5,27 +5,15 @@
  */
 import { spawn, type ChildProcess } from 'node:child_process'
 import fs from 'node:fs'
-import net from 'node:net'
 import path from 'node:path'
 import { DIST_DIR, ROOT } from './report'
 import { signIn as signInAs } from '../support/sign-in'
+import { freePort } from '../support/free-port'
 
 export const DEMO_EMAIL = 'calib@brackwater.example'
 export const DEMO_PASSWORD = 'mapwright-demo'
 
 export interface BenchServer { baseUrl: string; stop: () => Promise<void> }
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = net.createServer()
-    s.once('error', reject)
-    s.listen(0, '127.0.0.1', () => {
-      const a = s.address()
-      const port = typeof a === 'object' && a ? a.port : 0
-      s.close(() => resolve(port))
-    })
-  })
-}
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms))
 

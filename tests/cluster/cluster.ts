@@ -5,26 +5,14 @@
  */
 import { spawn, type ChildProcess } from 'node:child_process'
 import fs from 'node:fs'
-import net from 'node:net'
 import os from 'node:os'
 import path from 'node:path'
 import pg from 'pg'
 import { startLocalServices } from '@/scripts/local-services.mjs'
+import { freePort } from '@/tests/support/free-port'
 
 const ROOT = path.resolve(__dirname, '../..')
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms))
-
-export function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const s = net.createServer()
-    s.once('error', reject)
-    s.listen(0, '127.0.0.1', () => {
-      const a = s.address()
-      const port = typeof a === 'object' && a ? a.port : 0
-      s.close(() => resolve(port))
-    })
-  })
-}
 
 /** A database of its own on the server `adminUrl` names; dropped by the returned function. */
 export async function freshDatabase(adminUrl: string): Promise<{ url: string; drop: () => Promise<void> }> {

@@ -3,7 +3,7 @@
  * Layout and CRC definition are described in docs/map-formats.md.
  */
 import { AXIS_SCALES, headerCrcs, toFixedTable } from './c-fixed-point'
-import { cIdentifier, commentText } from './c-identifier'
+import { cHeaderFile, cIdentifier, commentText, hexU32 } from './c-identifier'
 import { SAFETY_CAUTION } from './caution'
 import { MapInputError } from './errors'
 import type { MapTable } from './table'
@@ -26,7 +26,6 @@ export interface CHeaderMeta {
   generatedAt?: string | Date
 }
 
-const hex = (n: number) => '0x' + n.toString(16).toUpperCase().padStart(8, '0') + 'u'
 
 /** Numbers in lines of at most `per` entries, for readable diffs of the header itself. */
 function rows(nums: number[], per: number, indent: string): string {
@@ -114,15 +113,7 @@ export function toCHeader(table: MapTable, meta: CHeaderMeta): string {
   const valueRows = table.rowAxis
     .map((p, r) => `  { ${fixed.values.slice(r * C, (r + 1) * C).join(', ')} }${r < R - 1 ? ',' : ' '} /* ${p} % */`)
     .join('\n')
-  return [
-    '/*',
-    ...comment.map((l) => (l === '' ? ' *' : ` * ${l}`)),
-    ' */',
-    `#ifndef ${guard}`,
-    `#define ${guard}`,
-    '',
-    '#include <stdint.h>',
-    '',
+  return cHeaderFile(comment, guard, [
     `#define ${ID}_ROWS ${R}`,
     `#define ${ID}_COLS ${C}`,
     `#define ${ID}_PEDAL_SCALE ${fixed.pedalScale}`,
@@ -130,16 +121,13 @@ export function toCHeader(table: MapTable, meta: CHeaderMeta): string {
     `#define ${ID}_VALUE_SCALE ${fixed.valueScale}`,
     `#define ${ID}_REVISION ${meta.revision}u`,
     `#define ${ID}_IS_REGEN ${table.kind === 'regen' ? 1 : 0}`,
-    `#define ${ID}_VALUES_CRC32 ${hex(crc.values)}`,
-    `#define ${ID}_TABLE_CRC32 ${hex(crc.table)}`,
+    `#define ${ID}_VALUES_CRC32 ${hexU32(crc.values)}`,
+    `#define ${ID}_TABLE_CRC32 ${hexU32(crc.table)}`,
     '',
     `static const int32_t ${id}_pedal_axis[${ID}_ROWS] = {\n${rows(fixed.rowAxis, 12, '  ')}\n};`,
     '',
     `static const int32_t ${id}_speed_axis[${ID}_COLS] = {\n${rows(fixed.colAxis, 12, '  ')}\n};`,
     '',
     `static const int32_t ${id}_values[${ID}_ROWS][${ID}_COLS] = {\n${valueRows}\n};`,
-    '',
-    `#endif /* ${guard} */`,
-    '',
-  ].join('\n')
+  ])
 }

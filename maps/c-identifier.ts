@@ -35,3 +35,27 @@ export function commentText(text: string, max = 120): string {
     .replace(/\?(?=\?)/g, '? ')
   return ascii.length > max ? ascii.slice(0, max - 3) + '...' : ascii
 }
+
+/** A 32-bit unsigned C literal in hex. @example hexU32(0xcbf43926) // '0xCBF43926u' */
+export const hexU32 = (n: number) => '0x' + n.toString(16).toUpperCase().padStart(8, '0') + 'u'
+
+/**
+ * A data-only C header: the comment block (an empty line becomes ` *`), the include guard, `<stdint.h>`, the body
+ * lines, the guard's end. One skeleton for every header the packages hold, so they read and guard alike.
+ */
+export function cHeaderFile(comment: readonly string[], guard: string, body: readonly string[]): string {
+  return [
+    '/*',
+    ...comment.map((l) => (l === '' ? ' *' : ` * ${l}`)),
+    ' */',
+    `#ifndef ${guard}`,
+    `#define ${guard}`,
+    '',
+    '#include <stdint.h>',
+    '',
+    ...body,
+    '',
+    `#endif /* ${guard} */`,
+    '',
+  ].join('\n')
+}

@@ -2,7 +2,7 @@
  * Ramp limits in the three package formats: a C header (int32, exact: speed × 10, rates and the
  * band in whole units), CSV (one row per speed breakpoint) and JSON. docs/map-formats.md describes them.
  */
-import { cIdentifier, commentText } from './c-identifier'
+import { cHeaderFile, cIdentifier, commentText, hexU32 } from './c-identifier'
 import { SAFETY_CAUTION } from './caution'
 import { crc32, int32LeBytes } from './crc32'
 import { MapInputError } from './errors'
@@ -28,7 +28,6 @@ function checked(r: RampLimits): RampLimits {
   return parsed.data
 }
 
-const hex = (n: number) => '0x' + n.toString(16).toUpperCase().padStart(8, '0') + 'u'
 
 /** The C header: data only. The CRC covers speed axis, tip-in, tip-out, band and lash rate as int32 LE. */
 export function rampsToCHeader(ramps: RampLimits, meta: RampExportMeta): string {
@@ -54,29 +53,18 @@ export function rampsToCHeader(ramps: RampLimits, meta: RampExportMeta): string 
     `${ID}_CRC32: CRC-32/ISO-HDLC over speed axis, tip-in, tip-out, band, lash rate, each int32 little-endian.`,
   ]
   const guard = `MAPWRIGHT_${ID}_H`
-  return [
-    '/*',
-    ...comment.map((l) => (l === '' ? ' *' : ` * ${l}`)),
-    ' */',
-    `#ifndef ${guard}`,
-    `#define ${guard}`,
-    '',
-    '#include <stdint.h>',
-    '',
+  return cHeaderFile(comment, guard, [
     `#define ${ID}_POINTS ${n}`,
     `#define ${ID}_SPEED_SCALE ${RAMPS_SPEED_SCALE}`,
     `#define ${ID}_LASH_BAND_NM ${r.lashBandNm}`,
     `#define ${ID}_LASH_RATE ${r.lashRateNmPerS}`,
     `#define ${ID}_VERSION ${meta.version}u`,
-    `#define ${ID}_CRC32 ${hex(crc)}`,
+    `#define ${ID}_CRC32 ${hexU32(crc)}`,
     '',
     `static const int32_t ${id}_speed_axis[${ID}_POINTS] = { ${speed.join(', ')} };`,
     `static const int32_t ${id}_tip_in[${ID}_POINTS] = { ${r.tipInNmPerS.join(', ')} };`,
     `static const int32_t ${id}_tip_out[${ID}_POINTS] = { ${r.tipOutNmPerS.join(', ')} };`,
-    '',
-    `#endif /* ${guard} */`,
-    '',
-  ].join('\n')
+  ])
 }
 
 /** CSV: a header row, one row per speed breakpoint, then the band and its rate as two named rows. */

@@ -26,7 +26,6 @@ export interface CHeaderMeta {
   generatedAt?: string | Date
 }
 
-
 /** Numbers in lines of at most `per` entries, for readable diffs of the header itself. */
 function rows(nums: number[], per: number, indent: string): string {
   const out: string[] = []

@@ -78,3 +78,14 @@ test('a lead replays a report’s log through a candidate set', async ({ page })
   await expect(page.getByTestId('replay-plots')).toBeVisible()
   await expectAccessible(page, 'the replay page')
 })
+
+test.describe('on a phone', () => {
+  test.use({ viewport: { width: 390, height: 844 }, isMobile: true })
+  test('the ramp limits page fits the screen (its table scrolls in its own box) and passes axe', async ({ page }) => {
+    await signIn(page, DEMO.calib)
+    await page.goto(`/programs/${await tipperProgram(page)}/ramps`)
+    await expect(page.getByRole('button', { name: 'Save as a new ramp version' })).toBeVisible()
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390)
+    await expectAccessible(page, 'the ramp limits page on a phone')
+  })
+})

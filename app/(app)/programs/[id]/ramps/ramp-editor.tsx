@@ -56,7 +56,7 @@ export function RampEditor(props: { programId: number; initial: RampLimits; from
     <form onSubmit={submit} className="card space-y-3" aria-labelledby="new-ramps" noValidate>
       <h2 id="new-ramps" className="font-semibold">New ramp version{props.fromVersion !== null ? ` (from version ${props.fromVersion})` : ' (starting from ramps scaled to the motor)'}</h2>
       <p className="text-sm text-slate-600">Speeds in km/h (one decimal at most), rates in whole N·m/s at the motor shaft. Rates between speeds are linear and held beyond the ends.</p>
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="text-sm">
           <thead>
             <tr className="text-left">
@@ -72,7 +72,7 @@ export function RampEditor(props: { programId: number; initial: RampLimits; from
                 {(['speed', 'tipIn', 'tipOut'] as const).map((k) => (
                   <td key={k} className="pr-2 py-0.5">
                     <input
-                      className="field w-28 tabular-nums"
+                      className="field w-20 tabular-nums sm:w-28"
                       inputMode="decimal"
                       aria-label={`${k === 'speed' ? 'Road speed' : k === 'tipIn' ? 'Tip-in' : 'Tip-out'}, row ${i + 1}`}
                       value={r[k]}

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { DEMO, signIn } from './helpers'
 
 test.describe('audit trail filters', () => {

@@ -3,10 +3,14 @@
 import AxeBuilder from '@axe-core/playwright'
 import { expect, type Page } from '@playwright/test'
 
-export async function expectAccessible(page: Page, what: string) {
+/** Critical and serious axe violations on the page as it is now, one line per rule. */
+export async function accessibilityProblems(page: Page): Promise<string[]> {
   const result = await new AxeBuilder({ page }).analyze()
-  const bad = result.violations
+  return result.violations
     .filter((v) => v.impact === 'critical' || v.impact === 'serious')
     .map((v) => `${v.impact} ${v.id} ×${v.nodes.length}: ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(' | ')}`)
-  expect(bad, `axe on ${what}`).toEqual([])
+}
+
+export async function expectAccessible(page: Page, what: string) {
+  expect(await accessibilityProblems(page), `axe on ${what}`).toEqual([])
 }

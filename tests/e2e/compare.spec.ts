@@ -1,4 +1,5 @@
-import { expect, test, type Page } from '@playwright/test'
+import { expect, test } from './fixtures'
+import type { Page } from '@playwright/test'
 import { DEMO, mapIdByName, signIn } from './helpers'
 
 const PLOT_WAIT = 30_000

@@ -1,4 +1,5 @@
-import { expect, test, type Page } from '@playwright/test'
+import { expect, test } from './fixtures'
+import type { Page } from '@playwright/test'
 import { expectAccessible } from './axe'
 import { DEMO, gridCell, openEditor, paste, signIn, typeInto } from './helpers'
 

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { DEMO, gridCell, openEditor, openMapByName, paste, signIn, typeInto } from './helpers'
 
 test.describe('map grid editor', () => {

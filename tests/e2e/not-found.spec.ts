@@ -1,4 +1,5 @@
-import { expect, test, type Page } from '@playwright/test'
+import { expect, test } from './fixtures'
+import type { Page } from '@playwright/test'
 import { DEMO, mapIdByName, signIn } from './helpers'
 
 /** Open `path` and expect the 404 page inside the signed-in frame (not a 500, not a blank error). */

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { DEMO, DEMO_PASSWORD, signIn } from './helpers'
 
 // A submit before the page's scripts run is a plain HTML form submission: with scripts off it is

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { DEMO, openEditor, signIn } from './helpers'
 
 test.use({ viewport: { width: 390, height: 844 } })

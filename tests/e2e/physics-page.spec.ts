@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { DEMO, signIn } from './helpers'
 
 test('a test driver runs a launch and a lift-off on the program physics page', async ({ page }) => {

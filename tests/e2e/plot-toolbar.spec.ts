@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { DEMO, signIn } from './helpers'
 
 // A map named with markup, shown in a plot title: the name must stay text (no link, no bold).

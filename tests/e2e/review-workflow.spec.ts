@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { DEMO, editAndSave, openMapByName, openReview, signedInPage } from './helpers'
 
 test('through two roles: submit, send back, resubmit, approve; release is of sets', async ({ browser }) => {

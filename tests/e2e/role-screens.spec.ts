@@ -1,4 +1,5 @@
-import { expect, test, type Page } from '@playwright/test'
+import { expect, test } from './fixtures'
+import type { Page } from '@playwright/test'
 import { expectAccessible } from './axe'
 import { DEMO, editAndSave, gridCell, openMapByName, openReview, signIn, typeInto } from './helpers'
 

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { DEMO, signIn } from './helpers'
 
 test('a set holding a draft the C header refuses still opens, and says why it has no test package', async ({ page }) => {

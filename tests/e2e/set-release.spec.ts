@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto'
-import { expect, test, type Page } from '@playwright/test'
+import { expect, test } from './fixtures'
+import type { Page } from '@playwright/test'
 import { strFromU8, unzipSync } from 'fflate'
 import { DEMO, editAndSave, openMapByName, openReview, signedInPage, signIn } from './helpers'
 

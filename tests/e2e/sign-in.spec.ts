@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { DEMO, signIn } from './helpers'
 
 const NAV = (page: import('@playwright/test').Page) => page.getByRole('navigation', { name: 'Main' })

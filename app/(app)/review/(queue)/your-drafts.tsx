@@ -1,6 +1,6 @@
 'use client'
 import Link from 'next/link'
-import { useRef, useState } from 'react'
+import { useEffect, useRef, useState } from 'react'
 import { useSubmitForReview } from '@/app/_components/use-submit-for-review'
 import { ACTION_LABELS } from '@/domain/review-actions'
 
@@ -19,10 +19,11 @@ export interface DraftRow {
 export function YourDrafts({ drafts }: { drafts: DraftRow[] }) {
   const [done, setDone] = useState<string | null>(null)
   const status = useRef<HTMLParagraphElement>(null)
-  const submit = useSubmitForReview((id) => {
-    setDone(`Submitted ${drafts.find((d) => d.id === id)?.label ?? 'the revision'} for review: the lead engineers have been told.`)
-    setTimeout(() => status.current?.focus(), 0)
-  })
+  const submit = useSubmitForReview((id) => setDone(`Submitted ${drafts.find((d) => d.id === id)?.label ?? 'the revision'} for review: the lead engineers have been told.`))
+  // Once the line has its text (an empty one is hidden and cannot take focus).
+  useEffect(() => {
+    if (done) status.current?.focus()
+  }, [done])
   return (
     <section className="card" aria-labelledby="your-drafts" data-testid="your-drafts">
       <h2 id="your-drafts" className="mb-2 font-semibold">Your drafts</h2>

@@ -1,9 +1,12 @@
 import Link from 'next/link'
+import { MarkdownNotes } from './markdown-notes'
 
 export interface WaitingItem {
   href: string
   label: string
   detail?: string
+  /** Markdown shown under the item: the lead's send-back comment beside the revision it was about. */
+  note?: string
 }
 
 /** One box of "what waits on you" on the overview page. */
@@ -21,6 +24,7 @@ export function WaitingList({ title, items, empty, testId }: { title: string; it
             <li key={i.href}>
               <Link href={i.href} className="text-accent hover:underline">{i.label}</Link>
               {i.detail && <span className="text-slate-600"> — {i.detail}</span>}
+              {i.note && <MarkdownNotes text={i.note} className="mt-1 border-l-2 border-line pl-2" />}
             </li>
           ))}
         </ul>

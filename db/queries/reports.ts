@@ -259,3 +259,10 @@ export async function engineersOfMap(mapId: number): Promise<string[]> {
     .where(and(eq(mapRevisions.mapId, mapId), eq(users.disabled, false)))
   return rows.map((r) => r.email)
 }
+
+/** Whether a drive report with this id exists (a layout's 404 decision, before the page's loading text streams). */
+export async function reportExists(id: number): Promise<boolean> {
+  const db = await getDb()
+  const rows = await db.select({ id: driveReports.id }).from(driveReports).where(eq(driveReports.id, id))
+  return rows.length > 0
+}

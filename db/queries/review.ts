@@ -1,4 +1,4 @@
-import { and, asc, desc, eq } from 'drizzle-orm'
+import { and, asc, desc, eq, sql } from 'drizzle-orm'
 import type { ReviewAction } from '../../domain/review-actions'
 import type { RevisionState } from '../../domain/revision-states'
 import { getDb, type Db } from '../client'
@@ -93,5 +93,35 @@ export async function revisionsInState(state: RevisionState, filter: { authorId?
     .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
     .innerJoin(users, eq(users.id, mapRevisions.authorId))
     .where(filter.authorId ? and(eq(mapRevisions.state, state), eq(mapRevisions.authorId, filter.authorId)) : eq(mapRevisions.state, state))
+    .orderBy(asc(mapRevisions.createdAt))
+}
+
+/**
+ * Maps whose latest revision is a draft by this author, newest first: what they could still submit
+ * (the review queue's "your drafts"). An older draft under a newer revision is history, not work.
+ */
+export async function latestDraftsBy(authorId: number) {
+  const db = await getDb()
+  return db
+    .select({ id: mapRevisions.id, mapId: maps.id, mapName: maps.name, programName: vehiclePrograms.name, number: mapRevisions.number, message: mapRevisions.message, authorId: mapRevisions.authorId, createdAt: mapRevisions.createdAt })
+    .from(mapRevisions)
+    .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .where(and(eq(mapRevisions.authorId, authorId), eq(mapRevisions.state, 'draft'), sql`${mapRevisions.number} = (select max(r.number) from map_revisions r where r.map_id = ${maps.id})`))
+    .orderBy(desc(mapRevisions.createdAt))
+}
+
+/** An author's sent-back revisions, oldest first, each with the newest send-back comment and the lead who wrote it. */
+export async function sentBackTo(authorId: number) {
+  const db = await getDb()
+  const lastSendBack = sql`(select e.id from revision_events e where e.revision_id = ${mapRevisions.id} and e.action = 'send_back' order by e.at desc, e.id desc limit 1)`
+  return db
+    .select({ id: mapRevisions.id, mapId: maps.id, mapName: maps.name, programName: vehiclePrograms.name, number: mapRevisions.number, message: mapRevisions.message, comment: revisionEvents.comment, sentBackBy: users.name, sentBackAt: revisionEvents.at })
+    .from(mapRevisions)
+    .innerJoin(maps, eq(maps.id, mapRevisions.mapId))
+    .innerJoin(vehiclePrograms, eq(vehiclePrograms.id, maps.programId))
+    .leftJoin(revisionEvents, eq(revisionEvents.id, lastSendBack))
+    .leftJoin(users, eq(users.id, revisionEvents.actorId))
+    .where(and(eq(mapRevisions.authorId, authorId), eq(mapRevisions.state, 'returned')))
     .orderBy(asc(mapRevisions.createdAt))
 }

@@ -1,6 +1,6 @@
 import 'server-only'
 import type { WaitingItem } from '@/app/_components/waiting-list'
-import { revisionsInState } from '@/db/queries/review'
+import { revisionsInState, sentBackTo } from '@/db/queries/review'
 import { listReports } from '@/db/queries/reports'
 import { setsAwaitingDrive, unreadReportsOf } from '@/db/queries/tasks'
 import { limitsFromVehicle, validate } from '@/maps'
@@ -32,9 +32,9 @@ export async function waitingFor(user: SessionUser): Promise<WaitingBox[]> {
       ]
     }
     case 'calibration_engineer': {
-      const returned = await revisionsInState('returned', { authorId: user.id })
+      const returned = await sentBackTo(user.id)
       return [
-        { title: 'Sent back to you', items: returned.map((r) => rev(r)), empty: 'Nothing was sent back.', testId: 'waiting-returned' },
+        { title: 'Sent back to you', items: returned.map((r) => ({ ...rev(r, r.sentBackBy ? `sent back by ${r.sentBackBy}` : undefined), note: r.comment ?? undefined })), empty: 'Nothing was sent back.', testId: 'waiting-returned' },
         { title: 'Latest revisions with findings to clear', items: await findingsToClear(), empty: 'No latest revision has an error.', testId: 'waiting-findings' },
       ]
     }

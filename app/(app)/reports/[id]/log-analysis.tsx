@@ -3,6 +3,7 @@ import { useQuery } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
 import type { AnalysisResult } from '@/physics'
 import type { StoredAnalysis } from '@/app/_lib/reports/log-jobs'
+import { EventTable } from './event-table'
 import { LogSlipBasis } from './log-slip-basis'
 import { LogTimePlot } from './log-time-plot'
 import { OccupancyGrid } from './occupancy-grid'
@@ -47,27 +48,7 @@ export function LogAnalysisView(props: { reportId: number; logId: number; setId:
         {a.energy && <Fig label="Energy drawn / regenerated" value={`${fmt(a.energy.drawnKWh, 1)} / ${fmt(a.energy.regeneratedKWh, 1)} kWh`} />}
       </dl>
       <LogTimePlot analysis={a} />
-      {a.events.length > 0 && (
-        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Slip events">
-          <table className="w-full text-sm" data-testid="event-table">
-            <thead className="text-left text-xs uppercase text-slate-500">
-              <tr><th>Event</th><th>Start (s)</th><th>Duration (s)</th><th>Peak slip</th><th>Pedal at start (%)</th><th>Speed at start (km/h)</th></tr>
-            </thead>
-            <tbody>
-              {a.events.slice(0, 200).map((e, i) => (
-                <tr key={i} className="border-t border-line">
-                  <td>{e.kind === 'spin' ? 'Wheel spin' : 'Lock-up'}</td>
-                  <td>{fmt(e.startS, 1)}</td>
-                  <td>{fmt(e.durationS, 2)}</td>
-                  <td>{fmt(e.peakSlip, 3)}</td>
-                  <td>{fmt(e.kind === 'spin' ? e.start.accelPedalPct : e.start.brakePedalPct, 0)}</td>
-                  <td>{fmt(e.start.roadSpeedKmh, 1)}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
-      )}
+      <EventTable events={a.events} />
       {q.data?.predictions && <PredictionTable predictions={q.data.predictions} />}
       {a.occupancy && <OccupancyGrid occupancy={a.occupancy} events={a.events} mapKind={occupancyKind} />}
       <LogSlipBasis a={a} />

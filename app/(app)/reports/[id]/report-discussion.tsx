@@ -35,9 +35,11 @@ export function ReportDiscussion(props: { reportId: number; canComment: boolean;
         {list.data?.comments.map((c) => <li key={c.id}><span className="text-slate-500">{c.authorName}, {formatTime(c.createdAt)}:</span> <MarkdownNotes text={c.body} /></li>)}
       </ul>
       {props.canComment && (
-        <div className="flex gap-2">
-          <input aria-label={props.isDriver ? 'Answer on this report' : 'Comment on this report'} className="field min-w-0" value={body} onChange={(e) => setBody(e.target.value)} />
-          <button type="button" className="btn shrink-0" disabled={!body.trim() || add.isPending} onClick={() => add.mutate()}>{props.isDriver ? 'Answer' : 'Comment'}</button>
+        <div className="space-y-1">
+          {/* Several lines: an answer to "where was the spin?" is rarely one. The text stays until the server has it. */}
+          <label htmlFor={`report-${props.reportId}-comment`} className="label">{props.isDriver ? 'Answer on this report' : 'Comment on this report'}</label>
+          <textarea id={`report-${props.reportId}-comment`} rows={3} className="field w-full" value={body} onChange={(e) => setBody(e.target.value)} />
+          <button type="button" className="btn" disabled={!body.trim() || add.isPending} onClick={() => add.mutate()}>{add.isPending ? 'Sending…' : props.isDriver ? 'Answer' : 'Comment'}</button>
         </div>
       )}
       {add.error && <p role="alert" className="error-text text-sm">{add.error.message}</p>}

@@ -1,8 +1,9 @@
 import Link from 'next/link'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { HttpError } from '@/app/_lib/http/errors'
-import { idOrNull } from '@/app/_lib/http/page-params'
-import { loadReport } from '@/app/_lib/reports/access'
+import { notFound } from 'next/navigation'
+import { idOrNull, pageId } from '@/app/_lib/http/page-params'
+import { getReport } from '@/db/queries/reports'
 import { replayReport, type ReplayAnswer } from '@/app/_lib/reports/replay'
 import { listLogs } from '@/db/queries/logs'
 import { listSets } from '@/db/queries/sets'
@@ -18,7 +19,9 @@ const pct = (x: number) => `${(100 * x).toFixed(1)} %`
 /** /reports/:id/replay?set=&log= — the report's log replayed through a chosen set of the same program. */
 export default async function ReplayPage(props: { params: Promise<{ id: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   await requirePageUser()
-  const report = await loadReport((await props.params).id)
+  // The layout answers 404 first; pages render beside it, so this one says 404 too rather than throw.
+  const report = await getReport(pageId((await props.params).id, 'Report id'))
+  if (!report) notFound()
   const q = await props.searchParams
   const [sets, logs] = await Promise.all([listSets({ programId: report.programId }), listLogs(report.id)])
   const analysed = logs.filter((l) => l.status === 'done')

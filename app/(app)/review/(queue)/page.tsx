@@ -1,13 +1,17 @@
 import Link from 'next/link'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { formatTime } from '@/app/_components/format'
-import { revisionsInState } from '@/db/queries/review'
+import { availableActions } from '@/app/_lib/review/states'
+import { latestDraftsBy, revisionsInState } from '@/db/queries/review'
+import { YourDrafts } from './your-drafts'
 
 export const metadata = { title: 'Review queue' }
 
 export default async function ReviewQueuePage() {
-  await requirePageUser(['lead_engineer', 'calibration_engineer'])
-  const [waiting, approved] = await Promise.all([revisionsInState('in_review'), revisionsInState('approved')])
+  const user = await requirePageUser(['lead_engineer', 'calibration_engineer'])
+  const [waiting, approved, drafts] = await Promise.all([revisionsInState('in_review'), revisionsInState('approved'), latestDraftsBy(user.id)])
+  // The same rule the review API applies: only what this person may submit now gets the button.
+  const mine = drafts.filter((d) => availableActions('draft', user, d.authorId).includes('submit'))
   const section = (title: string, rows: typeof waiting, empty: string) => (
     <section className="card">
       <h2 className="mb-2 font-semibold">{title}</h2>
@@ -30,6 +34,7 @@ export default async function ReviewQueuePage() {
   return (
     <div className="space-y-4">
       <h1 className="text-2xl font-bold">Review queue</h1>
+      <YourDrafts drafts={mine.map((d) => ({ id: d.id, label: `${d.programName} · ${d.mapName} r${d.number}`, message: d.message, savedAt: formatTime(d.createdAt) }))} />
       {section('Waiting for review', waiting, 'Nothing is waiting for review.')}
       {section('Approved, not yet released', approved, 'No approved revision is waiting to be released.')}
       <p className="text-sm text-slate-600">

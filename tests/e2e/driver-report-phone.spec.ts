@@ -1,6 +1,7 @@
 // A test driver on a phone (390 × 844) reads their report: the slip events as one block per event
 // (no sideways scroll), and answers in a labelled multi-line box that keeps the text when the send fails.
-import { expect, test, type Page } from '@playwright/test'
+import { expect, test } from './fixtures'
+import type { Page } from '@playwright/test'
 import { expectAccessible } from './axe'
 import { DEMO, signIn } from './helpers'
 

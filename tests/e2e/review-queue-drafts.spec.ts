@@ -1,7 +1,7 @@
 // The calibration engineer's own drafts in the review queue, submitted from there; the lead's
 // send-back comment beside the revision on the engineer's overview; and the loading pages of the
 // report, replay and review pages still answering 404 and 307 before anything streams.
-import { expect, test } from '@playwright/test'
+import { expect, test } from './fixtures'
 import { expectAccessible } from './axe'
 import { DEMO, editAndSave, openMapByName, signedInPage, signIn } from './helpers'
 

@@ -1,6 +1,6 @@
 import { expect, test } from './fixtures'
 import type { Page } from '@playwright/test'
-import { DEMO, mapIdByName, signIn } from './helpers'
+import { DEMO, docShot, mapIdByName, signIn } from './helpers'
 
 const PLOT_WAIT = 30_000
 
@@ -38,7 +38,7 @@ test.describe('comparing two revisions', () => {
     await expect(heatB).toHaveAttribute('data-spin-count', '14')
     await expect(page.getByTestId('slip-heatmap-a')).toHaveAttribute('data-spin-count', '20')
     await expect(heatB.locator('.main-svg').first()).toBeVisible()
-    await page.screenshot({ path: 'docs/compare.png', fullPage: true })
+    await page.screenshot({ path: docShot('compare.png'), fullPage: true })
 
     await page.getByRole('combobox', { name: 'Load case' }).selectOption('laden')
     await expect(heatB).toHaveAttribute('data-spin-count', '0', { timeout: PLOT_WAIT })

@@ -9,7 +9,7 @@ import { expect, test } from './fixtures'
 import type { Page } from '@playwright/test'
 import { generateLog } from '../support/log-generator'
 import { expectAccessible } from './axe'
-import { DEMO, mapIdByName, signIn, signedInPage } from './helpers'
+import { DEMO, docShot, fileReportFromOverview, mapIdByName, signIn, signedInPage } from './helpers'
 
 test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true })
 
@@ -26,27 +26,6 @@ function logFile(name: string): string {
   const file = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'mw-driver-')), name)
   fs.writeFileSync(file, generateLog({ seed: 5, durationS: 60, rateHz: 20, header: THEIRS }).csv)
   return file
-}
-
-/** From the overview's first "Drive this set" link to a filed report; returns the report's id. */
-async function fileReportFromOverview(page: Page): Promise<number> {
-  await page.goto('/')
-  const drive = page.getByRole('link', { name: /^Drive this set: / }).first()
-  const setName = ((await drive.getAttribute('aria-label')) ?? '').replace('Drive this set: ', '')
-  const setNumber = setName.split('Set ')[1]
-  await drive.click()
-  await expect(page).toHaveURL(/\/reports\/new\?set=\d+$/)
-  // The set the link named is chosen: its summary shows, naming it.
-  await expect(page.getByTestId('set-summary')).toContainText(`set ${setNumber}`)
-  await page.getByLabel('Vehicle unit').fill('BX-07')
-  await page.getByLabel('Route or course').fill('Demo quarry, ramp 3')
-  await page.getByLabel('Road surface').selectOption('gravel')
-  await page.getByLabel('Weather').fill('damp')
-  await page.getByLabel('Ambient temperature (°C)').fill('5')
-  for (const r of ['Launch', 'Tip-in', 'Steady pedal control', 'Lift-off regen', 'Brake blending']) await page.getByLabel(`${r} 3`).check({ force: true })
-  await page.getByRole('button', { name: 'File report' }).click()
-  await expect(page.getByText('Report filed.')).toBeVisible()
-  return Number(new URL(page.url()).pathname.split('/')[2])
 }
 
 test('"Drive this set" on the overview opens the report form with that set chosen; a severity label stays whole', async ({ page }) => {
@@ -89,7 +68,7 @@ test('a log with other column names is mapped from its own header; a failed log 
   await expect(form).toBeVisible()
   await expect(form.getByText('(required)', { exact: true })).toHaveCount(3)
   await checkPage(page, 'the column mapping form')
-  await form.screenshot({ path: 'docs/driver-column-mapping.png' })
+  await form.screenshot({ path: docShot('driver-column-mapping.png') })
   // Sending it short of a required column says what is missing and sends nothing.
   await form.getByRole('button', { name: 'Upload with these columns' }).click()
   await expect(form.getByRole('alert')).toContainText('Time is required')
@@ -144,7 +123,7 @@ test('every table and list fits the phone: reports list, measured against predic
     expect(open && open.x >= 0 && open.x + open.width <= 390, `Open link of row ${i}`).toBe(true)
   }
   await checkPage(page, 'the reports list')
-  await page.screenshot({ path: 'docs/driver-reports-phone.png' })
+  await page.screenshot({ path: docShot('driver-reports-phone.png') })
 
   // The demo report with a log on a released set: the prediction, one block per event, and the plot.
   await rows.filter({ hasText: 'Dara Driver' }).filter({ has: page.getByText(/Site drive r2/) }).first().getByRole('link', { name: 'Open' }).click()

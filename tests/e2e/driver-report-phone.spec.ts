@@ -3,7 +3,7 @@
 import { expect, test } from './fixtures'
 import type { Page } from '@playwright/test'
 import { expectAccessible } from './axe'
-import { DEMO, signIn } from './helpers'
+import { DEMO, docShot, signIn } from './helpers'
 
 test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true })
 
@@ -38,7 +38,7 @@ test('the slip events of a log fit the phone, one block per event', async ({ pag
     expect(box && box.x >= 0 && box.x + box.width <= 390, `event block ${i}`).toBe(true)
   }
   await checkPage(page, 'a report with slip events on a phone')
-  await list.screenshot({ path: 'docs/driver-events-phone.png' })
+  await list.screenshot({ path: docShot('driver-events-phone.png') })
 })
 
 test('the driver’s answer is a labelled multi-line box that keeps its text when the send fails', async ({ page }) => {
@@ -63,5 +63,5 @@ test('the driver’s answer is a labelled multi-line box that keeps its text whe
   await expect(page.getByText('The trailer was empty; the spin stopped at 8 km/h.')).toBeVisible()
   await expect(box).toHaveValue('')
   await checkPage(page, 'a report with the driver’s answer')
-  await page.locator('section').filter({ has: page.getByRole('heading', { name: 'Discussion' }) }).screenshot({ path: 'docs/driver-answer-phone.png' })
+  await page.locator('section').filter({ has: page.getByRole('heading', { name: 'Discussion' }) }).screenshot({ path: docShot('driver-answer-phone.png') })
 })

@@ -95,3 +95,29 @@ export async function openReview(page: Page, mapId: number, n: number) {
   await page.getByTestId(`history-row-${n}`).getByRole('link', { name: 'Review' }).click()
   await expect(page.getByRole('heading', { level: 1 })).toContainText(`r${n}`)
 }
+
+/** From the overview's first "Drive this set" link to a filed report; returns the report's id. */
+export async function fileReportFromOverview(page: Page): Promise<number> {
+  await page.goto('/')
+  const drive = page.getByRole('link', { name: /^Drive this set: / }).first()
+  const setName = ((await drive.getAttribute('aria-label')) ?? '').replace('Drive this set: ', '')
+  const setNumber = setName.split('Set ')[1]
+  await drive.click()
+  await expect(page).toHaveURL(/\/reports\/new\?set=\d+$/)
+  // The set the link named is chosen: its summary shows, naming it.
+  await expect(page.getByTestId('set-summary')).toContainText(`set ${setNumber}`)
+  await page.getByLabel('Vehicle unit').fill('BX-07')
+  await page.getByLabel('Route or course').fill('Demo quarry, ramp 3')
+  await page.getByLabel('Road surface').selectOption('gravel')
+  await page.getByLabel('Weather').fill('damp')
+  await page.getByLabel('Ambient temperature (°C)').fill('5')
+  for (const r of ['Launch', 'Tip-in', 'Steady pedal control', 'Lift-off regen', 'Brake blending']) await page.getByLabel(`${r} 3`).check({ force: true })
+  await page.getByRole('button', { name: 'File report' }).click()
+  await expect(page.getByText('Report filed.')).toBeVisible()
+  return Number(new URL(page.url()).pathname.split('/')[2])
+}
+
+/** Where a guide's screenshot goes: docs/ when DOCS_SCREENSHOTS=1 (to refresh the guides), else test-results/. */
+export function docShot(name: string): string {
+  return process.env.DOCS_SCREENSHOTS === '1' ? `docs/${name}` : `test-results/docs/${name}`
+}

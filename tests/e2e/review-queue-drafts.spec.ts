@@ -3,7 +3,7 @@
 // report, replay and review pages still answering 404 and 307 before anything streams.
 import { expect, test } from './fixtures'
 import { expectAccessible } from './axe'
-import { DEMO, editAndSave, openMapByName, signedInPage, signIn } from './helpers'
+import { DEMO, docShot, editAndSave, openMapByName, signedInPage, signIn } from './helpers'
 
 test.use({ viewport: { width: 1440, height: 900 } })
 
@@ -18,7 +18,7 @@ test('an engineer submits a draft from the review queue, and reads the lead’s 
   const row = drafts.getByRole('listitem').filter({ hasText: `Road regen r${n}` })
   await expect(row).toContainText('“Softer lift-off regen at 15 km/h”')
   await expectAccessible(engineer, 'the review queue with the engineer’s drafts')
-  await drafts.screenshot({ path: 'docs/review-queue-drafts.png' })
+  await drafts.screenshot({ path: docShot('review-queue-drafts.png') })
   const href = await row.getByRole('link').getAttribute('href')
 
   await row.getByRole('button', { name: /^Submit for review: .* Road regen r\d+$/ }).click()
@@ -45,7 +45,7 @@ test('an engineer submits a draft from the review queue, and reads the lead’s 
   await expect(back.locator('strong')).toHaveText('Halve')
   await expect(back).not.toContainText('**')
   await expectAccessible(engineer, 'the engineer’s overview with a sent-back comment')
-  await engineer.getByTestId('waiting-returned').screenshot({ path: 'docs/overview-sent-back.png' })
+  await engineer.getByTestId('waiting-returned').screenshot({ path: docShot('overview-sent-back.png') })
   await engineer.context().close()
 })
 

@@ -1,7 +1,7 @@
 import { expect, test } from './fixtures'
 import type { Page } from '@playwright/test'
 import { expectAccessible } from './axe'
-import { DEMO, editAndSave, gridCell, openMapByName, openReview, signIn, typeInto } from './helpers'
+import { DEMO, docShot, editAndSave, gridCell, openMapByName, openReview, signIn, typeInto } from './helpers'
 
 /**
  * A one-newton-metre cut of a cell that keeps the map valid for the specs that build on it: the
@@ -70,7 +70,7 @@ test.describe('every role, smooth in the browser', () => {
     await expect(cmp).toContainText(/cells changed/)
     await expectAccessible(page, 'a released set')
     await page.setViewportSize({ width: 1440, height: 900 })
-    await cmp.screenshot({ path: 'docs/release-comparison.png' })
+    await cmp.screenshot({ path: docShot('release-comparison.png') })
 
     await page.getByLabel('Reason (required)').fill('Checking the confirmation only')
     await page.getByRole('button', { name: 'Withdraw the release' }).click()
@@ -134,7 +134,7 @@ test.describe('every role, smooth in the browser', () => {
     await expect(page.getByTestId('audit-paging')).toContainText(/Page 1 of \d+/)
     await expectAccessible(page, 'the audit trail')
     await page.setViewportSize({ width: 1440, height: 900 })
-    await page.screenshot({ path: 'docs/audit-trail.png' })
+    await page.screenshot({ path: docShot('audit-trail.png') })
     // Five to a page, so there is an older page whatever ran before.
     await page.goto('/admin/audit?limit=5')
     await page.getByRole('link', { name: 'Older' }).click()

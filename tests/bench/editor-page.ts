@@ -69,7 +69,7 @@ async function editCell(page: Page, value: string): Promise<EditTiming> {
     watch(document.querySelector(plot), 'plot')
   }, { plot: PLOT })
   await page.keyboard.press('Enter') // open the editor
-  await page.locator('.handsontableInputHolder.ht_editor_visible').waitFor()
+  await page.locator('.handsontableInputHolder:not(.ht_editor_hidden)').waitFor()
   await page.keyboard.press('ControlOrMeta+A')
   await page.keyboard.type(value)
   // The clock starts at the committing Enter: a listener taken before the opening Enter (the editor's

@@ -53,6 +53,9 @@ interface EditTiming { both: number; findings: number; plot: number }
 
 /** Types a value into the cell; returns ms from the committing Enter keydown to the first change of the findings list and of the plot. */
 async function editCell(page: Page, value: string): Promise<EditTiming> {
+  // The grid takes two clicks on one cell within 500 ms as a double click (which opens the editor, so the
+  // Enter below would commit at once and Ctrl+A select the whole grid): let the previous click age first.
+  await page.waitForTimeout(600)
   await page.locator(CELL).click()
   await page.evaluate(({ plot }) => {
     const w = window as unknown as { __bench: { t0: number; findings: number; plot: number } }
@@ -64,11 +67,17 @@ async function editCell(page: Page, value: string): Promise<EditTiming> {
     }
     watch(document.querySelector('[data-testid="findings-list"]')?.closest('section') ?? null, 'findings')
     watch(document.querySelector(plot), 'plot')
-    window.addEventListener('keydown', (e) => { if (e.key === 'Enter' && document.querySelector('.handsontableInputHolder textarea')) w.__bench.t0 = e.timeStamp }, { capture: true, once: true })
   }, { plot: PLOT })
   await page.keyboard.press('Enter') // open the editor
+  await page.locator('.handsontableInputHolder:not(.ht_editor_hidden)').waitFor()
   await page.keyboard.press('ControlOrMeta+A')
   await page.keyboard.type(value)
+  // The clock starts at the committing Enter: a listener taken before the opening Enter (the editor's
+  // field exists from the first selection) started it there, and counted the typing too.
+  await page.evaluate(() => {
+    const w = window as unknown as { __bench: { t0: number } }
+    window.addEventListener('keydown', (e) => { if (e.key === 'Enter') w.__bench.t0 = e.timeStamp }, { capture: true, once: true })
+  })
   await page.keyboard.press('Enter') // commit: the timed edit
   const h = await page.waitForFunction(() => {
     const b = (window as unknown as { __bench: { t0: number; findings: number; plot: number } }).__bench
@@ -134,7 +143,7 @@ export async function runEditorPage(shared?: BenchServer): Promise<BenchResult> 
     figures.push(
       figure(BENCH, 'JS loaded before the grid is editable', jsBytes / 1000, 'kB', undefined, 'compressed bytes on the wire, incl. the lazy grid chunk'),
       figure(BENCH, 'navigation → editable grid', median(loads), 'ms', { op: '<', limit: 1500 }, `median of ${LOADS}`),
-      figure(BENCH, 'cell edit → findings and plot updated', median(edits.map((e) => e.both)), 'ms', { op: '<', limit: 100 }, `median of ${EDITS}`),
+      figure(BENCH, 'cell edit → findings and plot updated', median(edits.map((e) => e.both)), 'ms', { op: '<=', limit: 30 }, `median of ${EDITS}`),
       figure(BENCH, 'cell edit → findings list changed', median(edits.map((e) => e.findings)), 'ms'),
       figure(BENCH, 'cell edit → small plot changed', median(edits.map((e) => e.plot)), 'ms'),
     )

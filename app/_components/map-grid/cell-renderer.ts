@@ -81,5 +81,9 @@ export function makeRenderer(store: RenderStore): Renderer {
     TD.setAttribute('data-cell', `${row}-${col}`)
     // The grid marks the selected cell with aria-selected, which a plain table cell may not carry.
     TD.setAttribute('role', 'gridcell')
+    // The grid moves the browser's focus to the selected cell; Handsontable makes cells focusable only
+    // with its ARIA tags, which are off (see map-grid.tsx). Without this the focus stayed on the page's
+    // body, and Tab went into the grid's own focus catcher instead of leaving it.
+    TD.tabIndex = -1
   }
 }

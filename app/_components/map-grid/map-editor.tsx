@@ -129,7 +129,7 @@ export default function MapEditor({ mapId, limits, vehicle = null, designLateral
       </div>
       <Toolbar table={table} range={range} units={units} limits={limits} onApply={commit} undo={undo} redo={redo} canUndo={draft.canUndo} canRedo={draft.canRedo} onMessage={showError} />
       <p className="text-xs text-slate-600" id="grid-keys-help">
-        In the grid: arrow keys move, Enter edits; Delete clears the selected cells to {clearedText(units)}, Ctrl+D fills down, Ctrl+R fills right, Ctrl+Z undoes.
+        In the grid: arrow keys move, Enter edits, Tab leaves the grid; Delete clears the selected cells to {clearedText(units)}, Ctrl+D fills down, Ctrl+R fills right, Ctrl+Z undoes.
       </p>
       {notice && (
         <p role={notice.tone === 'error' ? 'alert' : 'status'} className={notice.tone === 'error' ? 'error-text text-sm' : 'rounded-md bg-accent-soft px-3 py-2 text-sm'} data-testid="editor-message">

@@ -82,6 +82,8 @@ const GridHost = memo(function GridHost({ hotRef, settings }: { hotRef: RefObjec
  * like RenderStore, because Handsontable calls its hooks outside React's render.
  */
 class GridBox {
+  /** Set while a few changed cells have been redrawn by hand: the full render that follows is skipped. */
+  skipRender = false
   constructor(
     public props: MapGridProps,
     public shown: GridCell[][],
@@ -115,6 +117,21 @@ function gridSettings(box: GridBox, data: GridCell[][], renderer: ReturnType<typ
         ch[3] = gridCellOf(next, box.props.units, ch[0], ch[1])
         box.shown[ch[0]][ch[1]] = ch[3] as GridCell
       }
+    },
+    // Handsontable redraws every rendered cell (and its frozen copies) after any data change. For a
+    // few cells, redraw just those here, once the data holds the new values, and skip that render.
+    beforeChangeRender(this: Hot, changes: unknown[][]) {
+      if (changes.length > CELL_RENDER_LIMIT) return
+      renderCells(this, renderer, changes.map((ch) => [Number(ch[0]), Number(ch[1])]))
+      box.skipRender = true
+    },
+    beforeViewRender(_forced: boolean, skip: { skipRender?: boolean }) {
+      if (!box.skipRender) return
+      box.skipRender = false
+      skip.skipRender = true
+    },
+    afterChange() {
+      box.skipRender = false // the render was suspended (a batch): never skip a later, unrelated one
     },
     beforeKeyDown(this: Hot, e: KeyboardEvent) {
       const cmd = gridCommand(e)
@@ -191,9 +208,17 @@ export default function MapGrid(props: MapGridProps) {
       h.updateSettings({ data: next.map((r) => [...r]), maxRows: next.length, maxCols: next[0]?.length ?? 0, height: heightFor(next.length), width: widthFor(next[0]?.length ?? 0) })
       return
     }
-    if (sync.cells.length > 0) h.setDataAtCell(sync.cells, SYNC) // renders the grid with the new store
-    else if (visualChanged || markKeys.length > CELL_RENDER_LIMIT) h.render()
-    else renderCells(h, renderer, markKeys)
+    const cells = markKeys.map((k) => k.split(':').map(Number) as [number, number])
+    if (visualChanged || cells.length > CELL_RENDER_LIMIT) {
+      // New colours or many new marks: one full render with the new store, after the changed values.
+      h.batch(() => {
+        if (sync.cells.length > 0) h.setDataAtCell(sync.cells, SYNC)
+        h.render()
+      })
+      return
+    }
+    if (sync.cells.length > 0) h.setDataAtCell(sync.cells, SYNC) // redraws those cells (beforeChangeRender)
+    renderCells(h, renderer, cells)
   }, [store, renderer, box, table, units, scale, findings, describe, cellShade])
 
   // One Tab stop: Tab and Shift+Tab go to the page's next or previous control, never to another
@@ -251,10 +276,9 @@ export default function MapGrid(props: MapGridProps) {
 
 type Hot = NonNullable<HotTableRef['hotInstance']>
 
-/** Re-run the renderer on the few cells whose finding mark changed (each copy of a frozen cell too). */
-function renderCells(h: Hot, render: ReturnType<typeof makeRenderer>, keys: string[]): void {
-  for (const key of keys) {
-    const [row, col] = key.split(':').map(Number)
+/** Re-run the renderer on a few cells (a changed value or finding mark), each copy of a frozen cell too. */
+function renderCells(h: Hot, render: ReturnType<typeof makeRenderer>, cells: [number, number][]): void {
+  for (const [row, col] of cells) {
     const value = h.getDataAtCell(row, col)
     for (const td of cellElements(h, row, col)) render(h, td, row, col, col, value, h.getCellMeta(row, col))
   }

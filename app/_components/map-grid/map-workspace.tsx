@@ -40,6 +40,7 @@ export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, on
     },
     [onGridApi],
   )
+  const onPick = useCallback((r: number, c: number) => api?.selectCell(r, c), [api])
   // The plot follows the selected cell; with nothing selected it shows full pedal / top speed.
   const row = range && range.r0 >= 1 ? Math.min(range.r0, table.rowAxis.length) - 1 : table.rowAxis.length - 1
   const col = range && range.c0 >= 1 ? Math.min(range.c0, table.colAxis.length) - 1 : 0
@@ -61,7 +62,7 @@ export function MapWorkspace({ table, units, limits, range, onSelect, onEdit, on
         </div>
         <SmallPlot table={table} units={units} limits={limits} along={along} index={along === 'speed' ? row : col} />
       </div>
-      <FindingsList findings={findings} describe={describe} onPick={(r, c) => api?.selectCell(r, c)} />
+      <FindingsList findings={findings} describe={describe} onPick={onPick} />
     </div>
   )
 }

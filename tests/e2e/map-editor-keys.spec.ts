@@ -1,5 +1,4 @@
 import { expect, test } from './fixtures'
-import type { Page } from '@playwright/test'
 import { expectAccessible } from './axe'
 import { DEMO, gridCell, openEditor, paste, signIn, typeInto } from './helpers'
 

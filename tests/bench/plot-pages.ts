@@ -6,7 +6,7 @@
  * median load: the HTML, the plot library's chunk (fetch and run), and the plots after it.
  *
  * - compare (two revisions of one drive map, empty on gravel): 2-D = the change table and both slip
- *   heat maps drawn; usable = that plus the surfaces A and B and the difference drawn in WebGL.
+ *   heat maps drawn; usable = that plus the difference heat map and the surfaces A and B drawn in WebGL.
  * - physics (the first demo program): usable = the traction table and the first plot drawn.
  */
 import type { Browser, Page } from 'playwright-core'
@@ -85,7 +85,7 @@ export async function runPlotPages(shared?: BenchServer): Promise<BenchResult> {
 
     const compareUrl = `/maps/compare?a=${pair.id}:${last - 1}&b=${pair.id}:${last}&loadCase=empty&surface=gravel`
     const twoD: Goal = { name: '2-D views', all: [{ sel: '[data-testid="change-table"] tbody tr', count: 1 }, { sel: '[data-testid="slip-heatmap-a"] .main-svg', count: 1 }, { sel: '[data-testid="slip-heatmap-b"] .main-svg', count: 1 }] }
-    const surfaces: Goal = { name: 'surfaces', all: [{ sel: '.js-plotly-plot .gl-container canvas', count: 3 }] }
+    const surfaces: Goal = { name: 'surfaces', all: [{ sel: '[data-testid="compare-surfaces"] .js-plotly-plot .gl-container canvas', count: 2 }, { sel: '[data-testid="difference-heatmap"] .main-svg', count: 1 }] }
     const compare = await measure(browser, baseUrl, cookies, compareUrl, [twoD, surfaces])
     const compareAll = compare.map((l) => Math.max(l.ms[twoD.name], l.ms[surfaces.name]))
 

@@ -33,4 +33,3 @@ export const SLIP_SCALE: Scale = [
 export const BEYOND_PEAK = '#b42318'
 export const LIMIT_COLOUR = '#b42318'
 export const SOLID_BEYOND: Scale = [[0, BEYOND_PEAK], [1, BEYOND_PEAK]]
-export const SOLID_LIMIT: Scale = [[0, LIMIT_COLOUR], [1, LIMIT_COLOUR]]

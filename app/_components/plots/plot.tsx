@@ -43,13 +43,20 @@ const BASE_LAYOUT: Partial<Layout> = {
   uirevision: 'keep',
 }
 
+/**
+ * WebGL figures (3-D surfaces) at the screen's own pixel density. Plotly's default draws them at
+ * twice it: on an ordinary screen that is four times the pixels, which software WebGL (no GPU)
+ * pays on every redraw, for a sharpness the screen cannot show.
+ */
+const glPixelRatio = () => (typeof window === 'undefined' ? 2 : Math.min(2, Math.max(1, window.devicePixelRatio || 1)))
+
 export function Plot({ data, layout, filename, height = 380, onRelayout, className = '' }: PlotProps) {
   return (
     <div className={className} style={{ height }}>
       <PlotlyComponent
         data={dataAsText(data)}
         layout={layoutAsText({ ...BASE_LAYOUT, ...layout })}
-        config={plotConfig(filename)}
+        config={{ ...plotConfig(filename), plotGlPixelRatio: glPixelRatio() }}
         onRelayout={onRelayout}
         useResizeHandler
         style={{ width: '100%', height: '100%' }}

@@ -4,6 +4,10 @@ import { tableMemo } from './table-memo'
 
 /** A few parameter sets per table: a program gains a parameter version now and then, not per request. */
 const memo = tableMemo<Finding[]>(4)
+const jsonMemo = tableMemo<string>(4)
+
+/** What the findings depend on besides the table: the limits the parameters give. */
+const limitsKey = (params: VehicleParams) => JSON.stringify(limitsFromVehicle(params))
 
 /**
  * Findings of a stored revision under a program's parameters. Both are immutable once stored (a
@@ -13,4 +17,9 @@ const memo = tableMemo<Finding[]>(4)
 export function revisionFindings(table: MapTable, params: VehicleParams): Finding[] {
   const limits = limitsFromVehicle(params)
   return memo(table, JSON.stringify(limits), () => validate(table, limits))
+}
+
+/** The same findings as JSON text, memoised the same way (a map read splices it into its answer). */
+export function revisionFindingsJson(table: MapTable, params: VehicleParams): string {
+  return jsonMemo(table, limitsKey(params), () => JSON.stringify(revisionFindings(table, params)))
 }

@@ -6,6 +6,8 @@ import * as revisionsRoute from '@/app/api/maps/[id]/revisions/route'
 import * as sessionRoute from '@/app/api/session/route'
 import { REVISION_TABLE_CACHE_SIZE, revisionTable, revisionTableCached } from '@/db/queries/revision-tables'
 import { getProgram, updateProgram } from '@/db/queries/programs'
+import { getMapWithLatest } from '@/db/queries/maps'
+import { revisionFindings } from '@/app/_lib/maps/revision-findings'
 import { validate, limitsFromVehicle } from '@/maps'
 import { getDb, getHandle } from '@/db/client'
 import { executePrepared } from '@/db/prepared'
@@ -42,6 +44,18 @@ describe('revision content cache', () => {
     const after = await call(mapRoute.GET, { cookie, params: { id: driveId } })
     expect(after.body.findings).toEqual(validate(after.body.latest.table, limitsFromVehicle(weaker)))
     expect(after.body.findings).not.toEqual(before.body.findings)
+  })
+
+  it('writes the answer text exactly as serialising the whole read would, table and findings spliced in', async () => {
+    const { author, driveId } = await tipperWithMaps()
+    const cookie = await sessionCookie(author)
+    const read = () => mapRoute.GET(new Request('http://127.0.0.1:3000/api/maps', { headers: { cookie } }), { params: Promise.resolve({ id: String(driveId) }) })
+    const found = (await getMapWithLatest(Number(driveId)))!
+    const whole = JSON.stringify({ map: found.map, latest: found.latest, findings: revisionFindings(found.latest.table, found.map.programParams) })
+    const first = await read()
+    expect(first.headers.get('content-type')).toBe('application/json')
+    expect(await first.text()).toBe(whole)
+    expect(await (await read()).text()).toBe(whole) // the second read splices the cached texts
   })
 
   it('hands out frozen tables, so no caller can change what the next one reads', async () => {

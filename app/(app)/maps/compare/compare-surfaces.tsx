@@ -1,8 +1,8 @@
 'use client'
-/** A and B as 3D surfaces with one shared camera and colour range, and the difference B − A beside the change table. */
+/** A and B as 3D surfaces with one shared camera and colour range, and the difference B − A as a heat map beside the change table. */
 import { useMemo, useState } from 'react'
 import { ChangeTable, type ChangeRow } from '@/app/_components/plots/change-table'
-import { DIFF_SCALE } from '@/app/_components/plots/palette'
+import { DifferenceHeatmap } from '@/app/_components/plots/difference-heatmap'
 import { SurfacePending } from '@/app/_components/plots/surface-pending'
 import { SurfacePlot, type Camera } from '@/app/_components/plots/surface-plot'
 import { useSurfacesLater } from '@/app/_components/plots/use-surfaces-later'
@@ -27,23 +27,23 @@ function range(tables: MapTable[]) {
   return { min, max: max > min ? max : min + 1 }
 }
 
-/** B − A on A's grid: zero where nothing changed. */
-function differenceTable(a: MapTable, d: MapDiff): MapTable {
+/** B − A on A's grid (zero where nothing changed), and which cells changed. */
+function difference(a: MapTable, d: MapDiff): { table: MapTable; changed: boolean[][] } {
   const values = a.values.map((row) => row.map(() => 0))
-  for (const c of d.changed) values[c.row][c.col] = c.delta
-  return { ...a, values }
+  const changed = a.values.map((row) => row.map(() => false))
+  for (const c of d.changed) { values[c.row][c.col] = c.delta; changed[c.row][c.col] = true }
+  return { table: { ...a, values }, changed }
 }
 
 const limitOf = (o?: MapOverlay) => o?.tractionLimitBySpeed.map((p) => p.tractionLimitNm)
 
 export function CompareSurfaces({ a, b, diff, units, limits, rows }: Props) {
-  // One camera for all three surfaces: a drag on any of them sets it, the others follow.
+  // One camera for both surfaces: a drag on either sets it, the other follows.
   const [camera, setCamera] = useState<Camera | undefined>(undefined)
   const shared = useMemo(() => range([a.table, b.table]), [a.table, b.table])
-  const delta = useMemo(() => differenceTable(a.table, diff), [a.table, diff])
-  const dMax = Math.max(1, ...diff.changed.map((c) => Math.abs(c.delta)).filter(Number.isFinite))
+  const delta = useMemo(() => difference(a.table, diff), [a.table, diff])
   const common = { units, camera, onCamera: setCamera, range: shared }
-  // The slip heat maps and the change table come first; the three WebGL surfaces follow.
+  // The heat maps and the change table come first; the two WebGL surfaces follow.
   const draw = useSurfacesLater()
   const titleA = `A: ${a.mapName} r${a.number}`
   const titleB = `B: ${b.mapName} r${b.number}`
@@ -54,11 +54,8 @@ export function CompareSurfaces({ a, b, diff, units, limits, rows }: Props) {
         <div className="card p-2">{draw ? <SurfacePlot {...common} table={b.table} title={titleB} filename={`map-${b.mapId}-r${b.number}`} limitBySpeed={limits ? limitOf(limits.b) : undefined} /> : <SurfacePending />}</div>
       </div>
       <section className="grid grid-cols-[minmax(0,1fr)] gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
-        <div className="card p-2">
-          {draw ? (
-            <SurfacePlot units={units} camera={camera} onCamera={setCamera} table={delta} range={{ min: -dMax, max: dMax }} colorscale={DIFF_SCALE} diverging
-              title="Difference B − A" zLabel={`B − A (${units.torque})`} filename={`difference-${a.mapId}-r${a.number}-${b.mapId}-r${b.number}`} />
-          ) : <SurfacePending />}
+        <div className="card p-2" data-testid="difference-heatmap">
+          <DifferenceHeatmap delta={delta.table} changed={delta.changed} units={units} title="Difference B − A" filename={`difference-${a.mapId}-r${a.number}-${b.mapId}-r${b.number}`} />
         </div>
         <div className="card space-y-2">
           <h2 className="font-semibold">Changed cells, largest first</h2>

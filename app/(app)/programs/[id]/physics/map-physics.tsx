@@ -1,5 +1,5 @@
 'use client'
-/** The chosen revision as a surface under its traction-limit sheet, its slip heat map and the traction-safe draft. */
+/** The chosen revision as a surface under its traction-limit fence, its slip heat map and the traction-safe draft. */
 import { useQuery } from '@tanstack/react-query'
 import { api } from '@/app/_components/api-client'
 import type { OverlayChoice } from '@/app/_components/plots/overlay-controls'

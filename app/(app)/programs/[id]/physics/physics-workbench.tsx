@@ -1,7 +1,7 @@
 'use client'
 /**
  * The physics page body: which revision and conditions (kept in the URL), the traction table, the
- * map with its traction-limit sheet and slip heat map, and the launch or lift-off simulation.
+ * map with its traction-limit fence and slip heat map, and the launch or lift-off simulation.
  */
 import { OverlayControls } from '@/app/_components/plots/overlay-controls'
 import { UNITS } from '@/maps'

@@ -3,7 +3,7 @@ import os from 'node:os'
 import path from 'node:path'
 import { expect, test } from './fixtures'
 import { generateLog } from '../support/log-generator'
-import { DEMO, openMapByName, signIn } from './helpers'
+import { DEMO, fillDriveConditions, openMapByName, signIn } from './helpers'
 
 test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true })
 
@@ -17,12 +17,7 @@ test('a test driver on a phone files a report on a set with a flagged point and 
   await page.getByLabel('Set flashed').selectOption({ index: 1 })
   await expect(page.getByTestId('set-summary')).toContainText('Drive map: Site drive r')
   await expect(page.getByTestId('set-summary')).toContainText('checksum')
-  await page.getByLabel('Vehicle unit').fill('BX-07')
-  await page.getByLabel('Route or course').fill('Demo quarry, ramp 3')
-  await page.getByLabel('Road surface').selectOption('gravel')
-  await page.getByLabel('Weather').fill('damp')
-  await page.getByLabel('Ambient temperature (°C)').fill('5')
-  for (const r of ['Launch', 'Tip-in', 'Steady pedal control', 'Lift-off regen', 'Brake blending']) await page.getByLabel(`${r} 3`).check({ force: true })
+  await fillDriveConditions(page)
   // Tap the map cell where the truck spun, and say what happened.
   await page.getByRole('button', { name: 'Flag 60 % pedal at 3 km/h' }).tap()
   await page.getByLabel('What happened').fill('tandem spun on the ramp, empty')

@@ -106,12 +106,7 @@ export async function fileReportFromOverview(page: Page): Promise<number> {
   await expect(page).toHaveURL(/\/reports\/new\?set=\d+$/)
   // The set the link named is chosen: its summary shows, naming it.
   await expect(page.getByTestId('set-summary')).toContainText(`set ${setNumber}`)
-  await page.getByLabel('Vehicle unit').fill('BX-07')
-  await page.getByLabel('Route or course').fill('Demo quarry, ramp 3')
-  await page.getByLabel('Road surface').selectOption('gravel')
-  await page.getByLabel('Weather').fill('damp')
-  await page.getByLabel('Ambient temperature (°C)').fill('5')
-  for (const r of ['Launch', 'Tip-in', 'Steady pedal control', 'Lift-off regen', 'Brake blending']) await page.getByLabel(`${r} 3`).check({ force: true })
+  await fillDriveConditions(page)
   await page.getByRole('button', { name: 'File report' }).click()
   await expect(page.getByText('Report filed.')).toBeVisible()
   return Number(new URL(page.url()).pathname.split('/')[2])
@@ -120,4 +115,17 @@ export async function fileReportFromOverview(page: Page): Promise<number> {
 /** Where a guide's screenshot goes: docs/ when DOCS_SCREENSHOTS=1 (to refresh the guides), else test-results/. */
 export function docShot(name: string): string {
   return process.env.DOCS_SCREENSHOTS === '1' ? `docs/${name}` : `test-results/docs/${name}`
+}
+
+/** The report form's conditions and ratings (every rating the same), as a driver fills them after a drive. */
+export async function fillDriveConditions(
+  page: Page,
+  c = { unit: 'BX-07', route: 'Demo quarry, ramp 3', surface: 'gravel', weather: 'damp', tempC: '5', rating: 3 },
+) {
+  await page.getByLabel('Vehicle unit').fill(c.unit)
+  await page.getByLabel('Route or course').fill(c.route)
+  await page.getByLabel('Road surface').selectOption(c.surface)
+  await page.getByLabel('Weather').fill(c.weather)
+  await page.getByLabel('Ambient temperature (°C)').fill(c.tempC)
+  for (const r of ['Launch', 'Tip-in', 'Steady pedal control', 'Lift-off regen', 'Brake blending']) await page.getByLabel(`${r} ${c.rating}`).check({ force: true })
 }

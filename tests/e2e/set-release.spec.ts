@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto'
 import { expect, test } from './fixtures'
 import type { Page } from '@playwright/test'
 import { strFromU8, unzipSync } from 'fflate'
-import { DEMO, editAndSave, openMapByName, openReview, signedInPage, signIn } from './helpers'
+import { DEMO, editAndSave, fillDriveConditions, openMapByName, openReview, signedInPage, signIn } from './helpers'
 
 const sha256 = (b: Uint8Array) => createHash('sha256').update(b).digest('hex')
 
@@ -41,12 +41,7 @@ test('a set from build to frozen release: test package, a report from a phone, a
   await phone.getByTestId('file-report-link').tap()
   await expect(phone).toHaveURL(new RegExp(`/reports/new\\?set=${setId}$`))
   await expect(phone.getByTestId('set-summary')).toContainText(`Drive map: Road drive r${drive.n}`)
-  await phone.getByLabel('Vehicle unit').fill('BX-T4')
-  await phone.getByLabel('Route or course').fill('Demo test track, wet pad')
-  await phone.getByLabel('Road surface').selectOption('wet-asphalt')
-  await phone.getByLabel('Weather').fill('rain')
-  await phone.getByLabel('Ambient temperature (°C)').fill('6')
-  for (const r of ['Launch', 'Tip-in', 'Steady pedal control', 'Lift-off regen', 'Brake blending']) await phone.getByLabel(`${r} 4`).check({ force: true })
+  await fillDriveConditions(phone, { unit: 'BX-T4', route: 'Demo test track, wet pad', surface: 'wet-asphalt', weather: 'rain', tempC: '6', rating: 4 })
   expect(await phone.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390)
   await phone.getByRole('button', { name: 'File report' }).click()
   await expect(phone.getByText('Report filed.')).toBeVisible()

@@ -6,8 +6,11 @@ import { tableMemo } from './table-memo'
 const memo = tableMemo<Finding[]>(4)
 const jsonMemo = tableMemo<string>(4)
 
-/** What the findings depend on besides the table: the limits the parameters give. */
-const limitsKey = (params: VehicleParams) => JSON.stringify(limitsFromVehicle(params))
+/** What the findings depend on besides the table: the limits the parameters give, and their key. */
+function limitsOf(params: VehicleParams) {
+  const limits = limitsFromVehicle(params)
+  return { limits, key: JSON.stringify(limits) }
+}
 
 /**
  * Findings of a stored revision under a program's parameters. Both are immutable once stored (a
@@ -15,11 +18,12 @@ const limitsKey = (params: VehicleParams) => JSON.stringify(limitsFromVehicle(pa
  * the cached table, keyed by the limits the parameters give.
  */
 export function revisionFindings(table: MapTable, params: VehicleParams): Finding[] {
-  const limits = limitsFromVehicle(params)
-  return memo(table, JSON.stringify(limits), () => validate(table, limits))
+  const { limits, key } = limitsOf(params)
+  return memo(table, key, () => validate(table, limits))
 }
 
 /** The same findings as JSON text, memoised the same way (a map read splices it into its answer). */
 export function revisionFindingsJson(table: MapTable, params: VehicleParams): string {
-  return jsonMemo(table, limitsKey(params), () => JSON.stringify(revisionFindings(table, params)))
+  const { limits, key } = limitsOf(params)
+  return jsonMemo(table, key, () => JSON.stringify(memo(table, key, () => validate(table, limits))))
 }

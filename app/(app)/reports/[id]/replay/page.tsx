@@ -1,7 +1,7 @@
 import Link from 'next/link'
+import { notFound } from 'next/navigation'
 import { requirePageUser } from '@/app/_lib/auth/page-access'
 import { HttpError } from '@/app/_lib/http/errors'
-import { notFound } from 'next/navigation'
 import { idOrNull, pageId } from '@/app/_lib/http/page-params'
 import { getReport } from '@/db/queries/reports'
 import { replayReport, type ReplayAnswer } from '@/app/_lib/reports/replay'

@@ -19,7 +19,11 @@ function turbopackRoot(): string | undefined {
 const nextConfig: NextConfig = {
   // A second build folder lets a test run build and serve while another build uses .next.
   distDir: process.env.NEXT_DIST_DIR || '.next',
-  turbopack: { root: turbopackRoot() },
+  turbopack: {
+    root: turbopackRoot(),
+    // Plotly's trace registry imports the map library's stylesheet; the app registers no map trace.
+    resolveAlias: { 'maplibre-gl/dist/maplibre-gl.css': './app/_components/plots/no-map-styles.css' },
+  },
   // PGlite ships WASM and data files that must be loaded from node_modules at run time, not bundled.
   serverExternalPackages: ['@electric-sql/pglite', '@node-rs/argon2', 'pg'],
   poweredByHeader: false,

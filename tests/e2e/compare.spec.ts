@@ -1,6 +1,6 @@
 import { expect, test } from './fixtures'
 import type { Page } from '@playwright/test'
-import { DEMO, docShot, mapIdByName, signIn } from './helpers'
+import { DEMO, docShot, expectEveryTraceDrawable, mapIdByName, signIn } from './helpers'
 
 const PLOT_WAIT = 30_000
 
@@ -25,6 +25,7 @@ test.describe('comparing two revisions', () => {
     await expect(page.locator('.js-plotly-plot')).toHaveCount(5)
     await expect(page.locator('.js-plotly-plot .gl-container canvas').first()).toBeVisible()
     await expect(page.getByText('Difference B − A')).toBeVisible()
+    expect(await expectEveryTraceDrawable(page)).toEqual(expect.arrayContaining(['heatmap', 'surface']))
 
     // Revision 3 capped launch torque below 10 km/h: 13 cells, the 100 % / 0 km/h cell by 1,800 N·m first
     // (the demo tipper's 3,400 N·m envelope down to the 1,600 N·m cap; recomputed from db/demo/maps.ts).

@@ -129,3 +129,20 @@ export async function fillDriveConditions(
   await page.getByLabel('Ambient temperature (°C)').fill(c.tempC)
   for (const r of ['Launch', 'Tip-in', 'Steady pedal control', 'Lift-off regen', 'Brake blending']) await page.getByLabel(`${r} ${c.rating}`).check({ force: true })
 }
+
+/**
+ * Every trace of every figure on the page is drawn as the type it asked for, and the types drawn.
+ * The app's Plotly holds only the trace types it registers (app/_components/plots/plotly-component.ts);
+ * Plotly turns a trace of any other type into an empty scatter, without an error.
+ */
+export async function expectEveryTraceDrawable(page: Page): Promise<string[]> {
+  const traces = await page.evaluate(() =>
+    [...document.querySelectorAll('.js-plotly-plot')].flatMap((el) => {
+      const gd = el as unknown as { data?: { type?: string }[]; _fullData?: { type: string; index: number; _module?: unknown }[] }
+      return (gd._fullData ?? []).map((t) => ({ asked: gd.data?.[t.index]?.type ?? 'scatter', drawn: t.type, module: Boolean(t._module) }))
+    }),
+  )
+  expect(traces.length).toBeGreaterThan(0)
+  expect(traces.filter((t) => t.asked !== t.drawn || !t.module)).toEqual([])
+  return [...new Set(traces.map((t) => t.drawn))].sort()
+}

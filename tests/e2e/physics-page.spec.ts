@@ -1,5 +1,5 @@
 import { expect, test } from './fixtures'
-import { DEMO, signIn } from './helpers'
+import { DEMO, expectEveryTraceDrawable, signIn } from './helpers'
 
 test('a test driver runs a launch and a lift-off on the program physics page', async ({ page }) => {
   await signIn(page, DEMO.driver)
@@ -16,6 +16,7 @@ test('a test driver runs a launch and a lift-off on the program physics page', a
   await expect(summary).toContainText(/Time to 30 km\/h\s*\d+\.\d\d s/)
   await expect(summary).toContainText('Peak jerk')
   await expect(page.getByTestId('simulation-plots').locator('.js-plotly-plot')).toHaveCount(6, { timeout: 30_000 })
+  expect(await expectEveryTraceDrawable(page)).toEqual(expect.arrayContaining(['heatmap', 'scatter']))
   await expect(page.getByRole('button', { name: 'Propose a traction-safe draft' })).toHaveCount(0) // drivers do not edit
 
   await page.getByRole('combobox', { name: 'Map', exact: true }).selectOption({ label: 'Site regen (regen)' })

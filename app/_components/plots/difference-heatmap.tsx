@@ -5,7 +5,7 @@
  * with a few islands, which a flat map shows cell for cell (a 3-D surface of it is a plain with
  * spikes, and costs a WebGL figure of its own).
  */
-import type { Data } from 'plotly.js'
+import type { PlotTrace } from './trace-types'
 import { tableNumber, type MapTable, type UnitSet } from '@/maps'
 import { DIFF_SCALE } from './palette'
 import { Plot } from './plot'
@@ -26,7 +26,7 @@ export function DifferenceHeatmap({ delta, changed, units: u, title, filename }:
   const z = delta.values.map((row) => row.map(u.torqueOut))
   const zMax = Math.max(1, ...z.flat().map(Math.abs).filter(Number.isFinite))
   const text = z.map((row, r) => row.map((v, c) => (changed[r][c] ? tableNumber(v, 0) : '')))
-  const data: Data[] = [{
+  const data: PlotTrace[] = [{
     type: 'heatmap', x, y, z, text, texttemplate: '%{text}', textfont: { size: 10 },
     colorscale: DIFF_SCALE, zmin: -zMax, zmax: zMax, zmid: 0, xgap: 1, ygap: 1,
     colorbar: { title: { text: u.torque, side: 'right' }, thickness: 12 },

@@ -1,4 +1,4 @@
-import type { Data } from 'plotly.js'
+import type { PlotTrace } from './trace-types'
 import { LIMIT_COLOUR } from './palette'
 
 /**
@@ -7,7 +7,7 @@ import { LIMIT_COLOUR } from './palette'
  * see-through surface costs each figure extra drawing passes, which software WebGL (office machines
  * and virtual desktops without a GPU) pays in tenths of a second.
  */
-export function limitFence(x: number[], y: number[], limit: number[]): Data {
+export function limitFence(x: number[], y: number[], limit: number[]): PlotTrace {
   const [lo, hi] = [y[0], y[y.length - 1]]
   const fx: (number | null)[] = []
   const fy: (number | null)[] = []

@@ -3,7 +3,8 @@
  * entities). Names in this app are typed by people, so they reach a plot only as text: `<` and `&`
  * are written as entities, which Plotly shows literally. No React or Plotly import: unit-tested.
  */
-import type { Config, Data, Layout } from 'plotly.js'
+import type { Config, Layout } from 'plotly.js'
+import type { PlotTrace } from './trace-types'
 
 /** A person's text as Plotly shows it literally (no link, no markup). */
 export function plotText(s: string): string {
@@ -41,13 +42,13 @@ export function layoutAsText(layout: Partial<Layout>): Partial<Layout> {
 }
 
 /** Traces with their names and colour-bar titles made plain text. */
-export function dataAsText(data: Data[]): Data[] {
+export function dataAsText(data: PlotTrace[]): PlotTrace[] {
   return data.map((d) => {
     const t = { ...d } as Record<string, unknown>
     if (typeof t.name === 'string') t.name = plotText(t.name)
     const bar = t.colorbar as Titled
     if (bar?.title !== undefined) t.colorbar = withTitle(bar)
-    return t as Data
+    return t as PlotTrace
   })
 }
 

@@ -5,7 +5,8 @@
  * names are shown as text, never as Plotly's HTML subset (see plot-text.ts).
  */
 import dynamic from 'next/dynamic'
-import type { Data, Layout } from 'plotly.js'
+import type { Layout } from 'plotly.js'
+import type { PlotTrace } from './trace-types'
 import { dataAsText, layoutAsText, plotConfig } from './plot-text'
 
 /**
@@ -24,7 +25,7 @@ const PlotlyComponent = dynamic(() => import('./plotly-component'), {
 export type RelayoutEvent = Record<string, unknown>
 
 export interface PlotProps {
-  data: Data[]
+  data: PlotTrace[]
   layout: Partial<Layout>
   /** PNG file name (without extension) for the mode bar's download button. */
   filename: string

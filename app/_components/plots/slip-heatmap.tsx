@@ -5,7 +5,7 @@
  * colour saturates at the surface's peak slip, so "dark" means "close to the edge". The hover and
  * the caption add the lateral acceleration the drive axle can still hold in a curve (friction ellipse).
  */
-import type { Data } from 'plotly.js'
+import type { PlotTrace } from './trace-types'
 import type { MapTable } from '@/maps'
 import { SLIP_SCALE, SOLID_BEYOND } from './palette'
 import { Plot } from './plot'
@@ -42,7 +42,7 @@ export function SlipHeatmap({ table, overlay, units: u, title, filename, testId 
   const lat = overlay.lateralCapacityMps2
   const util = overlay.utilisation.map((row) => row.map((v) => `${Math.round(v * 100)} %`))
   const lateral = overlay.utilisation.map((row, r) => row.map((_, c) => (lat ? lat[r][c].toFixed(2) : '–')))
-  const data: Data[] = [
+  const data: PlotTrace[] = [
     {
       type: 'heatmap', x, y, z: overlay.slip, colorscale: SLIP_SCALE, zmin: 0, zmax: overlay.tyrePeakSlip ?? undefined,
       customdata: util,

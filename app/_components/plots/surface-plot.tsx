@@ -4,7 +4,8 @@
  * traction limit (the motor-shaft torque the drive axle can transmit at each speed) is drawn over it
  * as a fence of lines, so cells poking through the fence are the ones that would spin or lock.
  */
-import type { Data, Scene } from 'plotly.js'
+import type { Scene } from 'plotly.js'
+import type { PlotTrace } from './trace-types'
 import type { MapTable } from '@/maps'
 import { limitFence } from './limit-fence'
 import { TORQUE_SCALE } from './palette'
@@ -44,7 +45,7 @@ export function SurfacePlot(p: SurfacePlotProps) {
   const z = p.table.values.map((row) => row.map(u.torqueOut))
   const pedalWord = p.table.kind === 'regen' ? 'Brake pedal' : 'Pedal'
   const zLabel = `${p.table.kind === 'regen' ? 'Regen torque' : 'Torque'} (${u.torque})`
-  const data: Data[] = [
+  const data: PlotTrace[] = [
     {
       type: 'surface', x, y, z, name: p.title, colorscale: TORQUE_SCALE,
       ...(p.range ? { cmin: u.torqueOut(p.range.min), cmax: u.torqueOut(p.range.max) } : {}),

@@ -1,6 +1,6 @@
 'use client'
 /** Lines against time for the simulation results: one plot, one or two quantities sharing a unit. */
-import type { Data } from 'plotly.js'
+import type { PlotTrace } from './trace-types'
 import { Plot } from './plot'
 import { plotText } from './plot-text'
 
@@ -22,7 +22,7 @@ export interface TimePlotProps {
 }
 
 export function TimePlot({ t, lines, title, yLabel, filename, refs = [] }: TimePlotProps) {
-  const data: Data[] = lines.map((l) => ({
+  const data: PlotTrace[] = lines.map((l) => ({
     type: 'scatter', mode: 'lines', x: t, y: l.y, name: l.name, line: { color: l.colour, width: 2, dash: l.dash ?? 'solid' },
     hovertemplate: `%{x:.2f} s: %{y:.3~f}<extra>${plotText(l.name)}</extra>`,
   }))

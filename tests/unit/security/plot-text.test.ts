@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import type { Data, Layout } from 'plotly.js'
+import type { Layout } from 'plotly.js'
+import type { PlotTrace } from '@/app/_components/plots/trace-types'
 import { dataAsText, layoutAsText, plotConfig, plotText } from '@/app/_components/plots/plot-text'
 
 // Plotly's pseudo-HTML in titles: <a href>, <b>, <i>, <br>, <sup>, <sub>, <span style> and entities
@@ -40,7 +41,7 @@ describe('plot text', () => {
   })
 
   it('makes trace names and colour-bar titles plain text', () => {
-    const data = [{ type: 'surface', name: NAME, colorbar: { title: { text: NAME } } }] as Data[]
+    const data = [{ type: 'surface', name: NAME, colorbar: { title: { text: NAME } } }] as PlotTrace[]
     const [d] = dataAsText(data) as { name: string; colorbar: { title: { text: string } } }[]
     noTag(d.name)
     noTag(d.colorbar.title.text)

@@ -1,10 +1,11 @@
 'use client'
-import type { Data, Layout, Shape } from 'plotly.js'
+import type { Layout, Shape } from 'plotly.js'
+import type { PlotTrace } from '@/app/_components/plots/trace-types'
 import { Plot } from '@/app/_components/plots/plot'
 import type { AnalysisResult, SeriesChannel } from '@/physics'
 
 // Bucket maxima are plotted: a spike inside a bucket still shows (the series keeps min and max).
-const line = (t: number[], ch: SeriesChannel, name: string, yaxis: string, color: string): Data => ({
+const line = (t: number[], ch: SeriesChannel, name: string, yaxis: string, color: string): PlotTrace => ({
   x: t,
   y: ch.max,
   name,
@@ -18,7 +19,7 @@ const line = (t: number[], ch: SeriesChannel, name: string, yaxis: string, color
 /** Speed, pedals, torque and slip against time, with spin (orange) and lock-up (blue) events shaded. */
 export function LogTimePlot({ analysis: a }: { analysis: AnalysisResult }) {
   const s = a.series
-  const data: Data[] = [
+  const data: PlotTrace[] = [
     line(s.tS, s.roadSpeedKmh, 'Road speed (km/h)', 'y', '#0f6b5c'),
     line(s.tS, s.wheelSpeedKmh, 'Wheel speed (km/h)', 'y', '#8fb8ad'),
     line(s.tS, s.accelPedalPct, 'Accelerator (%)', 'y2', '#14202b'),

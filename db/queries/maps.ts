@@ -141,6 +141,7 @@ const mapWithRevisionSql = (revision: string) => `
   where m.id = $1`
 const MAP_WITH_LATEST_SQL = mapWithRevisionSql('(select max(x.number) from map_revisions x where x.map_id = m.id)')
 const MAP_WITH_REVISION_SQL = mapWithRevisionSql('$2')
+const MAP_WITH_TWO_REVISIONS_SQL = mapWithRevisionSql('any(array[$2::int, $3::int])')
 
 type Row = Record<string, unknown>
 const date = (v: unknown) => (v instanceof Date ? v : new Date(String(v)))
@@ -184,6 +185,18 @@ export async function getMapWithRevision(mapId: number, number?: number) {
     ? await executePrepared('map_with_latest', MAP_WITH_LATEST_SQL, [mapId])
     : await executePrepared('map_with_revision', MAP_WITH_REVISION_SQL, [mapId, number])
   return withTable(rows[0] && mapWithRevisionFromRow(rows[0]))
+}
+
+/**
+ * A map with two of its revisions (a diff on one map) in one round trip: null unless both exist;
+ * the two may be the same.
+ */
+export async function getMapWithRevisionPair(mapId: number, a: number, b: number) {
+  const rows = await executePrepared('map_with_two_revisions', MAP_WITH_TWO_REVISIONS_SQL, [mapId, a, b])
+  const [ra, rb] = [a, b].map((n) => rows.find((r) => r.number === n))
+  if (!ra || !rb) return null
+  const [sa, sb] = await Promise.all([withTable(mapWithRevisionFromRow(ra)), withTable(mapWithRevisionFromRow(rb))])
+  return sa && sb && { a: sa, b: sb }
 }
 
 /**

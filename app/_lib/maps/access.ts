@@ -1,6 +1,6 @@
 import 'server-only'
 import type { Db } from '@/db/client'
-import { getMap, getMapWithRevision, type MapWithProgram } from '@/db/queries/maps'
+import { getMap, getMapWithRevision, getMapWithRevisionPair, type MapWithProgram } from '@/db/queries/maps'
 import { getRevision, saveRevision, type Revision } from '@/db/queries/revisions'
 import type { MapTable } from '@/maps'
 import { ConflictError, NotFoundError, ValidationError } from '../http/errors'
@@ -33,6 +33,26 @@ export async function loadMapRevision(idParam: string | undefined, numberParam: 
   if (found) return found
   const map = await loadMap(idParam)
   return { map, revision: await loadRevision(map.id, numberParam) }
+}
+
+type MapRevision = Awaited<ReturnType<typeof loadMapRevision>>
+
+/**
+ * The two sides of a diff: revision `a` of map `idParam` and revision `b` of map `bMapParam` (the
+ * same map when absent). Two numbered revisions of one map come in one query; anything else, and
+ * any miss, goes through loadMapRevision for each side, so the errors are its own and A's is the
+ * one answered when both sides fail.
+ */
+export async function loadRevisionPair(idParam: string | undefined, aParam: string | undefined, bParam: string | undefined, bMapParam?: string): Promise<{ a: MapRevision; b: MapRevision }> {
+  if (!bMapParam || bMapParam === idParam) {
+    const [id, a, b] = [optionalInt(idParam), optionalInt(aParam), optionalInt(bParam)]
+    const pair = id !== null && a !== null && b !== null ? await getMapWithRevisionPair(id, a, b) : null
+    if (pair) return pair
+  }
+  const [ra, rb] = await Promise.allSettled([loadMapRevision(idParam, aParam), loadMapRevision(bMapParam || idParam, bParam)])
+  if (ra.status === 'rejected') throw ra.reason
+  if (rb.status === 'rejected') throw rb.reason
+  return { a: ra.value, b: rb.value }
 }
 
 function optionalInt(param: string | undefined): number | null {

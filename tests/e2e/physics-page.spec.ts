@@ -1,4 +1,5 @@
 import { expect, test } from './fixtures'
+import { expectAccessible } from './axe'
 import { DEMO, expectEveryTraceDrawable, signIn } from './helpers'
 
 test('a test driver runs a launch and a lift-off on the program physics page', async ({ page }) => {
@@ -25,4 +26,19 @@ test('a test driver runs a launch and a lift-off on the program physics page', a
   await page.getByRole('button', { name: 'Run lift-off' }).click()
   await expect(summary).toContainText(/Drive axle locks\s*yes/)
   await expect(page.getByTestId('slip-heatmap')).not.toHaveAttribute('data-spin-count', '0', { timeout: 30_000 })
+})
+
+test.describe('on a phone', () => {
+  test.use({ viewport: { width: 390, height: 844 }, isMobile: true })
+  test('the physics page fits the screen, and each battery corner table that scrolls sideways is reachable by keyboard', async ({ page }) => {
+    await signIn(page, DEMO.calib)
+    await page.goto('/programs')
+    const href = await page.getByRole('link', { name: 'BX-64 Tipper' }).first().getAttribute('href')
+    await page.goto(`${href}/physics`)
+    await expect(page.getByTestId('battery-corners')).toBeVisible()
+    await expect(page.getByTestId('slip-heatmap').locator('.main-svg').first()).toBeVisible({ timeout: 30_000 })
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390)
+    // A box that scrolls must take focus, or a keyboard user cannot scroll it (axe: scrollable-region-focusable).
+    await expectAccessible(page, 'the physics page on a phone')
+  })
 })

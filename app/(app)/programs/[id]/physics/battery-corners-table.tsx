@@ -21,7 +21,7 @@ export function BatteryCornersTable({ rows, minDecelMps2, hasTable }: { rows: Co
           <h3 className="font-semibold">
             {r.corner.label} <span className="font-normal text-slate-600">({r.corner.socPct} %, {r.corner.temperatureC} °C): charge {tableNumber(r.chargeKW, 0)} kW, discharge {tableNumber(r.dischargeKW, 0)} kW; drive torque at {DRIVE_CHECK_KMH} km/h {tableNumber(r.driveEnvelopeNm, 0)} N·m (nominal {tableNumber(r.nominalDriveEnvelopeNm, 0)})</span>
           </h3>
-          <div className="overflow-x-auto">
+          <div className="overflow-x-auto" tabIndex={0} role="region" aria-label={`Lift-off deceleration at ${r.corner.label}`}>
             <table className="w-full text-sm tabular-nums">
               <thead className="text-left text-xs uppercase text-slate-500">
                 <tr>

@@ -9,7 +9,7 @@ import { getHandle } from './client'
  */
 type Row = Record<string, unknown>
 interface PgPool { query: (q: { name: string; text: string; values: unknown[] }) => Promise<{ rows: Row[] }> }
-interface Pglite { exec: (sql: string) => Promise<unknown>; query: (sql: string) => Promise<{ rows: Row[] }> }
+interface Pglite { exec: (sql: string) => Promise<{ rows: Row[] }[]> }
 
 // On globalThis: Next loads route handlers and pages as separate module copies, which share one
 // PGlite session, and a statement can be prepared only once per session.
@@ -41,5 +41,9 @@ export async function executePrepared(name: string, text: string, args: number[]
     named.set(name, ready)
   }
   await ready
-  return (await pg.query(`execute ${name} (${args.join(', ')})`)).rows
+  // The simple protocol (exec): query() sends parse, describe, bind and execute for every call, which
+  // made a map read's EXECUTE ≈ 0.23 ms against ≈ 0.15 ms; the rows and their types are the same
+  // (tests/integration/revisions/revision-cache.test.ts). The arguments are checked integers, written as literals.
+  const [result] = await pg.exec(`execute ${name} (${args.join(', ')})`)
+  return result.rows
 }

@@ -89,6 +89,17 @@ describe('prepared statements', () => {
     expect(await executePrepared('twice_prepared', 'select $1::int + 1 as n', [1])).toEqual([{ n: 2 }])
   })
 
+  it('gives rows with the same values and types as an ordinary query (PGlite runs EXECUTE through its simple protocol)', async () => {
+    // Against the same driver's own ordinary query (drizzle's execute keeps timestamps as text on PGlite).
+    const client = ((await getHandle()).db as unknown as { $client: { query: (q: string) => Promise<{ rows: unknown[] }> } }).$client
+    const text = `select $1::int as n, $1::bigint as big, timestamptz '2026-01-02 03:04:05+00' as t, '{"a":[1,null]}'::jsonb as j,
+      null::int as z, 'x''y'::text as s, true as b, 2.5::float8 as f, 1.25::numeric as dec, array[1,2]::int[] as arr`
+    const prepared = await executePrepared('typed_row', text, [7])
+    expect(prepared).toEqual((await client.query(text.replaceAll('$1', '7'))).rows)
+    expect(prepared[0].t).toBeInstanceOf(Date)
+    expect(prepared[0].j).toEqual({ a: [1, null] })
+  })
+
   it('refuses arguments that are not integers and names that are not plain words', async () => {
     await expect(executePrepared('some_name', 'select $1', [1.5])).rejects.toThrow(/arguments must be integers, got 1.5/)
     await expect(executePrepared('x; drop table maps', 'select 1', [])).rejects.toThrow(/lower-case letters and _/)

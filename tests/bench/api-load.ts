@@ -1,6 +1,6 @@
 /**
  * API under load: the production server on 127.0.0.1 (fresh demo database on PGlite), signed in as
- * the demo calibration engineer, driven by autocannon with a request cap and a time cap per run:
+ * the demo calibration engineer, driven by autocannon: each read for a fixed time, the saves to a count:
  * GET /api/maps/:id, GET /api/maps/:id/diff?a=1&b=2, and sequential POST /api/maps/:id/revisions
  * with the parent number kept current (one connection). The framework's own ceiling is measured in
  * the same server and run: GET /api/session, a signed-in route with the same session check and no

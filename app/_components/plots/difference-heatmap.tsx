@@ -6,6 +6,7 @@
  * spikes, and costs a WebGL figure of its own).
  */
 import type { PlotTrace } from './trace-types'
+import { mapGridLayout } from './figure-layout'
 import { tableNumber, type MapTable, type UnitSet } from '@/maps'
 import { DIFF_SCALE } from './palette'
 import { Plot } from './plot'
@@ -37,12 +38,7 @@ export function DifferenceHeatmap({ delta, changed, units: u, title, filename }:
       filename={filename}
       height={400}
       data={data}
-      layout={{
-        title: { text: title, font: { size: 14 }, x: 0.01, xanchor: 'left' },
-        xaxis: { title: { text: `Road speed (${u.speed})` }, type: 'category' },
-        yaxis: { title: { text: `${delta.kind === 'regen' ? 'Brake pedal' : 'Pedal'} (%)` }, type: 'category' },
-        margin: { l: 64, r: 16, t: 36, b: 48 },
-      }}
+      layout={mapGridLayout(title, delta.kind, u)}
     />
   )
 }

@@ -6,6 +6,7 @@
  * the caption add the lateral acceleration the drive axle can still hold in a curve (friction ellipse).
  */
 import type { PlotTrace } from './trace-types'
+import { mapGridLayout } from './figure-layout'
 import type { MapTable } from '@/maps'
 import { SLIP_SCALE, SOLID_BEYOND } from './palette'
 import { Plot } from './plot'
@@ -64,12 +65,7 @@ export function SlipHeatmap({ table, overlay, units: u, title, filename, testId 
         filename={filename}
         height={360}
         data={data}
-        layout={{
-          title: { text: title, font: { size: 14 }, x: 0.01, xanchor: 'left' },
-          xaxis: { title: { text: `Road speed (${u.speed})` }, type: 'category' },
-          yaxis: { title: { text: `${table.kind === 'regen' ? 'Brake pedal' : 'Pedal'} (%)` }, type: 'category' },
-          margin: { l: 64, r: 16, t: 36, b: 48 },
-        }}
+        layout={mapGridLayout(title, table.kind, u)}
       />
       <figcaption className="text-sm text-slate-700" data-testid={`${testId}-caption`}>
         {overlay.spinCount === 0

@@ -6,6 +6,7 @@
  */
 import type { Scene } from 'plotly.js'
 import type { PlotTrace } from './trace-types'
+import { figureTitle } from './figure-layout'
 import type { MapTable } from '@/maps'
 import { limitFence } from './limit-fence'
 import { TORQUE_SCALE } from './palette'
@@ -62,7 +63,7 @@ export function SurfacePlot(p: SurfacePlotProps) {
       data={data}
       onRelayout={(e) => { const c = cameraOf(e); if (c && p.onCamera) p.onCamera(c) }}
       layout={{
-        title: { text: p.title, font: { size: 14 }, x: 0.01, xanchor: 'left' },
+        title: figureTitle(p.title),
         margin: { l: 0, r: 0, t: 36, b: 0 },
         showlegend: false,
         scene: {

@@ -1,6 +1,7 @@
 'use client'
 /** Lines against time for the simulation results: one plot, one or two quantities sharing a unit. */
 import type { PlotTrace } from './trace-types'
+import { figureTitle } from './figure-layout'
 import { Plot } from './plot'
 import { plotText } from './plot-text'
 
@@ -32,7 +33,7 @@ export function TimePlot({ t, lines, title, yLabel, filename, refs = [] }: TimeP
       height={260}
       data={data}
       layout={{
-        title: { text: title, font: { size: 13 }, x: 0.01, xanchor: 'left' },
+        title: figureTitle(title, 13),
         xaxis: { title: { text: 'Time (s)' }, zeroline: false, gridcolor: '#eceee8' },
         yaxis: { title: { text: yLabel }, gridcolor: '#eceee8' },
         legend: { x: 0.99, xanchor: 'right', y: 0.04, yanchor: 'bottom', bgcolor: 'rgba(255,255,255,0.75)' },

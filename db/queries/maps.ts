@@ -2,6 +2,7 @@ import { and, asc, eq, sql } from 'drizzle-orm'
 import type { MapTable } from '../../maps'
 import { getDb } from '../client'
 import { executePrepared } from '../prepared'
+import { SNAPSHOT_SQL, type SnapshotRead } from '../snapshot-cache'
 import type { RevisionState } from '../../domain/revision-states'
 import type { VehicleParams } from '../../physics/vehicle'
 import { mapRevisions, maps, users, vehiclePrograms, type ReleaseConditions } from '../schema'
@@ -133,7 +134,7 @@ const mapWithRevisionSql = (revision: string) => `
     (select max(pv.number)::int from param_versions pv where pv.program_id = p.id) as program_param_version,
     p.params as program_params, p.release_conditions as program_release_conditions, m.created_at,
     r.id as revision_id, r.map_id as revision_map_id, r.number, r.parent_id, r.author_id, u.name as author_name,
-    r.message, r.notes, r.checksum, r.state, r.created_at as revision_created_at
+    r.message, r.notes, r.checksum, r.state, r.created_at as revision_created_at, ${SNAPSHOT_SQL} as snapshot
   from maps m
   join vehicle_programs p on p.id = m.program_id
   join map_revisions r on r.map_id = m.id and r.number = ${revision}
@@ -205,6 +206,16 @@ export async function getMapWithRevisionPair(mapId: number, a: number, b: number
  * joins are inner. Null when the map does not exist.
  */
 export async function getMapWithLatest(id: number) {
-  const found = await getMapWithRevision(id)
-  return found && { map: found.map, latest: found.revision }
+  const read = await readMapWithLatest(id)
+  return read && read.value
+}
+
+type MapRevisionRow = ReturnType<typeof mapWithRevisionFromRow>
+export type MapWithLatest = { map: MapRevisionRow['map']; latest: MapRevisionRow['revision'] & { table: MapTable } }
+
+/** getMapWithLatest with the database snapshot its query saw, for a SnapshotCache. */
+export async function readMapWithLatest(id: number): Promise<SnapshotRead<MapWithLatest> | null> {
+  const [row] = await executePrepared('map_with_latest', MAP_WITH_LATEST_SQL, [id])
+  const found = await withTable(row && mapWithRevisionFromRow(row))
+  return found && { snapshot: row.snapshot as string, value: { map: found.map, latest: found.revision } }
 }

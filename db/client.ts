@@ -2,6 +2,7 @@ import path from 'node:path'
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core'
 import * as schema from './schema'
 import { lockDataDir } from './lock'
+import { startChangeFeed, type ChangeCount } from './change-feed'
 
 export type Db = PgDatabase<PgQueryResultHKT, typeof schema>
 
@@ -9,6 +10,8 @@ interface Handle {
   db: Db
   close: () => Promise<void>
   kind: 'pglite' | 'postgres'
+  /** PGlite only: committed writes counted by the database (db/change-feed.ts). */
+  changes?: ChangeCount
 }
 
 // One instance per process, on globalThis: Next loads route handlers and pages as separate module
@@ -38,9 +41,11 @@ async function openPglite(): Promise<Handle> {
     await migrate(db, { migrationsFolder })
     // PGlite has no autovacuum, so its planner never learns table sizes; refresh the statistics once per open.
     await client.exec('analyze')
+    const changes = await startChangeFeed(client)
     return {
       db,
       kind: 'pglite',
+      changes,
       close: async () => {
         await client.close()
         release()

@@ -21,35 +21,57 @@ export interface SnapshotRead<V> {
   value: V
 }
 
+interface Kept<V> extends SnapshotRead<V> {
+  /** PGlite's count of committed writes taken before the query that last confirmed this entry. */
+  changes: number | undefined
+}
+
 /**
  * Answers computed from the database, kept until anything in the database changes: a hit costs one
  * snapshot query instead of the read, and is exact (no time-to-live, no invalidation to forget),
- * on one server or several sharing the database. A value is kept with the snapshot its own query
- * saw, so a write landing between the check and the read can only make the entry look older than
- * it is (a miss next time), never newer. Bounded per database handle (tests open one per file, and
- * two fresh databases can have equal snapshots): the least recently used key goes first.
+ * on one server or several sharing the database. On PGlite a hit costs no query at all while the
+ * database's own count of committed writes (db/change-feed.ts) is where it was when the entry was
+ * last confirmed; once it moves, the snapshot decides.
+ * A value is kept with the snapshot its own query saw, and with the write count taken before that
+ * query was sent, so a write that lands between the check and storing the answer can only make the
+ * entry look older than it is (a miss next time), never newer. Bounded per database handle (tests
+ * open one per file, and two fresh databases can have equal snapshots): the least recently used key
+ * goes first. Never call it inside a transaction: its queries run on their own connection.
  */
 export class SnapshotCache<K, V> {
   hits = 0
   misses = 0
+  /** Snapshot queries asked (on PGlite, only after a write). */
+  checks = 0
 
   constructor(
     private readonly name: string,
     private readonly maxEntries: number,
   ) {}
 
-  /** The value for `key` as of now: the kept one while the snapshot is unchanged, else `read()`'s (kept unless null). */
+  /** The value for `key` as of now: the kept one while nothing was written since, else `read()`'s (kept unless null). */
   async get(key: K, read: () => Promise<SnapshotRead<V> | null>): Promise<V | null> {
-    const entries = lruFor<K, SnapshotRead<V>>(await getHandle(), this.name, this.maxEntries)
+    const handle = await getHandle()
+    const entries = lruFor<K, Kept<V>>(handle, this.name, this.maxEntries)
+    // Taken before any query of this call: a write counted later is one this call's answer may not show.
+    const changes = handle.changes?.count
     const kept = entries.get(key)
-    // Checked on every call, never skipped for a while: a caller that has just written must see its write.
-    if (kept && kept.snapshot === (await currentSnapshot())) {
-      this.hits++
-      return kept.value
+    if (kept) {
+      if (changes !== undefined && kept.changes === changes) {
+        this.hits++
+        return kept.value
+      }
+      // Checked on every call, never skipped for a while: a caller that has just written must see its write.
+      this.checks++
+      if (kept.snapshot === (await currentSnapshot())) {
+        kept.changes = changes
+        this.hits++
+        return kept.value
+      }
     }
     this.misses++
     const fresh = await read()
-    if (fresh) entries.set(key, fresh)
+    if (fresh) entries.set(key, { ...fresh, changes })
     return fresh?.value ?? null
   }
 }

@@ -6,7 +6,10 @@ import { describe, expect, it } from 'vitest'
 import { sql } from 'drizzle-orm'
 import * as mapRoute from '@/app/api/maps/[id]/route'
 import { mapReadBody, mapReads } from '@/app/_lib/maps/map-read-json'
-import { getDb } from '@/db/client'
+import { getDb, getHandle } from '@/db/client'
+import { tablesWithoutChangeTrigger } from '@/db/change-feed'
+import { maps } from '@/db/schema'
+import { eq } from 'drizzle-orm'
 import { readMapWithLatest } from '@/db/queries/maps'
 import { getProgram, updateProgram } from '@/db/queries/programs'
 import { getRevision } from '@/db/queries/revisions'
@@ -135,6 +138,54 @@ describe('map read kept until the database changes', () => {
     await readMap(driveId)
     await writeElsewhere(`delete from map_revisions where map_id = ${Number(driveId)}; delete from maps where id = ${Number(driveId)}`)
     expect((await call(mapRoute.GET, { cookie, params: { id: driveId } })).status).toBe(404)
+  })
+})
+
+const onPglite = !process.env.DATABASE_URL
+
+describe.runIf(onPglite)('PGlite change feed', () => {
+  it('puts its trigger on every table of the schema', async () => {
+    const h = await getHandle()
+    expect(await tablesWithoutChangeTrigger((h.db as unknown as { $client: Parameters<typeof tablesWithoutChangeTrigger>[0] }).$client)).toEqual([])
+  })
+
+  it('counts a committed write by the time the writer has its answer, whichever way it was written; not a read, a write of no row or a rollback', async () => {
+    const { driveId } = await tipperWithMaps()
+    const h = await getHandle()
+    const db = h.db
+    const raw = (db as unknown as { $client: { exec: (s: string) => Promise<unknown>; query: (s: string) => Promise<unknown> } }).$client
+    const count = () => h.changes!.count
+    const id = Number(driveId)
+    const writes: [string, () => Promise<unknown>][] = [
+      ['query builder', () => db.update(maps).set({ description: 'a' }).where(eq(maps.id, id))],
+      ['transaction', () => db.transaction(async (tx) => { await tx.update(maps).set({ description: 'b' }).where(eq(maps.id, id)) })],
+      ['raw exec', () => raw.exec(`update maps set description = 'c' where id = ${id}`)],
+      ['raw query', () => raw.query(`update maps set description = 'd' where id = ${id}`)],
+    ]
+    for (const [how, write] of writes) {
+      const before = count()
+      await write()
+      expect(count(), how).toBeGreaterThan(before)
+    }
+    const before = count()
+    await db.select().from(maps).where(eq(maps.id, id))
+    await currentSnapshot()
+    await db.update(maps).set({ description: 'e' }).where(eq(maps.id, -1)) // changes no row
+    await db.transaction(async (tx) => { await tx.update(maps).set({ description: 'rolled back' }).where(eq(maps.id, id)); tx.rollback() }).catch(() => {})
+    await Promise.resolve()
+    expect(count()).toBe(before)
+  })
+
+  it('answers a repeated map read with no query at all, and asks for the snapshot once after a write', async () => {
+    const { driveId } = await tipperWithMaps()
+    await readMap(driveId)
+    const [checks, misses] = [mapReads.checks, mapReads.misses]
+    for (let i = 0; i < 5; i++) await readMap(driveId)
+    expect([mapReads.checks - checks, mapReads.misses - misses]).toEqual([0, 0])
+    await (await getDb()).execute(sql`update users set name = name where id = ${(await tipperWithMaps()).author.id}`) // a write the read does not show
+    await readMap(driveId)
+    await readMap(driveId)
+    expect(mapReads.checks - checks).toBe(1)
   })
 })
 

@@ -141,7 +141,8 @@ describe('map read kept until the database changes', () => {
   })
 })
 
-const onPglite = !process.env.DATABASE_URL
+// TEST_DATABASE_URL, not DATABASE_URL: the setup sets DATABASE_URL in beforeAll, after this file's tests are collected.
+const onPglite = !process.env.TEST_DATABASE_URL
 
 describe.runIf(onPglite)('PGlite change feed', () => {
   it('puts its trigger on every table of the schema', async () => {
@@ -186,6 +187,17 @@ describe.runIf(onPglite)('PGlite change feed', () => {
     await readMap(driveId)
     await readMap(driveId)
     expect(mapReads.checks - checks).toBe(1)
+  })
+})
+
+describe.runIf(!onPglite)('on PostgreSQL', () => {
+  it('asks for the snapshot on every repeated read: other servers write without telling this one', async () => {
+    const { driveId } = await tipperWithMaps()
+    expect((await getHandle()).changes).toBeUndefined()
+    await readMap(driveId)
+    const [checks, hits] = [mapReads.checks, mapReads.hits]
+    for (let i = 0; i < 3; i++) await readMap(driveId)
+    expect([mapReads.checks - checks, mapReads.hits - hits]).toEqual([3, 3])
   })
 })
 
